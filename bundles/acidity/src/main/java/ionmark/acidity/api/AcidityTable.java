@@ -1,0 +1,70 @@
+package ionmark.acidity.api;
+
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * One immutable snapshot of the shared pKa table. Safe to share between threads; a change to the
+ * table is a new snapshot, never a mutation of this one.
+ */
+public final class AcidityTable {
+    private final TableVersion version;
+    private final List<Reference> references;
+    private final List<GroupClass> groups;
+    private final List<Substituent> substituents;
+    private final List<MeasuredCompound> measured;
+    private final SiteInteraction interaction;
+    private final Map<String, Reference> referenceIndex;
+    private final Map<String, GroupClass> groupIndex;
+
+    public AcidityTable(TableVersion version, List<Reference> references, List<GroupClass> groups,
+            List<Substituent> substituents, List<MeasuredCompound> measured, SiteInteraction interaction) {
+        this.version = Objects.requireNonNull(version, "version");
+        this.references = List.copyOf(references);
+        this.groups = List.copyOf(groups);
+        this.substituents = List.copyOf(substituents);
+        this.measured = List.copyOf(measured);
+        this.interaction = Objects.requireNonNull(interaction, "interaction");
+        var r = new LinkedHashMap<String, Reference>();
+        this.references.forEach(x -> r.putIfAbsent(x.id(), x));
+        this.referenceIndex = Map.copyOf(r);
+        var g = new LinkedHashMap<String, GroupClass>();
+        this.groups.forEach(x -> g.putIfAbsent(x.id(), x));
+        this.groupIndex = Map.copyOf(g);
+    }
+
+    public TableVersion version() { return version; }
+    public List<Reference> references() { return references; }
+    public List<GroupClass> groups() { return groups; }
+    public List<Substituent> substituents() { return substituents; }
+    public List<MeasuredCompound> measured() { return measured; }
+    public SiteInteraction interaction() { return interaction; }
+
+    public Optional<GroupClass> group(String id) {
+        return Optional.ofNullable(groupIndex.get(id));
+    }
+
+    /** The full citation for a reference id, or the id itself when it is unknown. */
+    public String citation(String referenceId) {
+        Reference r = referenceIndex.get(referenceId);
+        return r == null ? referenceId : r.citation();
+    }
+
+    /** A copy with other version metadata (content unchanged). */
+    public AcidityTable withVersion(TableVersion v) {
+        return new AcidityTable(v, references, groups, substituents, measured, interaction);
+    }
+
+    /** A copy with other group classes (used by calibration and by admin drafts). */
+    public AcidityTable withGroups(List<GroupClass> g) {
+        return new AcidityTable(version, references, g, substituents, measured, interaction);
+    }
+
+    /** A copy with other references. */
+    public AcidityTable withReferences(List<Reference> r) {
+        return new AcidityTable(version, r, groups, substituents, measured, interaction);
+    }
+}

@@ -1,0 +1,47 @@
+package ionmark.acidity.api;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * How strongly two charged sites shift each other, in pKa units, as a function of the number of
+ * bonds between them: like charges destabilise, opposite charges stabilise, by the same amount.
+ *
+ * @param shifts  pairs {@code [bonds, pKa units]} in ascending bond count
+ * @param decay   factor per further bond beyond the last tabulated distance
+ * @param cutoff  interactions below this (pKa units) are treated as zero when clustering sites
+ * @param source  reference id
+ */
+public record SiteInteraction(List<double[]> shifts, double decay, double cutoff, String source) {
+
+    public SiteInteraction {
+        shifts = shifts == null ? List.of() : shifts.stream().map(double[]::clone).toList();
+    }
+
+    /** Interaction in pKa units between two unit charges {@code bonds} apart (0 when no bond path). */
+    public double at(int bonds) {
+        if (bonds <= 0 || shifts.isEmpty()) {
+            return 0.0;
+        }
+        double last = 0;
+        int lastBonds = 0;
+        for (double[] s : shifts) {
+            if ((int) s[0] == bonds) {
+                return s[1];
+            }
+            if (s[0] > bonds) {
+                return s[1];
+            }
+            last = s[1];
+            lastBonds = (int) s[0];
+        }
+        return last * Math.pow(decay, bonds - lastBonds);
+    }
+
+    /** The shifts as an immutable map, for display. */
+    public Map<Integer, Double> asMap() {
+        var m = new java.util.TreeMap<Integer, Double>();
+        shifts.forEach(s -> m.put((int) s[0], s[1]));
+        return java.util.Collections.unmodifiableMap(m);
+    }
+}

@@ -1,0 +1,389 @@
+package ionmark.acidity.internal;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.MeasuredCompound;
+import ionmark.acidity.api.Problem;
+import ionmark.acidity.api.Reference;
+import ionmark.acidity.api.Relation;
+import ionmark.acidity.api.SiteInteraction;
+import ionmark.acidity.api.SiteType;
+import ionmark.acidity.api.Substituent;
+import ionmark.acidity.api.TableVersion;
+
+/**
+ * Reads and writes the table's JSON text. Reading is lenient about what it can skip and records a
+ * {@link Problem} with its JSON path for everything it cannot read; the validator adds the checks
+ * that need chemistry. Writing is canonical: fixed key order, one record per line.
+ */
+final class TableCodec {
+    static final String FORMAT = "ionmark-acidity-table/1";
+    private static final ObjectMapper JSON = new ObjectMapper();
+    /** One record per line, with a space after colons and commas so that diffs read well. */
+    private static final com.fasterxml.jackson.core.util.MinimalPrettyPrinter ONE_LINE =
+            new com.fasterxml.jackson.core.util.MinimalPrettyPrinter() {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                public void writeObjectFieldValueSeparator(com.fasterxml.jackson.core.JsonGenerator g)
+                        throws java.io.IOException {
+                    g.writeRaw(": ");
+                }
+
+                @Override
+                public void writeObjectEntrySeparator(com.fasterxml.jackson.core.JsonGenerator g)
+                        throws java.io.IOException {
+                    g.writeRaw(", ");
+                }
+
+                @Override
+                public void writeArrayValueSeparator(com.fasterxml.jackson.core.JsonGenerator g)
+                        throws java.io.IOException {
+                    g.writeRaw(", ");
+                }
+            };
+
+    private TableCodec() {
+    }
+
+    /** The result of reading: the table (when the shape allowed it) and the problems met. */
+    record Read(AcidityTable table, JsonNode tree, List<Problem> problems) {
+    }
+
+    static Read read(String text) {
+        List<Problem> problems = new ArrayList<>();
+        if (text == null || text.isBlank()) {
+            problems.add(error("$", "the table text is empty"));
+            return new Read(null, null, problems);
+        }
+        JsonNode root;
+        try {
+            root = JSON.readTree(text);
+        } catch (JsonProcessingException e) {
+            var loc = e.getLocation();
+            problems.add(error("$", "not valid JSON at line " + (loc == null ? "?" : loc.getLineNr()) + ", column "
+                    + (loc == null ? "?" : loc.getColumnNr()) + ": " + e.getOriginalMessage()));
+            return new Read(null, null, problems);
+        }
+        if (!root.isObject()) {
+            problems.add(error("$", "the table must be a JSON object"));
+            return new Read(null, root, problems);
+        }
+        Fields f = new Fields(problems);
+        if (!FORMAT.equals(root.path("format").asText())) {
+            problems.add(error("$.format", "format must be \"" + FORMAT + "\""));
+        }
+        TableVersion version = readVersion(root.path("version"), f);
+        List<Reference> refs = new ArrayList<>();
+        each(root, "references", f, (n, p) -> refs.add(new Reference(f.text(n, p, "id"), f.text(n, p, "citation"))));
+        List<GroupClass> groups = new ArrayList<>();
+        each(root, "groups", f, (n, p) -> groups.add(readGroup(n, p, f)));
+        List<Substituent> subs = new ArrayList<>();
+        each(root, "substituents", f, (n, p) -> subs.add(readSubstituent(n, p, f)));
+        List<MeasuredCompound> measured = new ArrayList<>();
+        each(root, "measured", f, (n, p) -> measured.add(readMeasured(n, p, f)));
+        SiteInteraction interaction = readInteraction(root.path("interaction"), "$.interaction", f);
+        AcidityTable table = new AcidityTable(version, refs, groups, subs, measured, interaction);
+        return new Read(table, root, problems);
+    }
+
+    private interface RecordReader {
+        void read(JsonNode node, String path);
+    }
+
+    private static void each(JsonNode root, String key, Fields f, RecordReader r) {
+        JsonNode arr = root.path(key);
+        if (!arr.isArray()) {
+            f.problems.add(error("$." + key, "a list of records is required here"));
+            return;
+        }
+        for (int i = 0; i < arr.size(); i++) {
+            String path = "$." + key + "[" + i + "]";
+            if (!arr.get(i).isObject()) {
+                f.problems.add(error(path, "each record must be a JSON object"));
+                continue;
+            }
+            r.read(arr.get(i), path);
+        }
+    }
+
+    private static TableVersion readVersion(JsonNode n, Fields f) {
+        if (!n.isObject()) {
+            f.problems.add(error("$.version", "version metadata is required"));
+            return new TableVersion(0, "", "", "", "", 0);
+        }
+        return new TableVersion(n.path("number").asInt(0), n.path("author").asText(""), n.path("time").asText(""),
+                n.path("comment").asText(""), n.path("hash").asText(""), n.path("parent").asInt(0));
+    }
+
+    private static GroupClass readGroup(JsonNode n, String p, Fields f) {
+        SiteType type = SiteType.ACID;
+        try {
+            type = SiteType.parse(f.text(n, p, "type"));
+        } catch (IllegalArgumentException e) {
+            f.problems.add(error(p + ".type", e.getMessage()));
+        }
+        Relation rel = Relation.NONE;
+        try {
+            rel = Relation.parse(n.path("relation").asText("none"));
+        } catch (IllegalArgumentException e) {
+            f.problems.add(error(p + ".relation", e.getMessage()));
+        }
+        return new GroupClass(f.text(n, p, "id"), f.text(n, p, "name"), f.text(n, p, "smarts"), type,
+                f.number(n, p, "pka", false), rel, f.number(n, p, "rho", false), f.number(n, p, "attenuation", false),
+                n.path("resonance").asText("p"), f.number(n, p, "enthalpy", false), f.number(n, p, "sd", true),
+                n.path("permanent").asBoolean(false), sources(n, p, f), n.path("note").asText(""),
+                f.strings(n, p, "matches"), f.strings(n, p, "misses"));
+    }
+
+    private static Substituent readSubstituent(JsonNode n, String p, Fields f) {
+        return new Substituent(f.text(n, p, "id"), f.text(n, p, "name"), f.text(n, p, "smarts"),
+                f.number(n, p, "sigmaMeta", false), f.number(n, p, "sigmaPara", false),
+                f.number(n, p, "sigmaParaMinus", false), f.number(n, p, "sigmaParaPlus", false),
+                f.number(n, p, "sigmaI", false), sources(n, p, f));
+    }
+
+    private static MeasuredCompound readMeasured(JsonNode n, String p, Fields f) {
+        List<Double> pka = new ArrayList<>();
+        JsonNode arr = n.path("pka");
+        if (!arr.isArray() || arr.isEmpty()) {
+            f.problems.add(error(p + ".pka", "a list of at least one measured pKa is required"));
+        } else {
+            for (int i = 0; i < arr.size(); i++) {
+                if (!arr.get(i).isNumber()) {
+                    f.problems.add(error(p + ".pka[" + i + "]", "must be a number"));
+                } else {
+                    pka.add(arr.get(i).asDouble());
+                }
+            }
+        }
+        return new MeasuredCompound(f.text(n, p, "id"), n.path("name").asText(""), f.text(n, p, "smiles"), pka,
+                n.path("temperature").asDouble(25.0), n.path("ionicStrength").asDouble(0.0),
+                n.path("method").asText(""), n.path("source").asText(""), f.strings(n, p, "groups"));
+    }
+
+    private static SiteInteraction readInteraction(JsonNode n, String p, Fields f) {
+        if (!n.isObject()) {
+            f.problems.add(error(p, "site-interaction parameters are required"));
+            return new SiteInteraction(List.of(), 0.5, 0.05, "");
+        }
+        List<double[]> shifts = new ArrayList<>();
+        JsonNode arr = n.path("shifts");
+        for (int i = 0; i < arr.size(); i++) {
+            JsonNode e = arr.get(i);
+            if (!e.isArray() || e.size() != 2 || !e.get(0).isNumber() || !e.get(1).isNumber()) {
+                f.problems.add(error(p + ".shifts[" + i + "]", "each shift is [bonds, pKa units]"));
+                continue;
+            }
+            shifts.add(new double[] {e.get(0).asDouble(), e.get(1).asDouble()});
+        }
+        return new SiteInteraction(shifts, f.number(n, p, "decay", true), f.number(n, p, "cutoff", true),
+                n.path("source").asText(""));
+    }
+
+    private static Map<String, String> sources(JsonNode n, String p, Fields f) {
+        Map<String, String> m = new TreeMap<>();
+        JsonNode s = n.path("sources");
+        if (s.isMissingNode()) {
+            return m;
+        }
+        if (!s.isObject()) {
+            f.problems.add(error(p + ".sources", "sources must map a field name to a reference id"));
+            return m;
+        }
+        s.fields().forEachRemaining(e -> m.put(e.getKey(), e.getValue().asText("")));
+        return m;
+    }
+
+    /** Small helpers that read a field and record a problem when it is missing or of the wrong kind. */
+    private record Fields(List<Problem> problems) {
+        String text(JsonNode n, String p, String key) {
+            JsonNode v = n.get(key);
+            if (v == null || !v.isTextual() || v.asText().isBlank()) {
+                problems.add(error(p + "." + key, "text is required here"));
+                return "";
+            }
+            return v.asText();
+        }
+
+        double number(JsonNode n, String p, String key, boolean required) {
+            JsonNode v = n.get(key);
+            if (v == null || v.isNull()) {
+                if (required) {
+                    problems.add(error(p + "." + key, "a number is required here"));
+                }
+                return Double.NaN;
+            }
+            if (!v.isNumber()) {
+                problems.add(error(p + "." + key, "must be a number, not " + v));
+                return Double.NaN;
+            }
+            return v.asDouble();
+        }
+
+        List<String> strings(JsonNode n, String p, String key) {
+            List<String> out = new ArrayList<>();
+            JsonNode v = n.get(key);
+            if (v == null) {
+                return out;
+            }
+            if (!v.isArray()) {
+                problems.add(error(p + "." + key, "must be a list of text"));
+                return out;
+            }
+            v.forEach(x -> out.add(x.asText()));
+            return out;
+        }
+    }
+
+    static Problem error(String path, String message) {
+        return new Problem(Problem.Severity.ERROR, path, message);
+    }
+
+    // ---------------------------------------------------------------- writing
+
+    static String write(AcidityTable t) {
+        String content = writeContent(t);
+        TableVersion v = t.version();
+        ObjectNode vn = JSON.createObjectNode();
+        vn.put("number", v.number());
+        vn.put("author", v.author());
+        vn.put("time", v.time());
+        vn.put("comment", v.comment());
+        vn.put("hash", hash(t));
+        vn.put("parent", v.parent());
+        return "{\n  \"format\": \"" + FORMAT + "\",\n  \"version\": " + line(vn) + ",\n" + content + "}\n";
+    }
+
+    /** SHA-256 over the canonical content (everything except the version block). */
+    static String hash(AcidityTable t) {
+        try {
+            byte[] d = MessageDigest.getInstance("SHA-256").digest(writeContent(t).getBytes(StandardCharsets.UTF_8));
+            return HexFormat.of().formatHex(d);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required by every Java platform", e);
+        }
+    }
+
+    private static String writeContent(AcidityTable t) {
+        StringBuilder sb = new StringBuilder();
+        block(sb, "references", t.references().stream().map(r -> {
+            ObjectNode o = JSON.createObjectNode();
+            o.put("id", r.id());
+            o.put("citation", r.citation());
+            return o;
+        }).toList(), false);
+        block(sb, "groups", t.groups().stream().map(TableCodec::groupNode).toList(), false);
+        block(sb, "substituents", t.substituents().stream().map(TableCodec::substituentNode).toList(), false);
+        block(sb, "measured", t.measured().stream().map(TableCodec::measuredNode).toList(), false);
+        SiteInteraction si = t.interaction();
+        ObjectNode in = JSON.createObjectNode();
+        ArrayNode sh = in.putArray("shifts");
+        si.shifts().forEach(s -> sh.addArray().add((int) s[0]).add(s[1]));
+        in.put("decay", si.decay());
+        in.put("cutoff", si.cutoff());
+        in.put("source", si.source());
+        sb.append("  \"interaction\": ").append(line(in)).append('\n');
+        return sb.toString();
+    }
+
+    private static void block(StringBuilder sb, String key, List<ObjectNode> rows, boolean last) {
+        sb.append("  \"").append(key).append("\": [");
+        for (int i = 0; i < rows.size(); i++) {
+            sb.append(i == 0 ? "\n    " : ",\n    ").append(line(rows.get(i)));
+        }
+        sb.append(rows.isEmpty() ? "]" : "\n  ]").append(last ? "\n" : ",\n");
+    }
+
+    private static ObjectNode groupNode(GroupClass g) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("id", g.id());
+        o.put("name", g.name());
+        o.put("smarts", g.smarts());
+        o.put("type", g.type().label());
+        num(o, "pka", g.pka());
+        o.put("relation", g.relation().label());
+        num(o, "rho", g.rho());
+        num(o, "attenuation", g.attenuation());
+        if (!"p".equals(g.resonance())) {
+            o.put("resonance", g.resonance());
+        }
+        num(o, "enthalpy", g.enthalpy());
+        o.put("sd", g.sd());
+        if (g.permanent()) {
+            o.put("permanent", true);
+        }
+        ObjectNode s = o.putObject("sources");
+        new TreeMap<>(g.sources()).forEach(s::put);
+        if (!g.note().isEmpty()) {
+            o.put("note", g.note());
+        }
+        if (!g.matches().isEmpty()) {
+            g.matches().forEach(o.putArray("matches")::add);
+        }
+        if (!g.misses().isEmpty()) {
+            g.misses().forEach(o.putArray("misses")::add);
+        }
+        return o;
+    }
+
+    private static ObjectNode substituentNode(Substituent x) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("id", x.id());
+        o.put("name", x.name());
+        o.put("smarts", x.smarts());
+        num(o, "sigmaMeta", x.sigmaMeta());
+        num(o, "sigmaPara", x.sigmaPara());
+        num(o, "sigmaParaMinus", x.sigmaParaMinus());
+        num(o, "sigmaParaPlus", x.sigmaParaPlus());
+        num(o, "sigmaI", x.sigmaI());
+        ObjectNode s = o.putObject("sources");
+        new TreeMap<>(x.sources()).forEach(s::put);
+        return o;
+    }
+
+    private static ObjectNode measuredNode(MeasuredCompound m) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("id", m.id());
+        o.put("name", m.name());
+        o.put("smiles", m.smiles());
+        ArrayNode a = o.putArray("pka");
+        m.pka().forEach(a::add);
+        o.put("temperature", m.temperature());
+        o.put("ionicStrength", m.ionicStrength());
+        o.put("method", m.method());
+        o.put("source", m.source());
+        ArrayNode g = o.putArray("groups");
+        m.groups().forEach(g::add);
+        return o;
+    }
+
+    private static void num(ObjectNode o, String k, double v) {
+        if (!Double.isNaN(v)) {
+            o.put(k, v);
+        }
+    }
+
+    private static String line(JsonNode n) {
+        try {
+            return JSON.writer(ONE_LINE).writeValueAsString(n);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+}

@@ -1,0 +1,77 @@
+package ionmark.acidity.internal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.Test;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.ValidationReport;
+
+/** The table shipped in the bundle: complete, sourced, and its own examples agree with its patterns. */
+class ShippedTableTest {
+
+    static String shippedText() throws IOException {
+        try (InputStream in = TableSnapshotService.class.getResourceAsStream(TableSnapshotService.SHIPPED)) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+    }
+
+    @Test
+    void validatesWithoutErrors() throws IOException {
+        ValidationReport r = TableValidator.validate(shippedText());
+        assertTrue(r.ok(), () -> r.errors().stream().map(Object::toString).collect(Collectors.joining("\n")));
+    }
+
+    @Test
+    void coversTheContentTheDepartmentNeeds() {
+        AcidityTable t = TableSnapshotService.shipped();
+        assertTrue(t.groups().size() >= 60, "group classes: " + t.groups().size());
+        assertTrue(t.substituents().size() >= 50, "substituents: " + t.substituents().size());
+        assertTrue(t.measured().size() >= 40, "measured compounds: " + t.measured().size());
+    }
+
+    @Test
+    void everyGroupClassHasPositiveExamples() {
+        for (GroupClass g : TableSnapshotService.shipped().groups()) {
+            assertTrue(!g.matches().isEmpty(), g.id() + " has no example it must match");
+        }
+    }
+
+    @Test
+    void everyNumberHasASource() {
+        AcidityTable t = TableSnapshotService.shipped();
+        for (GroupClass g : t.groups()) {
+            if (!g.permanent()) {
+                assertTrue(!g.source("pka").isEmpty(), g.id() + " pka");
+            }
+            assertTrue(!g.source("sd").isEmpty(), g.id() + " sd");
+        }
+        t.measured().forEach(m -> assertTrue(!t.citation(m.source()).equals(m.source()), m.id() + " source"));
+    }
+
+    @Test
+    void writingAndReadingAgainLosesNothing() throws IOException {
+        AcidityTable t = TableSnapshotService.shipped();
+        String once = TableCodec.write(t);
+        AcidityTable again = TableValidator.validate(once).table().orElseThrow();
+        assertEquals(once, TableCodec.write(again));
+        assertEquals(TableCodec.hash(t), TableCodec.hash(again));
+        assertEquals(t.groups(), again.groups());
+        assertEquals(t.measured(), again.measured());
+        assertEquals(t.substituents().size(), again.substituents().size());
+    }
+
+    @Test
+    void shippedTextIsAlreadyCanonical() throws IOException {
+        String text = shippedText();
+        AcidityTable t = TableValidator.validate(text).table().orElseThrow();
+        assertEquals(TableCodec.write(t), text, "re-write the shipped table with the codec (see DEVELOPERS.md)");
+    }
+}

@@ -1,0 +1,55 @@
+package ionmark.speciation.api;
+
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Everything Ionmark says about one structure at one set of conditions. A failed analysis carries
+ * {@link #error()} and empty lists; it never throws.
+ *
+ * @param input          the text as given
+ * @param smiles         the parent structure analysed, in its reference protonation
+ * @param stripped       components removed from a mixture or salt
+ * @param sites          titratable and permanent sites
+ * @param macroPka       macroscopic pKa values, ascending
+ * @param conditions     the conditions used
+ * @param netCharge      mean net charge at the stated pH (null without pH)
+ * @param fractionNeutral fraction with net charge 0 (null without pH)
+ * @param chargeStates   fraction per net charge (empty without pH)
+ * @param species        leading microstates, largest first (empty without pH)
+ * @param logP           octanol/water logP of the neutral form (CDK JPlogP), NaN if unavailable
+ * @param logD           logD at the stated pH from the neutral fraction (null without pH)
+ * @param neutralWindows pH ranges (0–14) in which at least 99 % is neutral
+ * @param chargedWindows pH ranges (0–14) in which at least 99 % is charged
+ * @param corrections    temperature and ionic-strength corrections applied, in words
+ * @param warnings       what the reader must know (estimated not measured, sampled, outside the table …)
+ * @param sampled        true when populations were sampled rather than enumerated
+ * @param tableVersion   the table version used, for example "v1 (cafd59fb)"
+ * @param error          one-line error for bad input, else null
+ */
+public record Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
+        Conditions conditions, Double netCharge, Double fractionNeutral, Map<Integer, Double> chargeStates,
+        List<Species> species, double logP, Double logD, List<Window> neutralWindows, List<Window> chargedWindows,
+        List<String> corrections, List<String> warnings, boolean sampled, String tableVersion, String error) {
+
+    public Analysis {
+        stripped = List.copyOf(stripped);
+        sites = List.copyOf(sites);
+        macroPka = List.copyOf(macroPka);
+        chargeStates = Map.copyOf(chargeStates);
+        species = List.copyOf(species);
+        neutralWindows = List.copyOf(neutralWindows);
+        chargedWindows = List.copyOf(chargedWindows);
+        corrections = List.copyOf(corrections);
+        warnings = List.copyOf(warnings);
+    }
+
+    public static Analysis failed(String input, Conditions c, String tableVersion, String error) {
+        return new Analysis(input, "", List.of(), List.of(), List.of(), c, null, null, Map.of(), List.of(), Double.NaN,
+                null, List.of(), List.of(), List.of(), List.of(), false, tableVersion, error);
+    }
+
+    public boolean ok() {
+        return error == null;
+    }
+}

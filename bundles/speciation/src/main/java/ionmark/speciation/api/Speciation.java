@@ -1,0 +1,17 @@
+package ionmark.speciation.api;
+
+import org.osgi.annotation.versioning.ProviderType;
+
+/**
+ * The speciation service. Thread-safe; a call never throws for bad input, it returns an
+ * {@link Analysis} with {@link Analysis#error()} set.
+ */
+@ProviderType
+public interface Speciation {
+
+    /** Reads a SMILES, molfile (V2000/V3000) or SDF record and analyses it at the given conditions. */
+    Analysis analyse(String structure, Conditions conditions);
+
+    /** Curves of charge and site protonation from pH {@code from} to {@code to} at {@code step}. */
+    Curve curve(String structure, Conditions conditions, double from, double to, double step);
+}

@@ -1,0 +1,400 @@
+package ionmark.speciation.internal;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.BitSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import java.util.TreeMap;
+
+import org.openscience.cdk.graph.GraphUtil;
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.qsar.descriptors.molecular.JPlogPDescriptor;
+import org.openscience.cdk.qsar.result.DoubleResult;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.MeasuredCompound;
+import ionmark.acidity.api.SiteType;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.Curve;
+import ionmark.speciation.api.Site;
+import ionmark.speciation.api.Species;
+import ionmark.speciation.api.Term;
+import ionmark.speciation.api.Window;
+import ionmark.speciation.internal.estimate.EstimatedSite;
+import ionmark.speciation.internal.estimate.LferEstimator;
+import ionmark.speciation.internal.estimate.Overrides;
+import ionmark.speciation.internal.microstates.MacroConstants;
+import ionmark.speciation.internal.microstates.MicrostateSolver;
+import ionmark.speciation.internal.microstates.Populations;
+import ionmark.speciation.internal.microstates.SiteModel;
+import ionmark.speciation.internal.sites.CompiledTable;
+import ionmark.speciation.internal.sites.PerceivedSite;
+import ionmark.speciation.internal.sites.SitePerceiver;
+import ionmark.speciation.internal.structure.StructureException;
+import ionmark.speciation.internal.structure.StructureReader;
+
+/**
+ * The pipeline for one table snapshot: structure → sites → estimates → microstates → analysis.
+ * Immutable and thread-safe; every call works on its own freshly read molecule.
+ */
+public final class Engine {
+    static final double WINDOW_STEP = 0.05;
+    static final String CAUTION = "estimated values for planning and write-up; measure before safety-relevant or "
+            + "regulatory decisions";
+
+    private final CompiledTable table;
+    private final Overrides overrides;
+    private final StructureReader reader;
+    private final MicrostateSolver solver;
+
+    public Engine(AcidityTable table, int maxHeavyAtoms) {
+        this.table = new CompiledTable(table);
+        this.overrides = new Overrides(this.table);
+        this.reader = new StructureReader(maxHeavyAtoms);
+        this.solver = new MicrostateSolver(table.interaction().cutoff());
+    }
+
+    public AcidityTable table() {
+        return table.table();
+    }
+
+    /** The prepared problem for one structure: molecule, sites, numeric model at the conditions. */
+    record Problem(StructureReader.Prepared prepared, List<EstimatedSite> sites, List<Integer> uncovered,
+            SiteModel model, int permanentCharge, List<String> notes, Optional<MeasuredCompound> measured) {
+    }
+
+    public Analysis analyse(String input, Conditions c) {
+        String version = table.table().version().label();
+        try {
+            Problem p = prepare(input, c);
+            return analyse(input, c, p, version);
+        } catch (StructureException e) {
+            return Analysis.failed(input, c, version, e.getMessage());
+        }
+    }
+
+    Problem prepare(String input, Conditions c) throws StructureException {
+        StructureReader.Prepared prep = reader.read(input);
+        IAtomContainer mol = prep.molecule();
+        List<PerceivedSite> perceived = SitePerceiver.perceive(table, mol);
+        List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, perceived));
+        List<String> notes = new ArrayList<>(prep.notes());
+        Optional<MeasuredCompound> measured = overrides.exact(mol);
+        if (measured.isPresent()) {
+            est = fitToMeasured(mol, est, measured.get());
+        } else {
+            BitSet fp = Overrides.fingerprint(mol);
+            est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
+        }
+        List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
+        return new Problem(prep, est, uncovered, model(mol, est, c), permanentCharge(est), notes, measured);
+    }
+
+    /** Exact match: shift site values so that the model's macroscopic constants equal the measured ones. */
+    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, List<EstimatedSite> est, MeasuredCompound m) {
+        List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
+        if (titr.size() != m.pka().size() || titr.isEmpty()) {
+            return est; // measured values do not map one-to-one onto the perceived sites: keep estimates
+        }
+        Integer[] order = new Integer[titr.size()];
+        for (int i = 0; i < order.length; i++) {
+            order[i] = i;
+        }
+        Arrays.sort(order, (a, b) -> Double.compare(titr.get(a).pka(), titr.get(b).pka()));
+        double[] shift = new double[titr.size()];
+        for (int iter = 0; iter < 60; iter++) {
+            List<EstimatedSite> trial = new ArrayList<>();
+            for (int i = 0; i < titr.size(); i++) {
+                trial.add(titr.get(i).shifted(shift[i], new Term("", 0, ""), "measured", 0));
+            }
+            List<Double> macro = MacroConstants.of(model(mol, withPermanent(est, trial), Conditions.noPh()),
+                    table.table().interaction().cutoff());
+            double worst = 0;
+            for (int k = 0; k < order.length; k++) {
+                double d = m.pka().get(k) - macro.get(k);
+                shift[order[k]] += d;
+                worst = Math.max(worst, Math.abs(d));
+            }
+            if (worst < 1e-6) {
+                break;
+            }
+        }
+        List<EstimatedSite> out = new ArrayList<>();
+        int t = 0;
+        for (EstimatedSite s : est) {
+            if (s.site().group().permanent()) {
+                out.add(s);
+                continue;
+            }
+            double d = shift[t++];
+            out.add(s.shifted(d, new Term(String.format(Locale.ROOT,
+                    "measured compound %s: macroscopic pKa %s at %.0f °C (%s); site value set to reproduce it",
+                    m.name(), m.pka(), m.temperature(), m.method()), d, table.table().citation(m.source())),
+                    "measured", 0.05));
+        }
+        return out;
+    }
+
+    private static int permanentCharge(List<EstimatedSite> est) {
+        int q = 0;
+        for (EstimatedSite s : est) {
+            if (s.site().group().permanent()) {
+                q += s.site().group().type() == SiteType.BASE ? 1 : -1;
+            }
+        }
+        return q;
+    }
+
+    /** The numeric model at the conditions: corrected site pKa values and interactions from bond distances. */
+    private SiteModel model(IAtomContainer mol, List<EstimatedSite> est, Conditions c) {
+        List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
+        List<EstimatedSite> perm = est.stream().filter(s -> s.site().group().permanent()).toList();
+        int n = titr.size();
+        double[] pka = new double[n];
+        boolean[] base = new boolean[n];
+        for (int i = 0; i < n; i++) {
+            GroupClass g = titr.get(i).site().group();
+            base[i] = g.type() == SiteType.BASE;
+            pka[i] = titr.get(i).pka() + Conditioning.temperatureShift(g.enthalpy(), c.temperature())
+                    + Conditioning.ionicShift(base[i] ? 1 : 0, base[i] ? 0 : -1, c.ionicStrength(), c.temperature());
+        }
+        double[][] w = new double[n][n];
+        double[] bg = new double[n];
+        int[][] dist = distances(mol, est);
+        for (int i = 0; i < n; i++) {
+            for (int j = 0; j < n; j++) {
+                if (i != j) {
+                    w[i][j] = table.table().interaction().at(dist[i][j]);
+                }
+            }
+            for (int p = 0; p < perm.size(); p++) {
+                double q = perm.get(p).site().group().type() == SiteType.BASE ? 1 : -1;
+                bg[i] += table.table().interaction().at(dist[i][n + p]) * q;
+            }
+        }
+        return new SiteModel(pka, base, w, bg);
+    }
+
+    private static List<EstimatedSite> withPermanent(List<EstimatedSite> all, List<EstimatedSite> titratable) {
+        List<EstimatedSite> out = new ArrayList<>(titratable);
+        all.stream().filter(s -> s.site().group().permanent()).forEach(out::add);
+        return out;
+    }
+
+    /** Bond distances between site atoms: titratable sites first, then permanent ones. */
+    private static int[][] distances(IAtomContainer mol, List<EstimatedSite> est) {
+        List<Integer> atoms = new ArrayList<>();
+        est.stream().filter(s -> !s.site().group().permanent()).forEach(s -> atoms.add(s.site().atom()));
+        est.stream().filter(s -> s.site().group().permanent()).forEach(s -> atoms.add(s.site().atom()));
+        int[][] adj = GraphUtil.toAdjList(mol);
+        int[][] out = new int[atoms.size()][atoms.size()];
+        for (int i = 0; i < atoms.size(); i++) {
+            int[] d = new int[mol.getAtomCount()];
+            Arrays.fill(d, -1);
+            d[atoms.get(i)] = 0;
+            java.util.ArrayDeque<Integer> q = new java.util.ArrayDeque<>(List.of(atoms.get(i)));
+            while (!q.isEmpty()) {
+                int u = q.poll();
+                for (int v : adj[u]) {
+                    if (d[v] < 0) {
+                        d[v] = d[u] + 1;
+                        q.add(v);
+                    }
+                }
+            }
+            for (int j = 0; j < atoms.size(); j++) {
+                out[i][j] = d[atoms.get(j)];
+            }
+        }
+        return out;
+    }
+
+    private Analysis analyse(String input, Conditions c, Problem p, String version) {
+        IAtomContainer mol = p.prepared().molecule();
+        List<EstimatedSite> titr = p.sites().stream().filter(s -> !s.site().group().permanent()).toList();
+        List<String> corrections = new ArrayList<>();
+        List<String> warnings = new ArrayList<>();
+        Conditioning.describe(c, corrections, warnings);
+        warnings.addAll(p.notes());
+        if (!p.prepared().stripped().isEmpty()) {
+            warnings.add("mixture or salt: analysed the parent, stripped " + String.join(", ", p.prepared().stripped()));
+        }
+        for (int atom : p.uncovered()) {
+            warnings.add("atom " + atom + " (" + mol.getAtom(atom).getSymbol() + "-H) looks ionizable but is outside "
+                    + "the table: not estimated");
+        }
+        if (p.measured().isEmpty() && !titr.isEmpty()) {
+            warnings.add("pKa values are estimated, not measured");
+        }
+        List<Double> macro = MacroConstants.of(p.model(), table.table().interaction().cutoff());
+        double logP = logP(mol);
+        Double netCharge = null;
+        Double neutral = null;
+        Double logD = null;
+        Map<Integer, Double> chargeStates = Map.of();
+        List<Species> species = List.of();
+        boolean sampled = false;
+        double[] prot = null;
+        if (c.hasPh()) {
+            Populations pop = solver.solve(p.model(), c.ph());
+            sampled = pop.sampled();
+            prot = pop.protonated();
+            chargeStates = shift(pop.chargeStates(), p.permanentCharge());
+            netCharge = pop.meanCharge() + p.permanentCharge();
+            neutral = chargeStates.getOrDefault(0, 0.0);
+            logD = Double.isNaN(logP) ? null : logP + Math.log10(Math.max(neutral, 1e-12));
+            species = species(mol, titr, pop, p.permanentCharge());
+            if (sampled) {
+                warnings.add(String.format(Locale.ROOT, "populations sampled (Monte Carlo), standard error up to %.3f",
+                        pop.stdError()));
+            }
+        }
+        List<Site> sites = new ArrayList<>();
+        int t = 0;
+        for (EstimatedSite s : p.sites()) {
+            GroupClass g = s.site().group();
+            Double pr = null;
+            double pka = s.pka();
+            if (!g.permanent()) {
+                pka = p.model().pka()[t];
+                pr = prot == null ? null : prot[t];
+                t++;
+            }
+            List<Term> terms = new ArrayList<>(s.terms());
+            if (Math.abs(pka - s.pka()) > 1e-9) {
+                terms.add(new Term("conditions (temperature, ionic strength)", pka - s.pka(), "van 't Hoff; Davies"));
+            }
+            sites.add(new Site(s.site().atom(), mol.getAtom(s.site().atom()).getSymbol(), g.id(), g.name(),
+                    g.type().label(), g.permanent() ? Double.NaN : pka, s.sd(), pr, terms, s.basis(), g.permanent()));
+        }
+        List<Window> neutralWindows = new ArrayList<>();
+        List<Window> chargedWindows = new ArrayList<>();
+        windows(p, neutralWindows, chargedWindows);
+        warnings.add(CAUTION);
+        return new Analysis(input, p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
+                chargeStates, species, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
+                null);
+    }
+
+    public Curve curve(String input, Conditions c, double from, double to, double step) throws StructureException {
+        if (!(step > 0) || !(to >= from) || (to - from) / step > 100_000) {
+            throw new IllegalArgumentException("curve needs from <= to and a positive step (at most 100000 points)");
+        }
+        Problem p = prepare(input, c);
+        int n = (int) Math.round((to - from) / step) + 1;
+        double[] ph = new double[n];
+        double[] mean = new double[n];
+        Map<Integer, double[]> site = new LinkedHashMap<>();
+        Map<Integer, double[]> states = new TreeMap<>();
+        List<EstimatedSite> titr = p.sites().stream().filter(s -> !s.site().group().permanent()).toList();
+        titr.forEach(s -> site.put(s.site().atom(), new double[n]));
+        for (int k = 0; k < n; k++) {
+            ph[k] = from + k * step;
+            Populations pop = solver.solve(p.model(), ph[k]);
+            mean[k] = pop.meanCharge() + p.permanentCharge();
+            for (int i = 0; i < titr.size(); i++) {
+                site.get(titr.get(i).site().atom())[k] = pop.protonated()[i];
+            }
+            for (var e : pop.chargeStates().entrySet()) {
+                states.computeIfAbsent(e.getKey() + p.permanentCharge(), z -> new double[n])[k] = e.getValue();
+            }
+        }
+        return new Curve(ph, mean, site, states);
+    }
+
+    private void windows(Problem p, List<Window> neutral, List<Window> charged) {
+        Double nStart = null;
+        Double cStart = null;
+        double last = 0;
+        for (double ph = 0; ph <= 14 + 1e-9; ph += WINDOW_STEP) {
+            Populations pop = solver.solve(p.model(), ph);
+            double f0 = shift(pop.chargeStates(), p.permanentCharge()).getOrDefault(0, 0.0);
+            if (f0 >= 0.99 && nStart == null) {
+                nStart = ph;
+            } else if (f0 < 0.99 && nStart != null) {
+                neutral.add(new Window(round(nStart), round(last)));
+                nStart = null;
+            }
+            if (1 - f0 >= 0.99 && cStart == null) {
+                cStart = ph;
+            } else if (1 - f0 < 0.99 && cStart != null) {
+                charged.add(new Window(round(cStart), round(last)));
+                cStart = null;
+            }
+            last = ph;
+        }
+        if (nStart != null) {
+            neutral.add(new Window(round(nStart), 14.0));
+        }
+        if (cStart != null) {
+            charged.add(new Window(round(cStart), 14.0));
+        }
+    }
+
+    private static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+
+    private static Map<Integer, Double> shift(Map<Integer, Double> states, int by) {
+        Map<Integer, Double> out = new TreeMap<>();
+        states.forEach((z, f) -> out.put(z + by, f));
+        return out;
+    }
+
+    private static List<Species> species(IAtomContainer mol, List<EstimatedSite> titr, Populations pop, int permanent) {
+        List<Species> out = new ArrayList<>();
+        for (Populations.Microstate m : pop.top()) {
+            if (m.fraction() < 0.001 && !out.isEmpty()) {
+                break;
+            }
+            try {
+                IAtomContainer copy = mol.clone();
+                int z = permanent;
+                for (int i = 0; i < titr.size(); i++) {
+                    IAtom a = copy.getAtom(titr.get(i).site().atom());
+                    boolean base = titr.get(i).site().group().type() == SiteType.BASE;
+                    boolean dep = m.deprotonated()[i];
+                    int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
+                    int q = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
+                    if (base && !dep) {
+                        a.setImplicitHydrogenCount(h + 1);
+                        a.setFormalCharge(q + 1);
+                        z++;
+                    } else if (!base && dep) {
+                        if (h > 0) {
+                            a.setImplicitHydrogenCount(h - 1);
+                        } else {
+                            IAtom o = copy.getBuilder().newInstance(IAtom.class, "O");
+                            o.setImplicitHydrogenCount(1);
+                            copy.addAtom(o);
+                            copy.addBond(copy.indexOf(a), copy.indexOf(o), org.openscience.cdk.interfaces.IBond.Order.SINGLE);
+                        }
+                        a.setFormalCharge(q - 1);
+                        z--;
+                    }
+                }
+                out.add(new Species(StructureReader.smiles(copy), z, m.fraction()));
+            } catch (CloneNotSupportedException e) {
+                throw new IllegalStateException(e);
+            }
+        }
+        return out;
+    }
+
+    private static double logP(IAtomContainer mol) {
+        try {
+            IAtomContainer copy = mol.clone();
+            var v = new JPlogPDescriptor().calculate(copy).getValue();
+            return v instanceof DoubleResult d ? Math.round(d.doubleValue() * 100) / 100.0 : Double.NaN;
+        } catch (CloneNotSupportedException | RuntimeException e) {
+            return Double.NaN;
+        }
+    }
+}

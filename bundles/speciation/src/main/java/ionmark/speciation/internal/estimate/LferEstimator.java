@@ -1,0 +1,255 @@
+package ionmark.speciation.internal.estimate;
+
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+
+import org.openscience.cdk.graph.Cycles;
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.Relation;
+import ionmark.acidity.api.Substituent;
+import ionmark.speciation.api.Term;
+import ionmark.speciation.internal.sites.CompiledTable;
+import ionmark.speciation.internal.sites.PerceivedSite;
+
+/**
+ * Site pKa by linear free-energy relations.
+ *
+ * <ul>
+ * <li>Hammett (aromatic sites): ΔpKa = −ρ Σσ over substituents on the ring that carries the
+ * centre; meta σm, para σp (σp⁻ or σp⁺ when the class is in through-resonance); ortho by the
+ * stated rule σo = f·σp + σI, f the class's ortho factor; in five-membered rings the adjacent
+ * position counts as ortho and the next as meta.</li>
+ * <li>Taft/inductive (sp3 paths): ΔpKa = −ρ Σ σI·a^(n−1), n the bonds from a centre to the
+ * substituent's attachment atom, a the class's attenuation per bond; saturated carbons transmit,
+ * every other atom is a substituent. Paths are counted from each centre without passing back
+ * through the site group, so a ring transmits both ways. Several substituents on one atom count
+ * 1, 0.75, 0.55 (saturation, common practice).</li>
+ * </ul>
+ * Equivalent sites are separate sites; their statistical factors come out of the microstate sum.
+ */
+public final class LferEstimator {
+    static final int MAX_PATH = 5;
+    private static final double[] SATURATION = {1.0, 0.75, 0.55, 0.45};
+    /** Added in quadrature per unit |correction|: a large correction is less certain (common practice). */
+    static final double SD_PER_UNIT_CORRECTION = 0.12;
+
+    private LferEstimator() {
+    }
+
+    public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, List<PerceivedSite> sites) {
+        SubstituentMap subs = new SubstituentMap(table, mol);
+        int[][] rings = Cycles.sssr(mol).paths();
+        List<EstimatedSite> out = new ArrayList<>();
+        for (PerceivedSite s : sites) {
+            out.add(estimate(table.table(), mol, subs, rings, s));
+        }
+        return out;
+    }
+
+    private static EstimatedSite estimate(AcidityTable t, IAtomContainer mol, SubstituentMap subs, int[][] rings,
+            PerceivedSite s) {
+        GroupClass g = s.group();
+        List<Term> terms = new ArrayList<>();
+        terms.add(new Term("class " + g.name() + " (" + g.id() + ")", g.pka(), t.citation(g.source("pka"))));
+        double total = 0;
+        if (g.relation() == Relation.HAMMETT) {
+            total = hammett(t, mol, subs, rings, s, terms);
+        } else if (g.relation() == Relation.TAFT) {
+            total = taft(t, mol, subs, s, terms);
+        }
+        double sd = Math.sqrt(g.sd() * g.sd() + Math.pow(SD_PER_UNIT_CORRECTION * Math.abs(total), 2));
+        return new EstimatedSite(s, g.pka() + total, sd, terms, "estimated");
+    }
+
+    // ------------------------------------------------------------------ Hammett
+
+    private static double hammett(AcidityTable t, IAtomContainer mol, SubstituentMap subs, int[][] rings,
+            PerceivedSite s, List<Term> terms) {
+        GroupClass g = s.group();
+        int centre = s.centres()[0];
+        int[] ring = ringOf(rings, centre);
+        if (ring == null) {
+            return 0;
+        }
+        Set<Integer> ringSet = new HashSet<>();
+        for (int i = 0; i < ring.length - 1; i++) {
+            ringSet.add(ring[i]);
+        }
+        int size = ringSet.size();
+        int centreIdx = indexIn(ring, centre);
+        double f = Double.isNaN(g.attenuation()) ? 0.5 : g.attenuation();
+        double total = 0;
+        Set<Integer> forbidden = new HashSet<>(ringSet);
+        forbidden.addAll(s.core());
+        for (int i = 0; i < size; i++) {
+            int r = ring[i];
+            if (r == centre) {
+                continue;
+            }
+            int d = Math.abs(i - centreIdx);
+            d = Math.min(d, size - d);
+            IAtom ra = mol.getAtom(r);
+            for (IAtom nb : mol.getConnectedAtomsList(ra)) {
+                int x = mol.indexOf(nb);
+                if (ringSet.contains(x) || s.core().contains(x) || isFusedNeighbour(rings, ringSet, r, x)) {
+                    continue;
+                }
+                SubstituentMap.Hit h = subs.at(x, forbidden);
+                if (h == null) {
+                    continue;
+                }
+                Substituent sub = h.sub().substituent();
+                String pos;
+                double sigma;
+                if (d == 1) {
+                    pos = "ortho";
+                    double sp = sub.sigmaPara(g.resonance());
+                    double si = Double.isNaN(sub.sigmaI()) ? 0 : sub.sigmaI();
+                    sigma = (Double.isNaN(sp) ? 0 : f * sp) + si;
+                } else if (d == 2 || size == 5) {
+                    pos = "meta";
+                    sigma = sub.sigmaMeta();
+                } else {
+                    pos = "para";
+                    sigma = sub.sigmaPara(g.resonance());
+                }
+                if (Double.isNaN(sigma)) {
+                    continue;
+                }
+                double delta = -g.rho() * sigma;
+                total += delta;
+                String sym = d == 1 ? "σo = " + fmt(f) + "·σp + σI" : (d == 3 && size == 6 ? "σ" + g.resonance() : "σm");
+                terms.add(new Term(String.format(Locale.ROOT, "Hammett %s %s: %s %.2f × ρ %.2f", pos, sub.name(), sym,
+                        sigma, g.rho()), delta, t.citation(sub.source(d == 2 || size == 5 ? "sigmaMeta" : "sigmaPara"))
+                                + "; ρ: " + t.citation(g.source("rho"))));
+            }
+        }
+        return total;
+    }
+
+    private static boolean isFusedNeighbour(int[][] rings, Set<Integer> ringSet, int r, int x) {
+        for (int[] ring : rings) {
+            boolean hasR = false;
+            boolean hasX = false;
+            for (int a : ring) {
+                hasR |= a == r;
+                hasX |= a == x;
+            }
+            if (hasR && hasX) {
+                return true; // x is in another ring fused at r: the class covers fused systems
+            }
+        }
+        return false;
+    }
+
+    private static int[] ringOf(int[][] rings, int atom) {
+        int[] best = null;
+        for (int[] r : rings) {
+            if (indexIn(r, atom) >= 0 && (best == null || Math.abs(r.length - 7) < Math.abs(best.length - 7))) {
+                best = r;
+            }
+        }
+        return best;
+    }
+
+    private static int indexIn(int[] path, int atom) {
+        for (int i = 0; i < path.length - 1; i++) {
+            if (path[i] == atom) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    // ------------------------------------------------------------------ Taft / inductive
+
+    private static double taft(AcidityTable t, IAtomContainer mol, SubstituentMap subs, PerceivedSite s,
+            List<Term> terms) {
+        GroupClass g = s.group();
+        double a = Double.isNaN(g.attenuation()) ? 0.45 : g.attenuation();
+        Set<Integer> blocked = new HashSet<>(s.core());
+        for (int c : s.centres()) {
+            blocked.remove(c);
+        }
+        double sum = 0;
+        List<String> parts = new ArrayList<>();
+        for (int c : s.centres()) {
+            int[] dist = new int[mol.getAtomCount()];
+            Arrays.fill(dist, -1);
+            dist[c] = 0;
+            ArrayDeque<Integer> queue = new ArrayDeque<>();
+            queue.add(c);
+            // substituents found per attachment skeleton atom, for the saturation rule
+            java.util.Map<Integer, List<double[]>> onAtom = new java.util.TreeMap<>();
+            java.util.Map<Integer, List<String>> names = new java.util.TreeMap<>();
+            while (!queue.isEmpty()) {
+                int u = queue.poll();
+                for (IAtom nb : mol.getConnectedAtomsList(mol.getAtom(u))) {
+                    int x = mol.indexOf(nb);
+                    if (dist[x] >= 0 || blocked.contains(x)) {
+                        continue;
+                    }
+                    dist[x] = dist[u] + 1;
+                    if (dist[x] > MAX_PATH) {
+                        continue;
+                    }
+                    if (isSaturatedCarbon(nb)) {
+                        queue.add(x);
+                        continue;
+                    }
+                    Set<Integer> forbidden = new HashSet<>(s.core());
+                    forbidden.add(u);
+                    SubstituentMap.Hit h = subs.at(x, forbidden);
+                    if (h == null || Double.isNaN(h.sub().substituent().sigmaI())) {
+                        continue;
+                    }
+                    double w = Math.pow(a, dist[x] - 1);
+                    onAtom.computeIfAbsent(u, k -> new ArrayList<>()).add(new double[] {h.sub().substituent().sigmaI(), w});
+                    names.computeIfAbsent(u, k -> new ArrayList<>()).add(h.sub().substituent().name() + " (n=" + dist[x]
+                            + ")");
+                }
+            }
+            for (var e : onAtom.entrySet()) {
+                List<double[]> l = e.getValue();
+                l.sort((p, q) -> Double.compare(Math.abs(q[0]), Math.abs(p[0])));
+                for (int i = 0; i < l.size(); i++) {
+                    sum += l.get(i)[0] * l.get(i)[1] * SATURATION[Math.min(i, SATURATION.length - 1)];
+                }
+                parts.addAll(names.get(e.getKey()));
+            }
+        }
+        if (parts.isEmpty()) {
+            return 0;
+        }
+        double delta = -g.rho() * sum;
+        terms.add(new Term(String.format(Locale.ROOT, "inductive Σ σI·%s^(n−1) = %.3f × ρ %.2f from %s", fmt(a), sum,
+                g.rho(), String.join(", ", parts)), delta, "σI: " + t.citation("charton1981") + "; ρ: "
+                        + t.citation(g.source("rho"))));
+        return delta;
+    }
+
+    private static boolean isSaturatedCarbon(IAtom a) {
+        if (a.getAtomicNumber() != 6 || a.isAromatic()) {
+            return false;
+        }
+        for (var b : a.bonds()) {
+            if (b.getOrder() != org.openscience.cdk.interfaces.IBond.Order.SINGLE) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static String fmt(double v) {
+        return String.format(Locale.ROOT, "%.2f", v);
+    }
+}

@@ -1,0 +1,174 @@
+package ionmark.speciation.internal.structure;
+
+import java.io.StringReader;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+
+import org.openscience.cdk.exception.CDKException;
+import org.openscience.cdk.exception.InvalidSmilesException;
+import org.openscience.cdk.graph.ConnectivityChecker;
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IAtomContainerSet;
+import org.openscience.cdk.io.MDLV2000Reader;
+import org.openscience.cdk.io.MDLV3000Reader;
+import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smarts.SmartsPattern;
+import org.openscience.cdk.smiles.SmiFlavor;
+import org.openscience.cdk.smiles.SmilesGenerator;
+import org.openscience.cdk.smiles.SmilesParser;
+import org.openscience.cdk.tools.CDKHydrogenAdder;
+import org.openscience.cdk.tools.manipulator.AtomContainerManipulator;
+
+/**
+ * Reads SMILES, molfiles (V2000, V3000) and SDF records, keeps the parent component, and
+ * normalises it to the reference protonation: ionised acids and bases are taken back to their
+ * neutral forms, permanent charges and charge-separated groups (nitro, N-oxide) stay.
+ * Aromaticity: CDK's Daylight model, applied by {@link SmartsPattern#prepare}.
+ *
+ * <p>The returned molecule is freshly built and owned by the caller; it is prepared once here and
+ * must not be shared across threads.
+ */
+public final class StructureReader {
+    private final int maxHeavyAtoms;
+
+    public StructureReader(int maxHeavyAtoms) {
+        this.maxHeavyAtoms = maxHeavyAtoms;
+    }
+
+    /** A parent structure ready for perception. */
+    public record Prepared(IAtomContainer molecule, String smiles, List<String> stripped, List<String> notes) {
+    }
+
+    public Prepared read(String text) throws StructureException {
+        if (text == null || text.isBlank()) {
+            throw new StructureException("empty input: give a SMILES, a molfile or an SDF record");
+        }
+        IAtomContainer mol = looksLikeMolfile(text) ? readMolfile(text) : readSmiles(text.strip());
+        List<String> notes = new ArrayList<>();
+        AtomContainerManipulator.suppressHydrogens(mol);
+        for (IAtom a : mol.atoms()) {
+            if (a.getAtomicNumber() == null || a.getAtomicNumber() == 0) {
+                throw new StructureException("unknown element '" + a.getSymbol() + "'");
+            }
+        }
+        List<String> stripped = new ArrayList<>();
+        mol = parent(mol, stripped);
+        if (mol.getAtomCount() > maxHeavyAtoms) {
+            throw new StructureException("molecule has " + mol.getAtomCount() + " heavy atoms; the limit is "
+                    + maxHeavyAtoms);
+        }
+        Valences.check(mol);
+        Normaliser.toReferenceForm(mol, notes);
+        SmartsPattern.prepare(mol);
+        return new Prepared(mol, smiles(mol), stripped, notes);
+    }
+
+    static boolean looksLikeMolfile(String text) {
+        return text.contains("V2000") || text.contains("V3000") || text.contains("M  END");
+    }
+
+    private static IAtomContainer readSmiles(String smi) throws StructureException {
+        String first = smi.lines().findFirst().orElse("").strip();
+        int ws = indexOfWhitespace(first);
+        String s = ws < 0 ? first : first.substring(0, ws);
+        try {
+            return new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(s);
+        } catch (InvalidSmilesException e) {
+            String msg = e.getMessage() == null ? "invalid SMILES" : e.getMessage().replace('\n', ' ')
+                    .replaceAll("\\s+", " ");
+            throw new StructureException("cannot read SMILES '" + abbreviate(s) + "': " + msg);
+        } catch (RuntimeException e) {
+            throw new StructureException("cannot read SMILES '" + abbreviate(s) + "': " + e);
+        }
+    }
+
+    private static int indexOfWhitespace(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            if (Character.isWhitespace(s.charAt(i))) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    private static IAtomContainer readMolfile(String text) throws StructureException {
+        String record = text;
+        int end = record.indexOf("$$$$");
+        if (end >= 0) {
+            record = record.substring(0, end);
+        }
+        IAtomContainer empty = SilentChemObjectBuilder.getInstance().newAtomContainer();
+        try {
+            if (record.contains("V3000")) {
+                try (MDLV3000Reader r = new MDLV3000Reader(new StringReader(record))) {
+                    IAtomContainer mol = r.read(empty);
+                    addImplicitHydrogens(mol);
+                    return mol;
+                }
+            }
+            try (MDLV2000Reader r = new MDLV2000Reader(new StringReader(record))) {
+                return r.read(empty);
+            }
+        } catch (CDKException | java.io.IOException | RuntimeException e) {
+            throw new StructureException("cannot read molfile: " + String.valueOf(e.getMessage()).lines().findFirst()
+                    .orElse("unreadable"));
+        }
+    }
+
+    private static void addImplicitHydrogens(IAtomContainer mol) throws CDKException {
+        boolean missing = false;
+        for (IAtom a : mol.atoms()) {
+            missing |= a.getImplicitHydrogenCount() == null;
+        }
+        if (missing) {
+            AtomContainerManipulator.percieveAtomTypesAndConfigureAtoms(mol);
+            CDKHydrogenAdder.getInstance(mol.getBuilder()).addImplicitHydrogens(mol);
+        }
+    }
+
+    /** Keeps the largest component that contains carbon (the parent); names the others. */
+    private static IAtomContainer parent(IAtomContainer mol, List<String> stripped) throws StructureException {
+        if (mol.getAtomCount() == 0) {
+            throw new StructureException("the structure has no atoms");
+        }
+        if (ConnectivityChecker.isConnected(mol)) {
+            return mol;
+        }
+        IAtomContainerSet parts = ConnectivityChecker.partitionIntoMolecules(mol);
+        List<IAtomContainer> all = new ArrayList<>();
+        parts.atomContainers().forEach(all::add);
+        IAtomContainer best = all.stream()
+                .max(Comparator.comparingInt((IAtomContainer c) -> hasCarbon(c) ? 1 : 0)
+                        .thenComparingInt(IAtomContainer::getAtomCount))
+                .orElseThrow();
+        for (IAtomContainer c : all) {
+            if (c != best) {
+                stripped.add(smiles(c));
+            }
+        }
+        return best;
+    }
+
+    private static boolean hasCarbon(IAtomContainer c) {
+        for (IAtom a : c.atoms()) {
+            if (a.getAtomicNumber() != null && a.getAtomicNumber() == 6) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    public static String smiles(IAtomContainer mol) {
+        try {
+            return new SmilesGenerator(SmiFlavor.Stereo | SmiFlavor.UseAromaticSymbols).create(mol);
+        } catch (CDKException e) {
+            return "";
+        }
+    }
+
+    private static String abbreviate(String s) {
+        return s.length() <= 60 ? s : s.substring(0, 57) + "...";
+    }
+}

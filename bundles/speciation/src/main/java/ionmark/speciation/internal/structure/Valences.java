@@ -1,0 +1,47 @@
+package ionmark.speciation.internal.structure;
+
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IBond;
+
+/** Rejects atoms with more bonds than their element allows at their charge. */
+final class Valences {
+    private Valences() {
+    }
+
+    static void check(IAtomContainer mol) throws StructureException {
+        for (IAtom a : mol.atoms()) {
+            int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
+            if (h < 0) {
+                throw new StructureException("impossible valence at atom " + (mol.indexOf(a) + 1) + " (" + a.getSymbol()
+                        + ")");
+            }
+            int order = h;
+            for (IBond b : mol.getConnectedBondsList(a)) {
+                order += b.getOrder() == null || b.getOrder() == IBond.Order.UNSET ? 1 : b.getOrder().numeric();
+            }
+            int charge = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
+            int max = maxValence(a.getAtomicNumber(), charge);
+            if (max > 0 && order > max) {
+                throw new StructureException("impossible valence at atom " + (mol.indexOf(a) + 1) + " (" + a.getSymbol()
+                        + (charge != 0 ? String.format("%+d", charge) : "") + " with " + order + " bonds)");
+            }
+        }
+    }
+
+    private static int maxValence(int z, int charge) {
+        return switch (z) {
+            case 1 -> 1;
+            case 5 -> 4;
+            case 6 -> 4;
+            case 7 -> charge > 0 ? 4 : charge < 0 ? 2 : 3;
+            case 8 -> charge > 0 ? 3 : charge < 0 ? 1 : 2;
+            case 9 -> charge > 0 ? 2 : 1;
+            case 15 -> 6;
+            case 16 -> 6;
+            case 17, 35 -> 1 + (charge > 0 ? 1 : 0) + 6;
+            case 53 -> 7;
+            default -> 0;
+        };
+    }
+}
