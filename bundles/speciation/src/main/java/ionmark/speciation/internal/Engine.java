@@ -46,6 +46,9 @@ import ionmark.speciation.internal.structure.StructureReader;
  */
 public final class Engine {
     static final double WINDOW_STEP = 0.05;
+    /** Macroscopic constants outside this range are not observable in water and are not reported. */
+    static final double MACRO_LOW = -2;
+    static final double MACRO_HIGH = 16;
     static final String CAUTION = "estimated values for planning and write-up; measure before safety-relevant or "
             + "regulatory decisions";
 
@@ -97,49 +100,147 @@ public final class Engine {
         return new Problem(prep, est, uncovered, model(mol, est, c), permanentCharge(est), notes, measured);
     }
 
-    /** Exact match: shift site values so that the model's macroscopic constants equal the measured ones. */
+    /**
+     * Exact match: shift site values so that the model's macroscopic constants equal the measured
+     * ones. The k measured values are given to the k sites (in pKa order) whose estimates lie
+     * closest to them; the shifts are found by damped Gauss–Newton on the macroscopic constants.
+     */
     private List<EstimatedSite> fitToMeasured(IAtomContainer mol, List<EstimatedSite> est, MeasuredCompound m) {
-        List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
-        if (titr.size() != m.pka().size() || titr.isEmpty()) {
-            return est; // measured values do not map one-to-one onto the perceived sites: keep estimates
+        List<EstimatedSite> titr = new ArrayList<>(est.stream().filter(s -> !s.site().group().permanent()).toList());
+        int k = m.pka().size();
+        if (titr.size() < k || k == 0) {
+            return est; // fewer sites than measured values: keep the estimates, say nothing false
         }
-        Integer[] order = new Integer[titr.size()];
-        for (int i = 0; i < order.length; i++) {
-            order[i] = i;
+        titr.sort((a, b) -> Double.compare(a.pka(), b.pka()));
+        int bestStart = 0;
+        double bestCost = Double.MAX_VALUE;
+        for (int start = 0; start + k <= titr.size(); start++) {
+            double cost = 0;
+            for (int i = 0; i < k; i++) {
+                cost += Math.abs(titr.get(start + i).pka() - m.pka().get(i));
+            }
+            if (cost < bestCost) {
+                bestCost = cost;
+                bestStart = start;
+            }
         }
-        Arrays.sort(order, (a, b) -> Double.compare(titr.get(a).pka(), titr.get(b).pka()));
-        double[] shift = new double[titr.size()];
-        for (int iter = 0; iter < 60; iter++) {
-            List<EstimatedSite> trial = new ArrayList<>();
-            for (int i = 0; i < titr.size(); i++) {
-                trial.add(titr.get(i).shifted(shift[i], new Term("", 0, ""), "measured", 0));
-            }
-            List<Double> macro = MacroConstants.of(model(mol, withPermanent(est, trial), Conditions.noPh()),
-                    table.table().interaction().cutoff());
-            double worst = 0;
-            for (int k = 0; k < order.length; k++) {
-                double d = m.pka().get(k) - macro.get(k);
-                shift[order[k]] += d;
-                worst = Math.max(worst, Math.abs(d));
-            }
+        List<EstimatedSite> fitted = titr.subList(bestStart, bestStart + k);
+        double[] shift = new double[k];
+        for (int i = 0; i < k; i++) {
+            shift[i] = m.pka().get(i) - fitted.get(i).pka();
+        }
+        for (int iter = 0; iter < 40; iter++) {
+            double[] r = residual(mol, est, titr, fitted, shift, m);
+            double worst = Arrays.stream(r).map(Math::abs).max().orElse(0);
             if (worst < 1e-6) {
                 break;
             }
+            double[][] jac = new double[k][k];
+            for (int j = 0; j < k; j++) {
+                double[] trial = shift.clone();
+                trial[j] += 1e-4;
+                double[] rj = residual(mol, est, titr, fitted, trial, m);
+                for (int i = 0; i < k; i++) {
+                    jac[i][j] = (rj[i] - r[i]) / 1e-4;
+                }
+            }
+            double[] step = solveDamped(jac, r, 1e-3);
+            double norm = Arrays.stream(step).map(Math::abs).max().orElse(0);
+            double scale = norm > 1 ? 1 / norm : 1;
+            for (int j = 0; j < k; j++) {
+                shift[j] -= scale * step[j];
+            }
         }
         List<EstimatedSite> out = new ArrayList<>();
-        int t = 0;
         for (EstimatedSite s : est) {
-            if (s.site().group().permanent()) {
+            int idx = fitted.indexOf(s);
+            if (idx < 0) {
                 out.add(s);
                 continue;
             }
-            double d = shift[t++];
-            out.add(s.shifted(d, new Term(String.format(Locale.ROOT,
+            out.add(s.shifted(shift[idx], new Term(String.format(Locale.ROOT,
                     "measured compound %s: macroscopic pKa %s at %.0f °C (%s); site value set to reproduce it",
-                    m.name(), m.pka(), m.temperature(), m.method()), d, table.table().citation(m.source())),
+                    m.name(), m.pka(), m.temperature(), m.method()), shift[idx], table.table().citation(m.source())),
                     "measured", 0.05));
         }
         return out;
+    }
+
+    private double[] residual(IAtomContainer mol, List<EstimatedSite> all, List<EstimatedSite> titr,
+            List<EstimatedSite> fitted, double[] shift, MeasuredCompound m) {
+        List<EstimatedSite> trial = new ArrayList<>();
+        for (EstimatedSite s : all) {
+            int idx = fitted.indexOf(s);
+            trial.add(idx < 0 ? s : s.shifted(shift[idx], new Term("", 0, ""), "measured", 0));
+        }
+        List<Double> macro = MacroConstants.of(model(mol, trial, Conditions.noPh()), table.table().interaction()
+                .cutoff());
+        // compare the measured values with the macroscopic constants nearest in order
+        int k = m.pka().size();
+        int start = 0;
+        double bestCost = Double.MAX_VALUE;
+        for (int s0 = 0; s0 + k <= macro.size(); s0++) {
+            double cost = 0;
+            for (int i = 0; i < k; i++) {
+                cost += Math.abs(macro.get(s0 + i) - m.pka().get(i));
+            }
+            if (cost < bestCost) {
+                bestCost = cost;
+                start = s0;
+            }
+        }
+        double[] r = new double[k];
+        for (int i = 0; i < k; i++) {
+            r[i] = macro.get(start + i) - m.pka().get(i);
+        }
+        return r;
+    }
+
+    /** (JᵀJ + λI) x = Jᵀr by Gaussian elimination; k is small. */
+    private static double[] solveDamped(double[][] j, double[] r, double lambda) {
+        int k = r.length;
+        double[][] a = new double[k][k + 1];
+        for (int p = 0; p < k; p++) {
+            for (int q = 0; q < k; q++) {
+                double v = 0;
+                for (int i = 0; i < k; i++) {
+                    v += j[i][p] * j[i][q];
+                }
+                a[p][q] = v + (p == q ? lambda : 0);
+            }
+            double v = 0;
+            for (int i = 0; i < k; i++) {
+                v += j[i][p] * r[i];
+            }
+            a[p][k] = v;
+        }
+        for (int col = 0; col < k; col++) {
+            int piv = col;
+            for (int row = col + 1; row < k; row++) {
+                if (Math.abs(a[row][col]) > Math.abs(a[piv][col])) {
+                    piv = row;
+                }
+            }
+            double[] tmp = a[col];
+            a[col] = a[piv];
+            a[piv] = tmp;
+            if (Math.abs(a[col][col]) < 1e-15) {
+                continue;
+            }
+            for (int row = 0; row < k; row++) {
+                if (row != col) {
+                    double f = a[row][col] / a[col][col];
+                    for (int c = col; c <= k; c++) {
+                        a[row][c] -= f * a[col][c];
+                    }
+                }
+            }
+        }
+        double[] x = new double[k];
+        for (int p = 0; p < k; p++) {
+            x[p] = Math.abs(a[p][p]) < 1e-15 ? 0 : a[p][k] / a[p][p];
+        }
+        return x;
     }
 
     private static int permanentCharge(List<EstimatedSite> est) {
@@ -233,7 +334,11 @@ public final class Engine {
         if (p.measured().isEmpty() && !titr.isEmpty()) {
             warnings.add("pKa values are estimated, not measured");
         }
-        List<Double> macro = MacroConstants.of(p.model(), table.table().interaction().cutoff());
+        List<Double> macro = MacroConstants.of(p.model(), table.table().interaction().cutoff()).stream()
+                .filter(v -> v >= MACRO_LOW && v <= MACRO_HIGH).map(v -> Math.round(v * 100) / 100.0).toList();
+        if (p.measured().isPresent() && measuredFit(p)) {
+            macro = p.measured().get().pka();
+        }
         double logP = logP(mol);
         Double netCharge = null;
         Double neutral = null;
@@ -247,7 +352,16 @@ public final class Engine {
             sampled = pop.sampled();
             prot = pop.protonated();
             chargeStates = shift(pop.chargeStates(), p.permanentCharge());
-            netCharge = pop.meanCharge() + p.permanentCharge();
+            if (p.measured().isPresent() && measuredFit(p)) {
+                chargeStates = fromMeasured(p, c.ph());
+                corrections.add("charge states from the measured macroscopic constants of "
+                        + p.measured().get().name() + " (exact, independent of the site model)");
+            }
+            double mean = 0;
+            for (var e : chargeStates.entrySet()) {
+                mean += e.getKey() * e.getValue();
+            }
+            netCharge = mean;
             neutral = chargeStates.getOrDefault(0, 0.0);
             logD = Double.isNaN(logP) ? null : logP + Math.log10(Math.max(neutral, 1e-12));
             species = species(mol, titr, pop, p.permanentCharge());
@@ -340,6 +454,46 @@ public final class Engine {
 
     private static double round(double v) {
         return Math.round(v * 100) / 100.0;
+    }
+
+    private static boolean measuredFit(Problem p) {
+        return p.sites().stream().filter(s -> "measured".equals(s.basis())).count() == p.measured().get().pka().size();
+    }
+
+    /**
+     * Charge-state fractions from measured macroscopic constants: the state that has lost d protons
+     * has weight 10^(Σ_(j≤d) (pH − pK_j)). Sites without measured values stay in their dominant form.
+     */
+    private Map<Integer, Double> fromMeasured(Problem p, double ph) {
+        List<Double> pk = p.measured().get().pka();
+        int z0 = p.permanentCharge();
+        for (EstimatedSite s : p.sites()) {
+            if (s.site().group().permanent()) {
+                continue;
+            }
+            boolean base = s.site().group().type() == SiteType.BASE;
+            if ("measured".equals(s.basis())) {
+                z0 += base ? 1 : 0;
+            } else {
+                boolean dep = ph > s.pka();
+                z0 += base ? (dep ? 0 : 1) : (dep ? -1 : 0);
+            }
+        }
+        double[] logw = new double[pk.size() + 1];
+        double max = 0;
+        for (int d = 1; d <= pk.size(); d++) {
+            logw[d] = logw[d - 1] + ph - pk.get(d - 1);
+            max = Math.max(max, logw[d]);
+        }
+        double sum = 0;
+        for (double l : logw) {
+            sum += Math.pow(10, l - max);
+        }
+        Map<Integer, Double> out = new TreeMap<>();
+        for (int d = 0; d < logw.length; d++) {
+            out.merge(z0 - d, Math.pow(10, logw[d] - max) / sum, Double::sum);
+        }
+        return out;
     }
 
     private static Map<Integer, Double> shift(Map<Integer, Double> states, int by) {

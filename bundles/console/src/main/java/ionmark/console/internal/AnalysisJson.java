@@ -1,0 +1,117 @@
+package ionmark.console.internal;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Site;
+import ionmark.speciation.api.Species;
+import ionmark.speciation.api.Term;
+import ionmark.speciation.api.Window;
+
+/** The output contract shared by {@code check} and {@code batch}: one JSON object per record. */
+final class AnalysisJson {
+    static final ObjectMapper JSON = new ObjectMapper();
+
+    private AnalysisJson() {
+    }
+
+    static ObjectNode of(String id, Analysis a) {
+        ObjectNode o = JSON.createObjectNode();
+        if (id != null) {
+            o.put("id", id);
+        }
+        o.put("input", a.input());
+        if (!a.ok()) {
+            o.put("error", a.error());
+            o.put("tableVersion", a.tableVersion());
+            o.putArray("sites");
+            o.putArray("macroPka");
+            return o;
+        }
+        o.put("smiles", a.smiles());
+        ArrayNode sites = o.putArray("sites");
+        for (Site s : a.sites()) {
+            ObjectNode n = sites.addObject();
+            n.put("atom", s.atom());
+            n.put("element", s.element());
+            n.put("group", s.group());
+            n.put("groupName", s.groupName());
+            n.put("type", s.type());
+            num(n, "pka", s.pka());
+            n.put("sd", round(s.sd()));
+            if (s.protonated() != null) {
+                n.put("protonated", round4(s.protonated()));
+            } else {
+                n.putNull("protonated");
+            }
+            n.put("basis", s.basis());
+            n.put("permanent", s.permanent());
+            ArrayNode d = n.putArray("derivation");
+            for (Term t : s.derivation()) {
+                d.addObject().put("term", t.label()).put("value", round(t.value())).put("source", t.source());
+            }
+        }
+        ArrayNode macro = o.putArray("macroPka");
+        a.macroPka().forEach(v -> macro.add(round(v)));
+        ObjectNode c = o.putObject("conditions");
+        if (a.conditions().hasPh()) {
+            c.put("pH", a.conditions().ph());
+        } else {
+            c.putNull("pH");
+        }
+        c.put("temperatureC", a.conditions().temperature());
+        c.put("ionicStrengthM", a.conditions().ionicStrength());
+        nullable(o, "netCharge", a.netCharge());
+        nullable(o, "fractionNeutral", a.fractionNeutral());
+        ObjectNode cs = o.putObject("chargeStates");
+        a.chargeStates().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
+                .forEach(e -> cs.put(String.valueOf(e.getKey()), round4(e.getValue())));
+        ArrayNode sp = o.putArray("species");
+        for (Species s : a.species()) {
+            sp.addObject().put("smiles", s.smiles()).put("charge", s.charge()).put("fraction", round4(s.fraction()));
+        }
+        num(o, "logP", a.logP());
+        nullable(o, "logD", a.logD());
+        windows(o.putArray("neutralWindows"), a.neutralWindows());
+        windows(o.putArray("chargedWindows"), a.chargedWindows());
+        a.corrections().forEach(o.putArray("corrections")::add);
+        ArrayNode w = o.putArray("warnings");
+        a.warnings().forEach(w::add);
+        if (!a.stripped().isEmpty()) {
+            a.stripped().forEach(o.putArray("stripped")::add);
+        }
+        o.put("sampled", a.sampled());
+        o.put("tableVersion", a.tableVersion());
+        return o;
+    }
+
+    private static void windows(ArrayNode arr, java.util.List<Window> ws) {
+        ws.forEach(x -> arr.addArray().add(x.from()).add(x.to()));
+    }
+
+    private static void nullable(ObjectNode o, String k, Double v) {
+        if (v == null || v.isNaN()) {
+            o.putNull(k);
+        } else {
+            o.put(k, round4(v));
+        }
+    }
+
+    private static void num(ObjectNode o, String k, double v) {
+        if (Double.isNaN(v)) {
+            o.putNull(k);
+        } else {
+            o.put(k, round(v));
+        }
+    }
+
+    static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+
+    static double round4(double v) {
+        return Math.round(v * 10000) / 10000.0;
+    }
+}

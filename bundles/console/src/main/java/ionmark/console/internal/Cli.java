@@ -1,0 +1,247 @@
+package ionmark.console.internal;
+
+import java.io.IOException;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+
+import ionmark.acidity.api.TableService;
+import ionmark.acidity.api.ValidationReport;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.Speciation;
+
+/**
+ * The command line: {@code check}, {@code batch}, {@code table}. Exit codes: 0 done, 1 the input
+ * could not be analysed or the table has errors, 2 usage.
+ */
+public final class Cli {
+    static final String USAGE = """
+            usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
+                   ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M]
+                   ionmark table validate FILE | table export [--out FILE]""";
+
+    private final Speciation speciation;
+    private final TableService tables;
+    private final PrintStream out;
+    private final PrintStream err;
+
+    public Cli(Speciation speciation, TableService tables, PrintStream out, PrintStream err) {
+        this.speciation = speciation;
+        this.tables = tables;
+        this.out = out;
+        this.err = err;
+    }
+
+    /** Runs one command line; never throws for bad arguments. */
+    public int run(List<String> args) {
+        if (args.isEmpty()) {
+            return usage("no command given");
+        }
+        try {
+            return switch (args.get(0)) {
+                case "check" -> check(args.subList(1, args.size()));
+                case "batch" -> batch(args.subList(1, args.size()));
+                case "table" -> table(args.subList(1, args.size()));
+                default -> usage("unknown command '" + args.get(0) + "'");
+            };
+        } catch (UsageException e) {
+            return usage(e.getMessage());
+        }
+    }
+
+    private int usage(String why) {
+        err.println("ionmark: " + why);
+        err.println(USAGE);
+        return 2;
+    }
+
+    static final class UsageException extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        UsageException(String m) {
+            super(m);
+        }
+    }
+
+    /** Flags and positionals. */
+    record Args(List<String> positional, java.util.Map<String, String> flags) {
+        static Args parse(List<String> raw, java.util.Set<String> known) {
+            List<String> pos = new ArrayList<>();
+            java.util.Map<String, String> flags = new java.util.HashMap<>();
+            for (int i = 0; i < raw.size(); i++) {
+                String a = raw.get(i);
+                if (a.startsWith("--")) {
+                    if (!known.contains(a)) {
+                        throw new UsageException("unknown option '" + a + "'");
+                    }
+                    if (i + 1 >= raw.size()) {
+                        throw new UsageException("option " + a + " needs a value");
+                    }
+                    flags.put(a, raw.get(++i));
+                } else {
+                    pos.add(a);
+                }
+            }
+            return new Args(pos, flags);
+        }
+
+        Conditions conditions() {
+            Double ph = flags.containsKey("--ph") ? number("--ph") : null;
+            double t = flags.containsKey("--temp") ? number("--temp") : Conditions.STANDARD_TEMPERATURE;
+            double i = flags.containsKey("--ionic") ? number("--ionic") : 0.0;
+            try {
+                return new Conditions(ph, t, i);
+            } catch (IllegalArgumentException e) {
+                throw new UsageException(e.getMessage());
+            }
+        }
+
+        double number(String flag) {
+            String v = flags.get(flag);
+            try {
+                return Double.parseDouble(v);
+            } catch (NumberFormatException e) {
+                throw new UsageException(flag + " needs a number, not '" + v + "'");
+            }
+        }
+    }
+
+    private int check(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--ph", "--temp", "--ionic", "--format"));
+        if (a.positional().size() != 1) {
+            throw new UsageException("check takes one structure (SMILES or file)");
+        }
+        String format = a.flags().getOrDefault("--format", "text");
+        if (!format.equals("text") && !format.equals("json")) {
+            throw new UsageException("--format must be text or json, not '" + format + "'");
+        }
+        Conditions c = a.conditions();
+        String input = a.positional().get(0);
+        Path p = Path.of(input.length() < 250 && !input.contains("\n") ? input : ".");
+        if (!input.isBlank() && Files.isRegularFile(p)) {
+            try {
+                input = Files.readString(p, StandardCharsets.UTF_8);
+            } catch (IOException e) {
+                err.println("ionmark: cannot read " + p + ": " + e.getMessage());
+                return 1;
+            }
+        }
+        Analysis r = speciation.analyse(input, c);
+        if (format.equals("json")) {
+            out.println(AnalysisJson.of(null, r).toString());
+        } else {
+            out.print(TextReport.of(r));
+        }
+        if (!r.ok()) {
+            err.println("ionmark: " + r.error());
+            return 1;
+        }
+        return 0;
+    }
+
+    private int batch(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--in", "--out", "--ph", "--temp", "--ionic"));
+        if (!a.flags().containsKey("--in")) {
+            throw new UsageException("batch needs --in FILE");
+        }
+        Conditions c = a.conditions();
+        List<Records.Item> items;
+        try {
+            items = Records.read(Path.of(a.flags().get("--in")));
+        } catch (IOException e) {
+            err.println("ionmark: cannot read " + a.flags().get("--in") + ": " + e.getMessage());
+            return 1;
+        }
+        PrintStream target = out;
+        try {
+            if (a.flags().containsKey("--out")) {
+                target = new PrintStream(Files.newOutputStream(Path.of(a.flags().get("--out"))), false,
+                        StandardCharsets.UTF_8);
+            }
+            runBatch(items, c, target);
+        } catch (IOException e) {
+            err.println("ionmark: cannot write " + a.flags().get("--out") + ": " + e.getMessage());
+            return 1;
+        } finally {
+            if (target != out) {
+                target.close();
+            }
+        }
+        return 0;
+    }
+
+    private void runBatch(List<Records.Item> items, Conditions c, PrintStream target) {
+        int cores = Math.max(1, Runtime.getRuntime().availableProcessors());
+        ExecutorService pool = Executors.newFixedThreadPool(cores);
+        try {
+            List<Future<String>> futures = new ArrayList<>();
+            for (Records.Item it : items) {
+                futures.add(pool.submit(() -> it.error() != null
+                        ? AnalysisJson.of(it.id(), Analysis.failed(it.structure(), c, "", it.error())).toString()
+                        : AnalysisJson.of(it.id(), speciation.analyse(it.structure(), c)).toString()));
+            }
+            Progress bar = new Progress(err, items.size());
+            for (int i = 0; i < futures.size(); i++) {
+                try {
+                    target.println(futures.get(i).get());
+                } catch (Exception e) {
+                    target.println(AnalysisJson.of(items.get(i).id(), Analysis.failed(items.get(i).structure(), c, "",
+                            "internal error: " + e)).toString());
+                }
+                bar.step(i + 1);
+            }
+            bar.done();
+        } finally {
+            pool.shutdownNow();
+        }
+    }
+
+    private int table(List<String> raw) {
+        if (raw.isEmpty()) {
+            throw new UsageException("table needs a subcommand: validate FILE | export [--out FILE]");
+        }
+        switch (raw.get(0)) {
+            case "validate" -> {
+                if (raw.size() != 2) {
+                    throw new UsageException("table validate takes one FILE");
+                }
+                String text;
+                try {
+                    text = Files.readString(Path.of(raw.get(1)), StandardCharsets.UTF_8);
+                } catch (IOException e) {
+                    err.println("ionmark: cannot read " + raw.get(1) + ": " + e.getMessage());
+                    return 1;
+                }
+                ValidationReport r = tables.validate(text);
+                r.problems().forEach(out::println);
+                out.println(String.format(Locale.ROOT, "%d errors, %d warnings", r.errors().size(),
+                        r.warnings().size()));
+                return r.ok() ? 0 : 1;
+            }
+            case "export" -> {
+                Args a = Args.parse(raw.subList(1, raw.size()), java.util.Set.of("--out"));
+                String json = tables.toJson(tables.current());
+                if (a.flags().containsKey("--out")) {
+                    try {
+                        Files.writeString(Path.of(a.flags().get("--out")), json, StandardCharsets.UTF_8);
+                    } catch (IOException e) {
+                        err.println("ionmark: cannot write: " + e.getMessage());
+                        return 1;
+                    }
+                } else {
+                    out.print(json);
+                }
+                return 0;
+            }
+            default -> throw new UsageException("unknown table subcommand '" + raw.get(0) + "'");
+        }
+    }
+}

@@ -1,0 +1,91 @@
+package ionmark.host.internal;
+
+import java.util.List;
+import java.util.Map;
+
+import ionmark.host.api.Block;
+import ionmark.host.api.Entry;
+import ionmark.host.api.SidePanel;
+
+/** HTML of the web shell. Everything from entries is escaped here; contributed HTML is placed as is. */
+final class Pages {
+    private Pages() {
+    }
+
+    static String esc(String s) {
+        return s == null ? "" : s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
+                .replace("\"", "&quot;").replace("'", "&#39;");
+    }
+
+    static String page(String title, String body) {
+        return "<!doctype html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + esc(title)
+                + " · Ionmark notebook</title><style>" + STYLE + "</style></head><body><header><a href=\"/\">Ionmark "
+                + "notebook</a> <a href=\"/panel/quick-check\">Quick check</a></header><main>" + body
+                + "</main></body></html>";
+    }
+
+    static String list(List<String> ids, List<SidePanel> panels) {
+        StringBuilder sb = new StringBuilder("<h1>Entries</h1><ul class=\"entries\">");
+        for (String id : ids) {
+            sb.append("<li><a href=\"/entry/").append(esc(id)).append("\">").append(esc(id)).append("</a></li>");
+        }
+        sb.append("</ul><h2>Panels</h2><ul>");
+        for (SidePanel p : panels) {
+            sb.append("<li><a href=\"/panel/").append(esc(p.id())).append("\">").append(esc(p.title()))
+                    .append("</a></li>");
+        }
+        return sb.append("</ul>").toString();
+    }
+
+    static String entry(Entry e, Map<Integer, List<String>> decorations, List<SidePanel> panels) {
+        return "<article><p><a href=\"/entry/" + esc(e.id()) + "/edit\">Edit</a></p>" + body(e, decorations)
+                + "</article>";
+    }
+
+    static String body(Entry e, Map<Integer, List<String>> decorations) {
+        StringBuilder sb = new StringBuilder();
+        List<Block> blocks = e.blocks();
+        for (int i = 0; i < blocks.size(); i++) {
+            Block b = blocks.get(i);
+            switch (b.kind()) {
+                case STRUCTURE -> sb.append("<pre class=\"structure\">").append(esc(b.content().strip()))
+                        .append(b.ph() == null ? "" : "  [pH " + b.ph() + "]").append("</pre>");
+                case TABLE -> sb.append("<pre class=\"table\">").append(esc(b.content())).append("</pre>");
+                default -> {
+                    String c = b.content();
+                    if (c.startsWith("# ")) {
+                        sb.append("<h1>").append(esc(c.substring(2))).append("</h1>");
+                    } else if (c.startsWith("#")) {
+                        sb.append("<h2>").append(esc(c.replaceFirst("^#+\\s*", ""))).append("</h2>");
+                    } else {
+                        sb.append("<p>").append(esc(c)).append("</p>");
+                    }
+                }
+            }
+            for (String html : decorations.getOrDefault(i, List.of())) {
+                sb.append(html);
+            }
+        }
+        return sb.toString();
+    }
+
+    static String editor(String id, String text, String token) {
+        return "<h1>Edit " + esc(id) + "</h1><form method=\"post\" action=\"/entry/" + esc(id) + "\">"
+                + "<input type=\"hidden\" name=\"token\" value=\"" + esc(token) + "\"><textarea id=\"text\" name=\"text\" "
+                + "rows=\"24\" cols=\"90\">" + esc(text) + "</textarea><p><button type=\"submit\">Save</button></p>"
+                + "</form><h2>Preview</h2><div id=\"preview\" aria-live=\"polite\"></div><script>"
+                + "const t=document.getElementById('text'),p=document.getElementById('preview');let h;"
+                + "function r(){fetch('/preview',{method:'POST',headers:{'X-Ionmark-Token':'" + esc(token) + "'},"
+                + "body:t.value}).then(x=>x.text()).then(x=>{p.innerHTML=x;});}"
+                + "t.addEventListener('input',()=>{clearTimeout(h);h=setTimeout(r,300);});r();</script>";
+    }
+
+    static final String STYLE = "body{font-family:sans-serif;max-width:980px;margin:0 auto;padding:0 1em;color:#1a1a1a}"
+            + "header{padding:.6em 0;border-bottom:2px solid #333}header a{margin-right:1em;font-weight:bold}"
+            + ".im-card{border:2px solid #444;border-radius:6px;padding:.6em;margin:.6em 0 1.4em;background:#fbfbf7}"
+            + ".im-card:focus{outline:3px dashed #000}.im-sites{border-collapse:collapse;margin:.4em 0}"
+            + ".im-sites td,.im-sites th{border:1px solid #999;padding:.2em .5em;text-align:left}"
+            + ".im-caution{font-size:.85em;border-left:4px solid #333;padding-left:.5em}"
+            + ".im-error{color:#8a0000;font-weight:bold}pre.structure{background:#eee;padding:.4em}"
+            + "cite{font-size:.8em;color:#444}";
+}
