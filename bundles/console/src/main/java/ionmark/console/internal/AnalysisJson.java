@@ -72,6 +72,7 @@ final class AnalysisJson {
         for (Species s : a.species()) {
             sp.addObject().put("smiles", s.smiles()).put("charge", s.charge()).put("fraction", round4(s.fraction()));
         }
+        nullable(o, "isoelectricPoint", a.isoelectricPoint());
         num(o, "logP", a.logP());
         nullable(o, "logD", a.logD());
         windows(o.putArray("neutralWindows"), a.neutralWindows());

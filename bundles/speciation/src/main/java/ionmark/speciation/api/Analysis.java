@@ -17,6 +17,7 @@ import java.util.Map;
  * @param fractionNeutral fraction with net charge 0 (null without pH)
  * @param chargeStates   fraction per net charge (empty without pH)
  * @param species        leading microstates, largest first (empty without pH)
+ * @param isoelectricPoint pH of zero mean charge for an ampholyte (acid and base sites), else null
  * @param logP           octanol/water logP of the neutral form (CDK JPlogP), NaN if unavailable
  * @param logD           logD at the stated pH from the neutral fraction (null without pH)
  * @param neutralWindows pH ranges (0–14) in which at least 99 % is neutral
@@ -29,7 +30,7 @@ import java.util.Map;
  */
 public record Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
         Conditions conditions, Double netCharge, Double fractionNeutral, Map<Integer, Double> chargeStates,
-        List<Species> species, double logP, Double logD, List<Window> neutralWindows, List<Window> chargedWindows,
+        List<Species> species, Double isoelectricPoint, double logP, Double logD, List<Window> neutralWindows, List<Window> chargedWindows,
         List<String> corrections, List<String> warnings, boolean sampled, String tableVersion, String error) {
 
     public Analysis {
@@ -45,7 +46,7 @@ public record Analysis(String input, String smiles, List<String> stripped, List<
     }
 
     public static Analysis failed(String input, Conditions c, String tableVersion, String error) {
-        return new Analysis(input, "", List.of(), List.of(), List.of(), c, null, null, Map.of(), List.of(), Double.NaN,
+        return new Analysis(input, "", List.of(), List.of(), List.of(), c, null, null, Map.of(), List.of(), null, Double.NaN,
                 null, List.of(), List.of(), List.of(), List.of(), false, tableVersion, error);
     }
 

@@ -80,6 +80,10 @@ public final class Engine {
             return analyse(input, c, p, version);
         } catch (StructureException e) {
             return Analysis.failed(input, c, version, e.getMessage());
+        } catch (RuntimeException e) {
+            // a structure that slips past the reader's checks must not break the caller
+            return Analysis.failed(input, c, version, "cannot analyse this structure ("
+                    + String.valueOf(e.getMessage()).lines().findFirst().orElse(e.getClass().getSimpleName()) + ")");
         }
     }
 
@@ -393,7 +397,7 @@ public final class Engine {
         windows(p, neutralWindows, chargedWindows);
         warnings.add(CAUTION);
         return new Analysis(input, p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
-                chargeStates, species, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
+                chargeStates, species, isoelectricPoint(p), logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
                 null);
     }
 
@@ -423,13 +427,60 @@ public final class Engine {
         return new Curve(ph, mean, site, states);
     }
 
+    /**
+     * The isoelectric point of an ampholyte: the pH where the mean charge is zero, by bisection on
+     * the mean charge (monotone in pH) over −2…16. Null when the structure is not an ampholyte.
+     */
+    Double isoelectricPoint(Problem p) {
+        boolean acid = false;
+        boolean base = p.permanentCharge() > 0;
+        for (EstimatedSite s : p.sites()) {
+            if (!s.site().group().permanent()) {
+                acid |= s.site().group().type() == SiteType.ACID;
+                base |= s.site().group().type() == SiteType.BASE;
+            }
+        }
+        if (!acid || !base) {
+            return null;
+        }
+        double lo = -2;
+        double hi = 16;
+        if (meanCharge(p, lo) < 0 || meanCharge(p, hi) > 0) {
+            return null;
+        }
+        for (int i = 0; i < 60; i++) {
+            double mid = (lo + hi) / 2;
+            if (meanCharge(p, mid) > 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.round((lo + hi) / 2 * 1000) / 1000.0;
+    }
+
+    private double meanCharge(Problem p, double ph) {
+        double m = 0;
+        for (var e : chargeStatesAt(p, ph).entrySet()) {
+            m += e.getKey() * e.getValue();
+        }
+        return m;
+    }
+
+    /** Fractions per net charge: from measured constants for an exact match, else from the site model. */
+    private Map<Integer, Double> chargeStatesAt(Problem p, double ph) {
+        if (p.measured().isPresent() && measuredFit(p)) {
+            return fromMeasured(p, ph);
+        }
+        return shift(solver.solve(p.model(), ph).chargeStates(), p.permanentCharge());
+    }
+
     private void windows(Problem p, List<Window> neutral, List<Window> charged) {
         Double nStart = null;
         Double cStart = null;
         double last = 0;
         for (double ph = 0; ph <= 14 + 1e-9; ph += WINDOW_STEP) {
-            Populations pop = solver.solve(p.model(), ph);
-            double f0 = shift(pop.chargeStates(), p.permanentCharge()).getOrDefault(0, 0.0);
+            double f0 = chargeStatesAt(p, ph).getOrDefault(0, 0.0);
             if (f0 >= 0.99 && nStart == null) {
                 nStart = ph;
             } else if (f0 < 0.99 && nStart != null) {

@@ -14,7 +14,10 @@ import java.util.TreeMap;
  * Exact microstate populations by enumeration, reduced first:
  * <ol>
  * <li>a site whose pKa lies more than {@link #FIX_MARGIN} + Σ|W| units from the pH is held in its
- * dominant state (its minority fraction is below 1e−7 for any state of the others);</li>
+ * dominant state while the others are solved (its minority fraction is below 1e−10 for any state of
+ * the others, so no other fraction moves by more than that); its own fraction is then
+ * Henderson–Hasselbalch in the mean field of the others, and it enters the charge distribution as
+ * an independent two-state site;</li>
  * <li>the remaining sites split into clusters that interact above the cutoff; clusters are solved
  * separately and combined as independent;</li>
  * <li>a cluster larger than {@link #EXACT_LIMIT} sites is sampled by Metropolis Monte Carlo with a
@@ -22,7 +25,7 @@ import java.util.TreeMap;
  * </ol>
  */
 public final class MicrostateSolver {
-    public static final double FIX_MARGIN = 7.0;
+    public static final double FIX_MARGIN = 10.0;
     public static final int EXACT_LIMIT = 20;
     static final int TOP = 12;
 
@@ -72,19 +75,7 @@ public final class MicrostateSolver {
         }
         List<int[]> clusters = clusters(m, isFixed);
         double[] prot = new double[n];
-        for (int i = 0; i < n; i++) {
-            if (isFixed[i]) {
-                prot[i] = fixedState[i] ? 0 : 1;
-            }
-        }
-        // charge distribution: start with the fixed sites' charge
-        int fixedCharge = 0;
-        for (int i = 0; i < n; i++) {
-            if (isFixed[i]) {
-                fixedCharge += (int) m.charge(i, fixedState[i]);
-            }
-        }
-        Map<Integer, Double> dist = new TreeMap<>(Map.of(fixedCharge, 1.0));
+        Map<Integer, Double> dist = new TreeMap<>(Map.of(0, 1.0));
         List<Populations.Microstate> top = List.of(new Populations.Microstate(fixedState.clone(), 1.0));
         boolean sampled = false;
         double se = 0;
@@ -97,6 +88,26 @@ public final class MicrostateSolver {
             }
             dist = convolve(dist, r.charge);
             top = combine(top, c, r.top);
+        }
+        // held sites: Henderson–Hasselbalch in the mean field of all the others
+        for (int i = 0; i < n; i++) {
+            if (!isFixed[i]) {
+                continue;
+            }
+            double field = m.background()[i];
+            for (int j = 0; j < n; j++) {
+                if (j == i) {
+                    continue;
+                }
+                double qj = isFixed[j] ? m.charge(j, fixedState[j])
+                        : prot[j] * m.charge(j, false) + (1 - prot[j]) * m.charge(j, true);
+                field += m.w()[i][j] * qj;
+            }
+            prot[i] = 1 / (1 + Math.pow(10, ph - m.pka()[i] + field));
+            Map<Integer, Double> two = new TreeMap<>();
+            two.merge((int) m.charge(i, false), prot[i], Double::sum);
+            two.merge((int) m.charge(i, true), 1 - prot[i], Double::sum);
+            dist = convolve(dist, two);
         }
         double mean = 0;
         for (var e : dist.entrySet()) {

@@ -104,12 +104,19 @@ public final class StructureReader {
             if (record.contains("V3000")) {
                 try (MDLV3000Reader r = new MDLV3000Reader(new StringReader(record))) {
                     IAtomContainer mol = r.read(empty);
+                    if (mol == null) {
+                        throw new StructureException("cannot read molfile: the V3000 record is damaged or incomplete");
+                    }
                     addImplicitHydrogens(mol);
                     return mol;
                 }
             }
             try (MDLV2000Reader r = new MDLV2000Reader(new StringReader(record))) {
-                return r.read(empty);
+                IAtomContainer mol = r.read(empty);
+                if (mol == null) {
+                    throw new StructureException("cannot read molfile: the record is damaged or incomplete");
+                }
+                return mol;
             }
         } catch (CDKException | java.io.IOException | RuntimeException e) {
             throw new StructureException("cannot read molfile: " + String.valueOf(e.getMessage()).lines().findFirst()

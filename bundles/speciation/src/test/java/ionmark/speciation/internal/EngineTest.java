@@ -1,0 +1,147 @@
+package ionmark.speciation.internal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.Map;
+
+import org.junit.jupiter.api.Test;
+
+import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Conditions;
+
+/** The engine with the shipped table's measured values (25 °C values quoted from the CRC Handbook, from memory). */
+class EngineTest {
+    static final Engine ENGINE = new Engine(TableSnapshotService.shipped(), 300);
+
+    static Analysis at(String smiles, double ph) {
+        Analysis a = ENGINE.analyse(smiles, Conditions.atPh(ph));
+        assertTrue(a.ok(), a.error());
+        return a;
+    }
+
+    @Test
+    void phosphoricAcidIsHalfDihydrogenHalfHydrogenPhosphateAtPh720() {
+        // pKa2 of phosphoric acid 7.20 (CRC): H2PO4− and HPO4 2− in equal amounts at pH 7.20
+        Map<Integer, Double> cs = at("OP(=O)(O)O", 7.20).chargeStates();
+        assertEquals(0.5, cs.get(-1) / (cs.get(-1) + cs.get(-2)), 1e-6);
+        assertEquals(cs.get(-1), cs.get(-2), 0.01);
+    }
+
+    @Test
+    void glycineIsoelectricPointIsTheMeanOfItsTwoConstants() {
+        // glycine pKa 2.35 and 9.78 (CRC): pI = (2.35 + 9.78) / 2 = 6.065
+        Analysis a = at("NCC(=O)O", 7.0);
+        assertNotNull(a.isoelectricPoint());
+        assertEquals((2.35 + 9.78) / 2, a.isoelectricPoint(), 0.005);
+    }
+
+    @Test
+    void citricAcidChargeStatesAtPh476FollowItsThreeConstants() {
+        // citric acid pKa 3.13, 4.76, 6.40 (CRC); fractions of H3A, H2A−, HA2−, A3− computed here directly
+        double ph = 4.76;
+        double[] pk = {3.13, 4.76, 6.40};
+        double[] w = new double[4];
+        w[0] = 1;
+        for (int d = 1; d <= 3; d++) {
+            w[d] = w[d - 1] * Math.pow(10, ph - pk[d - 1]);
+        }
+        double sum = w[0] + w[1] + w[2] + w[3];
+        Map<Integer, Double> cs = at("OC(=O)CC(O)(CC(=O)O)C(=O)O", ph).chargeStates();
+        for (int d = 0; d <= 3; d++) {
+            assertEquals(w[d] / sum, cs.getOrDefault(-d, 0.0), 1e-6, "charge " + (-d));
+        }
+    }
+
+    @Test
+    void measuredValuesOverrideTheEstimate() {
+        Analysis a = at("CC(=O)O", 7);
+        assertEquals("measured", a.sites().get(0).basis());
+        assertEquals(4.76, a.macroPka().get(0), 1e-9);
+    }
+
+    @Test
+    void acidWithoutBaseHasNoIsoelectricPoint() {
+        assertNull(at("CC(=O)O", 7).isoelectricPoint());
+    }
+
+    @Test
+    void saltIsAnalysedAsItsParentAndTheCounterionNamed() {
+        Analysis a = at("CC(=O)[O-].[Na+]", 7);
+        assertEquals(1, a.stripped().size());
+        assertTrue(a.stripped().get(0).contains("Na"));
+        assertEquals(4.76, a.sites().get(0).pka(), 0.01);
+    }
+
+    @Test
+    void ionisedInputIsTakenBackToItsReferenceForm() {
+        // ethylammonium written as the cation: same site and value as ethylamine
+        assertEquals(at("CCN", 7).sites().get(0).pka(), at("CC[NH3+]", 7).sites().get(0).pka(), 1e-9);
+    }
+
+    @Test
+    void permanentChargeIsCountedButNotTitrated() {
+        Analysis a = at("C[N+](C)(C)CC(=O)O", 7);
+        assertTrue(a.sites().stream().anyMatch(s -> s.permanent()));
+        assertEquals(0.0, a.netCharge(), 0.05); // betaine-like: +1 fixed, −1 carboxylate
+    }
+
+    @Test
+    void higherTemperatureLowersAnAmmoniumPka() {
+        // ammonium ionization enthalpy +52 kJ/mol (CRC): van 't Hoff lowers pKa by about 0.3 from 25 to 37 °C
+        Analysis warm = ENGINE.analyse("CCCCN", new Conditions(7.0, 37, 0));
+        Analysis std = ENGINE.analyse("CCCCN", Conditions.atPh(7.0));
+        double d = warm.sites().get(0).pka() - std.sites().get(0).pka();
+        assertTrue(d < -0.2 && d > -0.5, "shift " + d);
+        assertTrue(warm.corrections().stream().anyMatch(c -> c.contains("temperature")));
+    }
+
+    @Test
+    void ionicStrengthMakesAcidsStrongerAndWarnsAboveHalfMolar() {
+        Analysis salty = ENGINE.analyse("CCCC(=O)O", new Conditions(7.0, 25, 0.15));
+        Analysis std = ENGINE.analyse("CCCC(=O)O", Conditions.atPh(7.0));
+        // Davies at I = 0.15 M: log γ(−1) = −0.51·(0.387/1.387 − 0.045) ≈ −0.119
+        assertEquals(-0.119, salty.sites().get(0).pka() - std.sites().get(0).pka(), 0.005);
+        Analysis strong = ENGINE.analyse("CCCC(=O)O", new Conditions(7.0, 25, 1.0));
+        assertTrue(strong.warnings().stream().anyMatch(w -> w.contains("0.5 M")));
+    }
+
+    @Test
+    void badConditionsAreRefusedWithAClearMessage() {
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> Conditions.atPh(16.5)).getMessage()
+                .contains("pH"));
+        assertThrows(IllegalArgumentException.class, () -> Conditions.atPh(-2.5));
+        assertThrows(IllegalArgumentException.class, () -> Conditions.atPh(Double.NaN));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new Conditions(7.0, 120, 0)).getMessage()
+                .contains("temperature"));
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> new Conditions(7.0, 25, -0.1)).getMessage()
+                .contains("ionic strength"));
+    }
+
+    @Test
+    void badStructuresGiveOneLineErrors() {
+        for (String bad : new String[] {"", "C1CC(", "CC(C)(C)(C)(C)C", "[Xx]CC", "not a molecule"}) {
+            Analysis a = ENGINE.analyse(bad, Conditions.atPh(7));
+            assertTrue(!a.ok(), "accepted: " + bad);
+            assertTrue(!a.error().contains("\n"), "multi-line error for " + bad + ": " + a.error());
+        }
+    }
+
+    @Test
+    void oversizedMoleculesAreRefused() {
+        Analysis a = new Engine(TableSnapshotService.shipped(), 10).analyse("CCCCCCCCCCCC(=O)O", Conditions.atPh(7));
+        assertTrue(a.error().contains("limit"), a.error());
+    }
+
+    @Test
+    void eachSiteReportsItsDerivation() {
+        Analysis a = at("OC(=O)c1ccc(cc1)[N+](=O)[O-]", 7);
+        var terms = a.sites().get(0).derivation();
+        assertTrue(terms.size() >= 2, terms.toString());
+        assertTrue(terms.get(0).label().contains("class"));
+    }
+}
