@@ -36,6 +36,8 @@ import ionmark.acidity.api.ValidationReport;
 @Designate(ocd = TableConfiguration.class)
 public final class TableSnapshotService implements TableService {
     static final String SHIPPED = "/ionmark/acidity/internal/default-table.json";
+    /** System property naming a table file when the configuration names none (the launcher's IONMARK_TABLE). */
+    static final String TABLE_FILE_PROPERTY = "ionmark.table.file";
 
     private final AtomicReference<AcidityTable> current = new AtomicReference<>();
     private final List<TableListener> listeners = new CopyOnWriteArrayList<>();
@@ -50,6 +52,9 @@ public final class TableSnapshotService implements TableService {
     public TableSnapshotService(TableConfiguration config) {
         current.set(shipped());
         String file = config == null ? "" : config.tableFile().strip();
+        if (file.isEmpty()) {
+            file = System.getProperty(TABLE_FILE_PROPERTY, "").strip();
+        }
         if (!file.isEmpty()) {
             Path path = Path.of(file);
             if (config.pollSeconds() < 1) {

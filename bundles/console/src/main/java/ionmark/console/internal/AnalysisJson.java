@@ -32,7 +32,13 @@ final class AnalysisJson {
         }
         o.put("smiles", a.smiles());
         ArrayNode sites = o.putArray("sites");
+        ArrayNode fixed = o.putArray("fixedCharges");
         for (Site s : a.sites()) {
+            if (s.permanent()) {
+                fixed.addObject().put("atom", s.atom()).put("element", s.element()).put("group", s.group())
+                        .put("charge", s.type().equals("base") ? 1 : -1);
+                continue;
+            }
             ObjectNode n = sites.addObject();
             n.put("atom", s.atom());
             n.put("element", s.element());
@@ -47,7 +53,6 @@ final class AnalysisJson {
                 n.putNull("protonated");
             }
             n.put("basis", s.basis());
-            n.put("permanent", s.permanent());
             ArrayNode d = n.putArray("derivation");
             for (Term t : s.derivation()) {
                 d.addObject().put("term", t.label()).put("value", round(t.value())).put("source", t.source());

@@ -16,7 +16,9 @@ import ionmark.acidity.api.TableService;
 import ionmark.acidity.api.ValidationReport;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.TableCalibration;
 
 /**
  * The command line: {@code check}, {@code batch}, {@code table}. Exit codes: 0 done, 1 the input
@@ -26,16 +28,21 @@ public final class Cli {
     static final String USAGE = """
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M]
-                   ionmark table validate FILE | table export [--out FILE]""";
+                   ionmark accuracy --truth FILE [--out DIR] [--fold K/N]
+                   ionmark table validate FILE | table export [--out FILE]
+                   ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]""";
 
     private final Speciation speciation;
     private final TableService tables;
+    private final TableCalibration calibration;
     private final PrintStream out;
     private final PrintStream err;
 
-    public Cli(Speciation speciation, TableService tables, PrintStream out, PrintStream err) {
+    public Cli(Speciation speciation, TableService tables, TableCalibration calibration, PrintStream out,
+            PrintStream err) {
         this.speciation = speciation;
         this.tables = tables;
+        this.calibration = calibration;
         this.out = out;
         this.err = err;
     }
@@ -50,6 +57,7 @@ public final class Cli {
                 case "check" -> check(args.subList(1, args.size()));
                 case "batch" -> batch(args.subList(1, args.size()));
                 case "table" -> table(args.subList(1, args.size()));
+                case "accuracy" -> accuracy(args.subList(1, args.size()));
                 default -> usage("unknown command '" + args.get(0) + "'");
             };
         } catch (UsageException e) {
@@ -241,7 +249,91 @@ public final class Cli {
                 }
                 return 0;
             }
+            case "calibrate" -> {
+                return calibrate(raw.subList(1, raw.size()));
+            }
             default -> throw new UsageException("unknown table subcommand '" + raw.get(0) + "'");
         }
+    }
+
+    /** "K/N" → {k, n}, or null when absent. */
+    private static int[] fold(String spec) {
+        if (spec == null) {
+            return null;
+        }
+        String[] kn = spec.split("/");
+        try {
+            int k = Integer.parseInt(kn[0]);
+            int n = Integer.parseInt(kn[1]);
+            if (n < 2 || k < 0 || k >= n) {
+                throw new NumberFormatException();
+            }
+            return new int[] {k, n};
+        } catch (RuntimeException e) {
+            throw new UsageException("--fold needs K/N with 0 <= K < N, N >= 2, not '" + spec + "'");
+        }
+    }
+
+    private List<Observation> truth(Args a) {
+        if (!a.flags().containsKey("--truth")) {
+            throw new UsageException("--truth FILE is required");
+        }
+        try {
+            return Accuracy.readTruth(Path.of(a.flags().get("--truth")));
+        } catch (IOException | RuntimeException e) {
+            throw new UsageException("cannot read truth file: " + e.getMessage());
+        }
+    }
+
+    private int accuracy(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--fold"));
+        int[] f = fold(a.flags().get("--fold"));
+        List<Observation> data = truth(a).stream().filter(o -> f == null || Accuracy.inFold(o.id(), f[0], f[1]))
+                .toList();
+        Path dir = Path.of(a.flags().getOrDefault("--out", "accuracy-report"));
+        try {
+            Files.createDirectories(dir);
+            try (PrintStream jsonl = new PrintStream(Files.newOutputStream(dir.resolve("predictions.jsonl")), false,
+                    StandardCharsets.UTF_8)) {
+                List<Accuracy.Scored> scored = Accuracy.run(speciation, data, jsonl, new Progress(err, data.size()));
+                Accuracy.Summary sum = Accuracy.summarise(scored, speciation);
+                Accuracy.report(scored, sum, dir, a.flags().getOrDefault("--truth", "") + (f == null ? ""
+                        : " (fold " + f[0] + "/" + f[1] + ")") + ", table " + tables.current().version().label());
+                out.println(sum.line());
+                out.println("report: " + dir.resolve("report.md"));
+            }
+        } catch (IOException e) {
+            err.println("ionmark: cannot write the report: " + e.getMessage());
+            return 1;
+        }
+        return 0;
+    }
+
+    private int calibrate(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--ref", "--citation", "--fold"));
+        if (!a.flags().containsKey("--out")) {
+            throw new UsageException("table calibrate needs --out FILE");
+        }
+        int[] f = fold(a.flags().get("--fold"));
+        List<Observation> data = truth(a).stream().filter(o -> f == null || !Accuracy.inFold(o.id(), f[0], f[1]))
+                .toList();
+        String ref = a.flags().getOrDefault("--ref", "calibration");
+        String citation = a.flags().getOrDefault("--citation", "Calibration data " + a.flags().get("--truth") + ".");
+        TableCalibration.Result r = calibration.calibrate(tables.current(), data, ref, citation);
+        for (var fit : r.fits()) {
+            out.println(String.format(Locale.ROOT, "%-32s n=%4d trimmed=%3d pKa %6.2f -> %6.2f  rho %6.2f -> %6.2f  "
+                    + "RMSE %.2f", fit.group(), fit.n(), fit.trimmed(), fit.pkaBefore(), fit.pkaAfter(), fit.rhoBefore(),
+                    fit.rhoAfter(), fit.rmse()));
+        }
+        try {
+            Files.writeString(Path.of(a.flags().get("--out")), tables.toJson(r.table()), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            err.println("ionmark: cannot write: " + e.getMessage());
+            return 1;
+        }
+        ValidationReport v = tables.validate(tables.toJson(r.table()));
+        out.println(r.fits().size() + " classes fitted on " + data.size() + " compounds; " + v.errors().size()
+                + " validation errors");
+        return v.ok() ? 0 : 1;
     }
 }

@@ -14,6 +14,7 @@ import org.osgi.service.component.annotations.Reference;
 
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.TableCalibration;
 
 /**
  * When the framework was started by {@code ./ionmark check|batch|table}, runs that command once the
@@ -25,7 +26,8 @@ public final class CommandLineRunner {
     static final String ARGS_FILE = "ionmark.args.file";
 
     @Activate
-    public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables, BundleContext ctx) {
+    public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
+            @Reference TableCalibration calibration, BundleContext ctx) {
         String file = ctx.getProperty(ARGS_FILE);
         if (file == null || file.isBlank()) {
             return;
@@ -35,7 +37,7 @@ public final class CommandLineRunner {
             try {
                 String raw = Files.readString(Path.of(file), StandardCharsets.UTF_8);
                 List<String> args = Arrays.stream(raw.split("\0", -1)).filter(s -> !s.isEmpty()).toList();
-                code = new Cli(speciation, tables, System.out, System.err).run(args);
+                code = new Cli(speciation, tables, calibration, System.out, System.err).run(args);
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + e);
                 code = 1;

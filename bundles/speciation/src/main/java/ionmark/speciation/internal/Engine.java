@@ -105,6 +105,39 @@ public final class Engine {
     }
 
     /**
+     * Calibration input from one observation with one experimental value: the class and substituent
+     * sum Σ of the site that titrates first (the most basic when all perceived sites in −3…17 are
+     * bases, the most acidic when all are acids). Mixed acid–base compounds are not used. Raw
+     * estimates, no overrides.
+     */
+    public java.util.Optional<ionmark.speciation.internal.estimate.Calibration.Point> calibrationPoint(
+            ionmark.speciation.api.Observation o) {
+        try {
+            if (o.pka().size() != 1) {
+                return java.util.Optional.empty();
+            }
+            StructureReader.Prepared prep = reader.read(o.structure());
+            List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(),
+                    SitePerceiver.perceive(table, prep.molecule())).stream()
+                    .filter(s -> !s.site().group().permanent() && s.pka() > -3 && s.pka() < 17).toList();
+            long bases = est.stream().filter(s -> s.site().group().type() == SiteType.BASE).count();
+            if (est.isEmpty() || (bases != 0 && bases != est.size())) {
+                return java.util.Optional.empty();
+            }
+            java.util.Comparator<EstimatedSite> byPka = java.util.Comparator.comparingDouble(EstimatedSite::pka);
+            EstimatedSite first = bases > 0 ? est.stream().max(byPka).orElseThrow() : est.stream().min(byPka)
+                    .orElseThrow();
+            GroupClass g = first.site().group();
+            double sigma = g.relation() == ionmark.acidity.api.Relation.NONE || g.rho() == 0 || Double.isNaN(g.rho())
+                    ? 0 : -(first.pka() - g.pka()) / g.rho();
+            return java.util.Optional.of(new ionmark.speciation.internal.estimate.Calibration.Point(g.id(), sigma,
+                    o.pka().get(0)));
+        } catch (StructureException | RuntimeException e) {
+            return java.util.Optional.empty();
+        }
+    }
+
+    /**
      * Exact match: shift site values so that the model's macroscopic constants equal the measured
      * ones. The k measured values are given to the k sites (in pKa order) whose estimates lie
      * closest to them; the shifts are found by damped Gauss–Newton on the macroscopic constants.

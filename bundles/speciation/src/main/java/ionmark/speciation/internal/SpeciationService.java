@@ -20,16 +20,20 @@ import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
+import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.TableCalibration;
+import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.structure.StructureException;
 
 /**
  * The speciation service: one compiled {@link Engine} per table snapshot, swapped atomically when
  * the table changes; each molecule runs under a time limit.
  */
-@Component(service = {Speciation.class, TableListener.class}, configurationPid = "ionmark.speciation")
+@Component(service = {Speciation.class, TableCalibration.class, TableListener.class},
+        configurationPid = "ionmark.speciation")
 @Designate(ocd = SpeciationConfiguration.class)
-public final class SpeciationService implements Speciation, TableListener {
+public final class SpeciationService implements Speciation, TableCalibration, TableListener {
     private final AtomicReference<Engine> engine = new AtomicReference<>();
     private final int maxHeavyAtoms;
     private final int timeoutMillis;
@@ -93,6 +97,14 @@ public final class SpeciationService implements Speciation, TableListener {
         } catch (StructureException e) {
             throw new IllegalArgumentException(e.getMessage(), e);
         }
+    }
+
+    @Override
+    public Result calibrate(AcidityTable base, java.util.List<Observation> data, String referenceId, String citation) {
+        Engine e = new Engine(base, maxHeavyAtoms);
+        java.util.List<Calibration.Point> points = data.parallelStream().map(e::calibrationPoint)
+                .flatMap(java.util.Optional::stream).toList();
+        return Calibration.fit(base, points, referenceId, citation);
     }
 
     /** The table version currently in use. */
