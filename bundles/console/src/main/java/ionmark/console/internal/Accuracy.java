@@ -26,7 +26,8 @@ final class Accuracy {
     static final double LOW = -2;
     static final double HIGH = 16;
 
-    record Scored(Observation o, List<Double> pred, List<int[]> pairs, List<String> groups, String error) {
+    record Scored(Observation o, List<Double> pred, List<int[]> pairs, List<String> groups, List<Double> sds,
+            String error) {
         double worst() {
             if (error != null || pairs.size() < o.pka().size()) {
                 return 99;
@@ -57,7 +58,7 @@ final class Accuracy {
                 jsonl.println(AnalysisJson.of(o.id(), a));
             }
             if (!a.ok()) {
-                out.add(new Scored(o, List.of(), List.of(), List.of(), a.error()));
+                out.add(new Scored(o, List.of(), List.of(), List.of(), List.of(), a.error()));
                 continue;
             }
             List<Double> pred = a.macroPka().stream().filter(v -> v >= LOW && v <= HIGH).sorted().toList();
@@ -69,7 +70,7 @@ final class Accuracy {
                 groups.add(near == null ? "?" : near.group());
                 sds.add(near == null ? Double.NaN : near.sd());
             }
-            out.add(new Scored(o, pred, Scoring.assign(o.pka(), pred), groups, null));
+            out.add(new Scored(o, pred, Scoring.assign(o.pka(), pred), groups, sds, null));
             bar.step(i + 1);
         }
         bar.done();
@@ -84,6 +85,8 @@ final class Accuracy {
         int within1 = 0;
         double abs = 0;
         double sq = 0;
+        int withSd = 0;
+        int insideSd = 0;
         for (Scored x : all) {
             values += x.o().pka().size();
             if (x.error() != null) {
@@ -98,6 +101,11 @@ final class Accuracy {
                 sq += e * e;
                 within1 += Math.abs(e) <= 1.0 ? 1 : 0;
                 usedPred.add(p[1]);
+                double sd = x.sds().get(p[1]);
+                if (!Double.isNaN(sd)) {
+                    withSd++;
+                    insideSd += Math.abs(e) <= sd ? 1 : 0;
+                }
             }
             for (int j = 0; j < x.pred().size(); j++) {
                 if (!usedPred.contains(j) && x.pred().get(j) >= 2 && x.pred().get(j) <= 12) {
@@ -107,7 +115,7 @@ final class Accuracy {
         }
         return new Summary(all.size(), values, matched, failed, extra, values == 0 ? 0 : (double) within1 / values,
                 matched == 0 ? Double.NaN : abs / matched, matched == 0 ? Double.NaN : Math.sqrt(sq / matched),
-                Double.NaN);
+                withSd == 0 ? Double.NaN : (double) insideSd / withSd);
     }
 
     static void report(List<Scored> all, Summary sum, Path dir, String title) throws IOException {

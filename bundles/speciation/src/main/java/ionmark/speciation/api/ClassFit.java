@@ -13,7 +13,8 @@ package ionmark.speciation.api;
  * @param rmse       root mean square residual after the fit
  * @param r2         coefficient of determination (NaN when only the intercept was fitted)
  * @param sdAfter    the class uncertainty written to the table
+ * @param rejected   the fit moved the reference value too far to be trusted; the class was left unchanged
  */
 public record ClassFit(String group, int n, int trimmed, double pkaBefore, double pkaAfter, double rhoBefore,
-        double rhoAfter, double rmse, double r2, double sdAfter) {
+        double rhoAfter, double rmse, double r2, double sdAfter, boolean rejected) {
 }

@@ -18,7 +18,10 @@ import ionmark.speciation.api.TableCalibration;
  * Per-class least squares: pKa_exp = pKa0 − ρ·Σ, Σ the class's substituent sum for that compound.
  * One pass of trimming drops residuals beyond max(3·1.4826·MAD, 1.5); the fitted values are then
  * shrunk toward the current ones with the weight of {@link TableCalibration#PRIOR_WEIGHT} compounds.
- * ρ is fitted only with at least 8 compounds and a spread of Σ above 0.15; otherwise it stays.
+ * ρ is fitted only with at least 8 compounds and a spread of Σ above 0.15, and kept only when it has
+ * the prior's sign and lies within a factor of two of it; otherwise it stays. A reference value that
+ * would move by more than max(2.5, 3·sd) is not applied (the class definition, not its number, is
+ * then in question): the fit is reported with {@code rejected} and the class keeps its values.
  */
 public final class Calibration {
     static final double MIN_SD = 0.25;
@@ -43,6 +46,10 @@ public final class Calibration {
             }
             ClassFit f = fitOne(g, ps);
             fits.add(f);
+            if (f.rejected()) {
+                groups.add(g);
+                continue;
+            }
             String note = String.format(Locale.ROOT, "%s fit (%s): n=%d, trimmed %d, RMSE %.2f%s; before pKa %.2f%s",
                     refId, java.time.LocalDate.now(), f.n(), f.trimmed(), f.rmse(), Double.isNaN(f.r2()) ? ""
                             : String.format(Locale.ROOT, ", r² %.2f", f.r2()), f.pkaBefore(),
@@ -78,6 +85,10 @@ public final class Calibration {
         } else {
             kept = ps;
         }
+        if (withRho && !(ab[1] / g.rho() >= 0.5 && ab[1] / g.rho() <= 2.0)) {
+            withRho = false;
+            ab = ols(kept, false, g.rho());
+        }
         double[] r = residuals(kept, ab);
         double ss = 0;
         for (double v : r) {
@@ -98,7 +109,11 @@ public final class Calibration {
             double tot = kept.stream().mapToDouble(p -> (p.pka() - mean) * (p.pka() - mean)).sum();
             r2 = tot > 0 ? 1 - ss / tot : Double.NaN;
         }
-        return new ClassFit(g.id(), n, ps.size() - n, g.pka(), pka, g.rho(), rho, rmse, r2, sd);
+        boolean rejected = Math.abs(pka - prior) > Math.max(2.5, 3 * g.sd());
+        if (rejected) {
+            return new ClassFit(g.id(), n, ps.size() - n, g.pka(), g.pka(), g.rho(), g.rho(), rmse, r2, g.sd(), true);
+        }
+        return new ClassFit(g.id(), n, ps.size() - n, g.pka(), pka, g.rho(), rho, rmse, r2, sd, false);
     }
 
     /** [pKa0, ρ] by ordinary least squares (ρ fixed when not fitted). */
