@@ -76,7 +76,7 @@ public final class CompiledTable {
 
     /**
      * How much structure a pattern guarantees: its atoms, plus for every bracket atom with recursive
-     * SMARTS the atoms of its smallest alternative beyond the first (so {@code [n;$(n1cccc2ccccc12)]},
+     * SMARTS (not negated) the atoms of its smallest alternative beyond the first (so {@code [n;$(n1cccc2ccccc12)]},
      * quinoline, counts 10 and outranks {@code [n;$(n1ccccc1)]}, pyridine, at 6).
      */
     static int specificity(String smarts, int topAtoms) {
@@ -93,10 +93,13 @@ public final class CompiledTable {
             int k = atom.indexOf("$(");
             while (k >= 0) {
                 int close = closing(atom, k + 1, '(', ')');
-                String inner = atom.substring(k + 2, close);
-                QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
-                if (Smarts.parse(q, inner)) {
-                    smallest = Math.min(smallest, q.getAtomCount());
+                // a negated recursion (!$(...)) excludes structure; it guarantees none
+                if (k == 0 || atom.charAt(k - 1) != '!') {
+                    String inner = atom.substring(k + 2, close);
+                    QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
+                    if (Smarts.parse(q, inner)) {
+                        smallest = Math.min(smallest, q.getAtomCount());
+                    }
                 }
                 k = atom.indexOf("$(", close);
             }
