@@ -70,7 +70,16 @@ public final class Engine {
 
     /** The prepared problem for one structure: molecule, sites, numeric model at the conditions. */
     record Problem(StructureReader.Prepared prepared, List<EstimatedSite> sites, List<Integer> uncovered,
-            SiteModel model, int permanentCharge, List<String> notes, Optional<MeasuredCompound> measured) {
+            SiteModel model, double[] polynomial, int permanentCharge, List<String> notes,
+            Optional<MeasuredCompound> measured) {
+        /** Net charge of the fully protonated form: every base site +1, plus permanent charges. */
+        int topCharge() {
+            int z = permanentCharge;
+            for (boolean b : model.base()) {
+                z += b ? 1 : 0;
+            }
+            return z;
+        }
     }
 
     public Analysis analyse(String input, Conditions c) {
@@ -101,7 +110,9 @@ public final class Engine {
             est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
-        return new Problem(prep, est, uncovered, model(mol, est, c), permanentCharge(est), notes, measured);
+        SiteModel model = model(mol, est, c);
+        double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
+        return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured);
     }
 
     /**
@@ -371,7 +382,7 @@ public final class Engine {
         if (p.measured().isEmpty() && !titr.isEmpty()) {
             warnings.add("pKa values are estimated, not measured");
         }
-        List<Double> macro = MacroConstants.of(p.model(), table.table().interaction().cutoff()).stream()
+        List<Double> macro = MacroConstants.of(p.polynomial()).stream()
                 .filter(v -> v >= MACRO_LOW && v <= MACRO_HIGH).map(v -> Math.round(v * 100) / 100.0).toList();
         if (p.measured().isPresent() && measuredFit(p)) {
             macro = p.measured().get().pka();
@@ -493,19 +504,50 @@ public final class Engine {
     }
 
     private double meanCharge(Problem p, double ph) {
-        double m = 0;
-        for (var e : chargeStatesAt(p, ph).entrySet()) {
-            m += e.getKey() * e.getValue();
+        if (p.measured().isPresent() && measuredFit(p)) {
+            double m = 0;
+            for (var e : fromMeasured(p, ph).entrySet()) {
+                m += e.getKey() * e.getValue();
+            }
+            return m;
+        }
+        double[] f = MacroConstants.fractions(p.polynomial(), ph);
+        double m = p.topCharge();
+        for (int d = 0; d < f.length; d++) {
+            m -= d * f[d];
         }
         return m;
     }
 
-    /** Fractions per net charge: from measured constants for an exact match, else from the site model. */
+    /** Fraction with net charge 0 at a pH, without building a map (used by the window scan). */
+    private double neutralAt(Problem p, double ph) {
+        if (p.measured().isPresent() && measuredFit(p)) {
+            return fromMeasured(p, ph).getOrDefault(0, 0.0);
+        }
+        int d = p.topCharge();
+        if (d < 0 || d >= p.polynomial().length) {
+            return 0;
+        }
+        return MacroConstants.fractions(p.polynomial(), ph)[d];
+    }
+
+    /**
+     * Fractions per net charge: from measured constants for an exact match, else from the proton-binding
+     * polynomial of the site model (net charge = top charge − protons lost).
+     */
     private Map<Integer, Double> chargeStatesAt(Problem p, double ph) {
         if (p.measured().isPresent() && measuredFit(p)) {
             return fromMeasured(p, ph);
         }
-        return shift(solver.solve(p.model(), ph).chargeStates(), p.permanentCharge());
+        double[] f = MacroConstants.fractions(p.polynomial(), ph);
+        Map<Integer, Double> out = new TreeMap<>();
+        int top = p.topCharge();
+        for (int d = 0; d < f.length; d++) {
+            if (f[d] > 0) {
+                out.merge(top - d, f[d], Double::sum);
+            }
+        }
+        return out;
     }
 
     private void windows(Problem p, List<Window> neutral, List<Window> charged) {
@@ -513,7 +555,7 @@ public final class Engine {
         Double cStart = null;
         double last = 0;
         for (double ph = 0; ph <= 14 + 1e-9; ph += WINDOW_STEP) {
-            double f0 = chargeStatesAt(p, ph).getOrDefault(0, 0.0);
+            double f0 = neutralAt(p, ph);
             if (f0 >= 0.99 && nStart == null) {
                 nStart = ph;
             } else if (f0 < 0.99 && nStart != null) {

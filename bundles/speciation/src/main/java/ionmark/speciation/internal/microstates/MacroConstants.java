@@ -14,13 +14,46 @@ public final class MacroConstants {
     }
 
     public static List<Double> of(SiteModel m, double cutoff) {
+        return of(polynomial(m, cutoff));
+    }
+
+    /**
+     * log10 of the proton-binding polynomial's coefficients at pH 0, index d = protons lost. Since a
+     * microstate's net charge is (number of base sites) − d, this also gives the charge-state
+     * distribution at every pH: fraction(d) ∝ 10^(log D_d + d·pH).
+     */
+    public static double[] polynomial(SiteModel m, double cutoff) {
         MicrostateSolver s = new MicrostateSolver(cutoff);
         boolean[] none = new boolean[m.size()];
-        double[] poly = {0.0}; // log10 coefficients, index = protons lost
+        double[] poly = {0.0};
         for (int[] c : s.clusters(m, none)) {
             double[] p = c.length <= MicrostateSolver.EXACT_LIMIT ? clusterPoly(m, c) : independentPoly(m, c);
             poly = multiply(poly, p);
         }
+        return poly;
+    }
+
+    /** Fraction of molecules that have lost d protons, at a pH, from the polynomial. */
+    public static double[] fractions(double[] poly, double ph) {
+        double max = Double.NEGATIVE_INFINITY;
+        double[] l = new double[poly.length];
+        for (int d = 0; d < poly.length; d++) {
+            l[d] = poly[d] + d * ph;
+            max = Math.max(max, l[d]);
+        }
+        double sum = 0;
+        for (int d = 0; d < l.length; d++) {
+            l[d] = Math.pow(10, l[d] - max);
+            sum += l[d];
+        }
+        for (int d = 0; d < l.length; d++) {
+            l[d] /= sum;
+        }
+        return l;
+    }
+
+    /** Macroscopic constants from a polynomial, ascending. */
+    public static List<Double> of(double[] poly) {
         List<Double> out = new ArrayList<>();
         for (int d = 1; d < poly.length; d++) {
             out.add(poly[d - 1] - poly[d]);
@@ -31,27 +64,56 @@ public final class MacroConstants {
 
     static double[] clusterPoly(SiteModel m, int[] c) {
         int k = c.length;
+        // natural-log accumulation per d with a running maximum, Gray-code order: O(k) per state
+        double[] maxL = new double[k + 1];
+        double[] sum = new double[k + 1];
+        Arrays.fill(maxL, Double.NEGATIVE_INFINITY);
+        double[] q = new double[k];
+        double[] field = new double[k];
+        boolean[] dep = new boolean[k];
+        for (int a = 0; a < k; a++) {
+            q[a] = m.charge(c[a], false);
+        }
+        double logw = 0;
+        for (int a = 0; a < k; a++) {
+            field[a] = m.background()[c[a]];
+            logw -= q[a] * m.background()[c[a]];
+            for (int b = 0; b < k; b++) {
+                if (b != a) {
+                    field[a] += m.w()[c[a]][c[b]] * q[b];
+                }
+            }
+            for (int b = a + 1; b < k; b++) {
+                logw -= m.w()[c[a]][c[b]] * q[a] * q[b];
+            }
+        }
+        int d = 0;
+        final double ln10 = Math.log(10);
+        for (long t = 0; t < (1L << k); t++) {
+            if (t > 0) {
+                int bit = Long.numberOfTrailingZeros(t);
+                double dq = m.charge(c[bit], !dep[bit]) - q[bit];
+                logw += (dep[bit] ? 1 : -1) * m.pka()[c[bit]] - dq * field[bit];
+                d += dep[bit] ? -1 : 1;
+                dep[bit] = !dep[bit];
+                q[bit] += dq;
+                for (int b = 0; b < k; b++) {
+                    if (b != bit) {
+                        field[b] += m.w()[c[bit]][c[b]] * dq;
+                    }
+                }
+            }
+            double l = logw * ln10;
+            if (l > maxL[d]) {
+                sum[d] = sum[d] * Math.exp(maxL[d] - l) + 1;
+                maxL[d] = l;
+            } else {
+                sum[d] += Math.exp(l - maxL[d]);
+            }
+        }
         double[] logD = new double[k + 1];
-        Arrays.fill(logD, Double.NEGATIVE_INFINITY);
-        for (long code = 0; code < (1L << k); code++) {
-            double logw = 0;
-            double[] q = new double[k];
-            int d = 0;
-            for (int a = 0; a < k; a++) {
-                boolean dep = (code & (1L << a)) != 0;
-                q[a] = m.charge(c[a], dep);
-                if (dep) {
-                    logw -= m.pka()[c[a]];
-                    d++;
-                }
-                logw -= q[a] * m.background()[c[a]];
-            }
-            for (int a = 0; a < k; a++) {
-                for (int b = a + 1; b < k; b++) {
-                    logw -= m.w()[c[a]][c[b]] * q[a] * q[b];
-                }
-            }
-            logD[d] = logAdd(logD[d], logw);
+        for (int i = 0; i <= k; i++) {
+            logD[i] = maxL[i] == Double.NEGATIVE_INFINITY ? Double.NEGATIVE_INFINITY : (maxL[i] + Math.log(sum[i])) / ln10;
         }
         return logD;
     }

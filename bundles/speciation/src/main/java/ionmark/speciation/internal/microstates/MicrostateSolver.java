@@ -28,6 +28,7 @@ public final class MicrostateSolver {
     public static final double FIX_MARGIN = 10.0;
     public static final int EXACT_LIMIT = 20;
     static final int TOP = 12;
+    private static final double LN10 = Math.log(10);
 
     private final double cutoff;
     private final long seed;
@@ -153,101 +154,145 @@ public final class MicrostateSolver {
             boolean sampled, double stdError) {
     }
 
-    /** Gray-code enumeration of all 2^k states of a cluster, in log space. */
+    /**
+     * Gray-code enumeration of all 2^k states of a cluster in one streaming pass. Per state: one
+     * interaction row update, one exp, and two histogram adds (by the low and the high half of the
+     * state's bits), from which each site's protonated sum is recovered exactly at the end. Sums are
+     * kept relative to a reference weight that is raised (and everything rescaled) only when a state
+     * exceeds it by e^50, so no overflow and no 2^k-sized arrays.
+     */
     static ClusterResult exact(SiteModel m, int[] c, double[] phi, double ph) {
-        int k = c.length;
+        final int k = c.length;
+        final double ln10 = Math.log(10);
+        final int loBits = k / 2;
+        final int hiBits = k - loBits;
+        final int loMask = (1 << loBits) - 1;
+        double[][] w = new double[k][k];
         double[] q = new double[k];
-        double[] field = new double[k]; // Σ_j W_ij q_j + Φ_i for each cluster site
+        double[] field = new double[k]; // Σ_j W_ij q_j + Φ_i, in ln units below
+        double[] step = new double[k]; // (pH − pKa_i)·ln10
+        boolean[] dep = new boolean[k];
         for (int a = 0; a < k; a++) {
             q[a] = m.charge(c[a], false);
-        }
-        for (int a = 0; a < k; a++) {
-            double f = phi[c[a]];
+            step[a] = (ph - m.pka()[c[a]]) * ln10;
             for (int b = 0; b < k; b++) {
-                if (a != b) {
-                    f += m.w()[c[a]][c[b]] * q[b];
-                }
+                w[a][b] = a == b ? 0 : m.w()[c[a]][c[b]] * ln10;
+            }
+        }
+        double logw = 0;
+        int zTop = 0;
+        for (int a = 0; a < k; a++) {
+            double f = phi[c[a]] * ln10;
+            for (int b = 0; b < k; b++) {
+                f += w[a][b] * q[b];
             }
             field[a] = f;
-        }
-        // log weight of the all-protonated state
-        double logw = 0;
-        for (int a = 0; a < k; a++) {
-            logw -= q[a] * phi[c[a]];
+            logw -= q[a] * phi[c[a]] * ln10;
             for (int b = a + 1; b < k; b++) {
-                logw -= m.w()[c[a]][c[b]] * q[a] * q[b];
+                logw -= w[a][b] * q[a] * q[b];
             }
+            zTop += (int) q[a];
         }
-        long states = 1L << k;
-        boolean[] dep = new boolean[k];
-        // first pass: find the maximum log weight for a stable sum
-        double[] logs = new double[(int) states];
-        int[] charges = new int[(int) states];
-        long[] codes = new long[(int) states];
-        double max = Double.NEGATIVE_INFINITY;
+        double ref = logw;
+        double sum = 0;
+        double[] lo = new double[1 << loBits];
+        double[] hi = new double[1 << hiBits];
+        double[] chargeSum = new double[k + 1]; // index: protons lost
+        PriorityQueue<double[]> best = new PriorityQueue<>(Comparator.comparingDouble(x -> x[0]));
+        double bestMin = 0;
         long gray = 0;
+        int lost = 0;
+        final long states = 1L << k;
         for (long t = 0; t < states; t++) {
             if (t > 0) {
                 int bit = Long.numberOfTrailingZeros(t);
-                double dq = m.charge(c[bit], !dep[bit]) - q[bit];
-                // flip: pH term and change of interaction energy
-                logw += (dep[bit] ? -1 : 1) * (ph - m.pka()[c[bit]]) - dq * field[bit];
-                dep[bit] = !dep[bit];
+                boolean was = dep[bit];
+                double dq = was ? 1 : -1; // deprotonation lowers the charge by one, protonation raises it
+                logw += (was ? -step[bit] : step[bit]) - dq * field[bit];
+                lost += was ? -1 : 1;
+                dep[bit] = !was;
                 q[bit] += dq;
+                double[] row = w[bit];
                 for (int b = 0; b < k; b++) {
-                    if (b != bit) {
-                        field[b] += m.w()[c[bit]][c[b]] * dq;
-                    }
+                    field[b] += row[b] * dq;
                 }
                 gray ^= 1L << bit;
             }
-            logs[(int) t] = logw;
-            int z = 0;
-            for (int a = 0; a < k; a++) {
-                z += (int) q[a];
-            }
-            charges[(int) t] = z;
-            codes[(int) t] = gray;
-            max = Math.max(max, logw);
-        }
-        double sum = 0;
-        double[] protSum = new double[k];
-        Map<Integer, Double> charge = new HashMap<>();
-        PriorityQueue<double[]> best = new PriorityQueue<>(Comparator.comparingDouble(x -> x[0]));
-        for (int t = 0; t < states; t++) {
-            double w = Math.pow(10, logs[t] - max);
-            sum += w;
-            long code = codes[t];
-            for (int a = 0; a < k; a++) {
-                if ((code & (1L << a)) == 0) {
-                    protSum[a] += w;
+            double rel = logw - ref;
+            if (rel > 50) {
+                double r = Math.exp(-rel);
+                sum *= r;
+                for (int i = 0; i < lo.length; i++) {
+                    lo[i] *= r;
                 }
+                for (int i = 0; i < hi.length; i++) {
+                    hi[i] *= r;
+                }
+                for (int d = 0; d <= k; d++) {
+                    chargeSum[d] *= r;
+                }
+                for (double[] e : best) {
+                    e[0] *= r;
+                }
+                bestMin *= r;
+                ref = logw;
+                rel = 0;
             }
-            charge.merge(charges[t], w, Double::sum);
-            best.add(new double[] {w, code});
-            if (best.size() > TOP) {
-                best.poll();
+            double wt = Math.exp(rel);
+            sum += wt;
+            lo[(int) (gray & loMask)] += wt;
+            hi[(int) (gray >>> loBits)] += wt;
+            chargeSum[lost] += wt;
+            if (best.size() < TOP || wt > bestMin) {
+                best.add(new double[] {wt, gray});
+                if (best.size() > TOP) {
+                    best.poll();
+                }
+                bestMin = best.peek()[0];
             }
         }
         double[] prot = new double[k];
         for (int a = 0; a < k; a++) {
-            prot[a] = protSum[a] / sum;
-        }
-        final double total = sum;
-        charge.replaceAll((z, w) -> w / total);
-        List<Populations.Microstate> top = new ArrayList<>();
-        for (double[] b : best) {
-            boolean[] d = new boolean[k];
-            for (int a = 0; a < k; a++) {
-                d[a] = (((long) b[1]) & (1L << a)) != 0;
+            double p = 0;
+            if (a < loBits) {
+                for (int i = 0; i < lo.length; i++) {
+                    if ((i & (1 << a)) == 0) {
+                        p += lo[i];
+                    }
+                }
+            } else {
+                int bit = a - loBits;
+                for (int i = 0; i < hi.length; i++) {
+                    if ((i & (1 << bit)) == 0) {
+                        p += hi[i];
+                    }
+                }
             }
-            top.add(new Populations.Microstate(d, b[0] / total));
+            prot[a] = p / sum;
+        }
+        Map<Integer, Double> charge = new HashMap<>();
+        for (int d = 0; d <= k; d++) {
+            if (chargeSum[d] > 0) {
+                charge.put(zTop - d, chargeSum[d] / sum);
+            }
+        }
+        List<Populations.Microstate> top = new ArrayList<>();
+        for (double[] e : best) {
+            boolean[] dd = new boolean[k];
+            for (int a = 0; a < k; a++) {
+                dd[a] = (((long) e[1]) & (1L << a)) != 0;
+            }
+            top.add(new Populations.Microstate(dd, e[0] / sum));
         }
         top.sort(Comparator.comparingDouble(x -> -x.fraction()));
         return new ClusterResult(prot, charge, top, false, 0);
     }
 
-    /** Metropolis sampling with single-site flips; standard error from batch means. */
+    /**
+     * Metropolis sampling with single-site flips. Site fractions use the Rao–Blackwell estimator (the
+     * mean over samples of each site's protonation probability given the others), which has far
+     * less variance than counting states; standard error from 20 batch means.
+     */
     ClusterResult sample(SiteModel m, int[] c, double[] phi, double ph) {
         int k = c.length;
         SplittableRandom rnd = new SplittableRandom(seed);
@@ -258,14 +303,42 @@ public final class MicrostateSolver {
             q[a] = m.charge(c[a], dep[a]);
         }
         double[] field = new double[k];
+        int[][] nb = new int[k][];
+        double[][] nw = new double[k][];
         for (int a = 0; a < k; a++) {
             double f = phi[c[a]];
+            int cnt = 0;
             for (int b = 0; b < k; b++) {
                 if (a != b) {
                     f += m.w()[c[a]][c[b]] * q[b];
+                    cnt += m.w()[c[a]][c[b]] != 0 ? 1 : 0;
                 }
             }
             field[a] = f;
+            nb[a] = new int[cnt];
+            nw[a] = new double[cnt];
+            int j = 0;
+            for (int b = 0; b < k; b++) {
+                if (a != b && m.w()[c[a]][c[b]] != 0) {
+                    nb[a][j] = b;
+                    nw[a][j++] = m.w()[c[a]][c[b]];
+                }
+            }
+        }
+        double[] lpka = new double[k];
+        for (int a = 0; a < k; a++) {
+            lpka[a] = m.pka()[c[a]];
+        }
+        int[] partner = new int[k];
+        for (int a = 0; a < k; a++) {
+            partner[a] = -1;
+            double strongest = 0.5; // pair moves only where the coupling is strong enough to slow single flips
+            for (int j = 0; j < nb[a].length; j++) {
+                if (Math.abs(nw[a][j]) > strongest) {
+                    strongest = Math.abs(nw[a][j]);
+                    partner[a] = nb[a][j];
+                }
+            }
         }
         int burn = Math.max(200, sweeps / 10);
         int batches = 20;
@@ -277,30 +350,38 @@ public final class MicrostateSolver {
         for (int sweep = 0; sweep < burn + batches * perBatch; sweep++) {
             for (int step = 0; step < k; step++) {
                 int bit = rnd.nextInt(k);
-                double dq = m.charge(c[bit], !dep[bit]) - q[bit];
-                double dlog = (dep[bit] ? -1 : 1) * (ph - m.pka()[c[bit]]) - dq * field[bit];
-                if (dlog >= 0 || rnd.nextDouble() < Math.pow(10, dlog)) {
-                    dep[bit] = !dep[bit];
-                    q[bit] += dq;
-                    for (int b = 0; b < k; b++) {
-                        if (b != bit) {
-                            field[b] += m.w()[c[bit]][c[b]] * dq;
-                        }
+                double d1 = flipDelta(lpka, dep, field, bit, ph);
+                if (partner[bit] >= 0 && rnd.nextBoolean()) {
+                    // pair move: flip the site and its most strongly coupled neighbour together
+                    int other = partner[bit];
+                    flip(dep, q, field, nb, nw, bit);
+                    double d2 = flipDelta(lpka, dep, field, other, ph);
+                    if (d1 + d2 >= 0 || rnd.nextDouble() < Math.exp((d1 + d2) * LN10)) {
+                        flip(dep, q, field, nb, nw, other);
+                    } else {
+                        flip(dep, q, field, nb, nw, bit); // undo
                     }
+                } else if (d1 >= 0 || rnd.nextDouble() < Math.exp(d1 * LN10)) {
+                    flip(dep, q, field, nb, nw, bit);
                 }
             }
             if (sweep >= burn) {
                 int batch = (sweep - burn) / perBatch;
                 int z = 0;
                 for (int a = 0; a < k; a++) {
-                    if (!dep[a]) {
-                        batchProt[batch][a] += 1.0 / perBatch;
+                    // P(protonated | others) = 1 / (1 + 10^((pH − pKa) + field)), field with this site's own
+                    // charge excluded (field holds only the other sites and the background); taken every
+                    // second sweep, as consecutive sweeps are correlated anyway
+                    if ((sweep & 1) == 0) {
+                        double x = (ph - lpka[a]) + field[a];
+                        batchProt[batch][a] += 2.0 / (1 + Math.exp(x * LN10)) / perBatch;
                     }
                     z += (int) q[a];
                 }
                 charge.merge(z, 1.0, Double::sum);
-                String key = Arrays.toString(dep);
-                seen.computeIfAbsent(key, x -> new double[1])[0] += 1;
+                if (sweep % 10 == 0) {
+                    seen.computeIfAbsent(Arrays.toString(dep), x -> new double[1])[0] += 10;
+                }
                 samples++;
             }
         }
@@ -331,6 +412,22 @@ public final class MicrostateSolver {
                     top.add(new Populations.Microstate(d, e.getValue()[0] / total));
                 });
         return new ClusterResult(prot, charge, top, true, se);
+    }
+
+    /** log10 weight change of flipping site {@code bit}: deprotonation lowers its charge by one. */
+    private static double flipDelta(double[] pka, boolean[] dep, double[] field, int bit, double ph) {
+        return dep[bit] ? -(ph - pka[bit]) - field[bit] : (ph - pka[bit]) + field[bit];
+    }
+
+    private static void flip(boolean[] dep, double[] q, double[] field, int[][] nb, double[][] nw, int bit) {
+        double dq = dep[bit] ? 1 : -1;
+        dep[bit] = !dep[bit];
+        q[bit] += dq;
+        int[] ns = nb[bit];
+        double[] ws = nw[bit];
+        for (int j = 0; j < ns.length; j++) {
+            field[ns[j]] += ws[j] * dq;
+        }
     }
 
     private static Map<Integer, Double> convolve(Map<Integer, Double> a, Map<Integer, Double> b) {

@@ -126,6 +126,30 @@ class SolverTest {
     }
 
     @Test
+    void sixtySitePeptideIsSampledWithinOneHundredthOfALongRun() {
+        // a peptide-like chain: 60 interacting sites, too many to enumerate
+        int n = 60;
+        SplittableRandom r = new SplittableRandom(2);
+        double[] pka = new double[n];
+        boolean[] base = new boolean[n];
+        double[][] w = new double[n][n];
+        for (int i = 0; i < n; i++) {
+            pka[i] = 7 + 3 * (2 * r.nextDouble() - 1);
+            base[i] = i % 3 == 0;
+            for (int j = 0; j < i; j++) {
+                w[i][j] = w[j][i] = 2.45 * Math.pow(0.7, 3.0 * (i - j) - 3);
+            }
+        }
+        SiteModel m = model(pka, base, w);
+        Populations quick = new MicrostateSolver(0.02).solve(m, 7.0);
+        Populations reference = new MicrostateSolver(0.02, 99, 400_000).solve(m, 7.0);
+        assertTrue(quick.sampled());
+        for (int i = 0; i < n; i++) {
+            assertEquals(reference.protonated()[i], quick.protonated()[i], 0.01, "site " + i);
+        }
+    }
+
+    @Test
     void chargeDistributionSumsToOne() {
         SiteModel m = model(new double[] {2.3, 9.6, 4.2}, new boolean[] {false, true, false},
                 new double[][] {{0, 2, 1}, {2, 0, 1}, {1, 1, 0}});
