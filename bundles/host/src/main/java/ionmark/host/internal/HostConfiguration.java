@@ -11,4 +11,7 @@ import org.osgi.service.metatype.annotations.ObjectClassDefinition;
 
     @AttributeDefinition(name = "User name", description = "The user this single-user host vouches for")
     String user() default "chemist";
+
+    @AttributeDefinition(name = "Roles", description = "Roles the single-user host vouches for (viewer, admin)")
+    String[] roles() default {"viewer"};
 }

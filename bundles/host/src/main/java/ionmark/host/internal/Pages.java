@@ -24,7 +24,7 @@ final class Pages {
                 + "</main></body></html>";
     }
 
-    static String list(List<String> ids, List<SidePanel> panels) {
+    static String list(List<String> ids, List<SidePanel> panels, List<ionmark.host.api.AdminPage> admin) {
         StringBuilder sb = new StringBuilder("<h1>Entries</h1><ul class=\"entries\">");
         for (String id : ids) {
             sb.append("<li><a href=\"/entry/").append(esc(id)).append("\">").append(esc(id)).append("</a></li>");
@@ -34,7 +34,16 @@ final class Pages {
             sb.append("<li><a href=\"/panel/").append(esc(p.id())).append("\">").append(esc(p.title()))
                     .append("</a></li>");
         }
-        return sb.append("</ul>").toString();
+        sb.append("</ul>");
+        if (!admin.isEmpty()) {
+            sb.append("<h2>Administration</h2><ul>");
+            for (var p : admin) {
+                sb.append("<li><a href=\"/admin/").append(esc(p.id())).append("\">").append(esc(p.title()))
+                        .append("</a></li>");
+            }
+            sb.append("</ul>");
+        }
+        return sb.toString();
     }
 
     static String entry(Entry e, Map<Integer, List<String>> decorations, List<SidePanel> panels) {
@@ -74,9 +83,10 @@ final class Pages {
                 + "<input type=\"hidden\" name=\"token\" value=\"" + esc(token) + "\"><textarea id=\"text\" name=\"text\" "
                 + "rows=\"24\" cols=\"90\">" + esc(text) + "</textarea><p><button type=\"submit\">Save</button></p>"
                 + "</form><h2>Preview</h2><div id=\"preview\" aria-live=\"polite\"></div><script>"
-                + "const t=document.getElementById('text'),p=document.getElementById('preview');let h;"
-                + "function r(){fetch('/preview',{method:'POST',headers:{'X-Ionmark-Token':'" + esc(token) + "'},"
-                + "body:t.value}).then(x=>x.text()).then(x=>{p.innerHTML=x;});}"
+                + "const t=document.getElementById('text'),p=document.getElementById('preview');let h,seq=0;"
+                // only the newest request may update the preview: answers can arrive out of order
+                + "function r(){const my=++seq;fetch('/preview',{method:'POST',headers:{'X-Ionmark-Token':'"
+                + esc(token) + "'},body:t.value}).then(x=>x.text()).then(x=>{if(my===seq){p.innerHTML=x;}});}"
                 + "t.addEventListener('input',()=>{clearTimeout(h);h=setTimeout(r,300);});r();</script>";
     }
 

@@ -19,6 +19,7 @@ import org.osgi.service.component.annotations.ReferenceCardinality;
 import org.osgi.service.component.annotations.ReferencePolicy;
 import org.osgi.service.metatype.annotations.Designate;
 
+import ionmark.host.api.AdminPage;
 import ionmark.host.api.Block;
 import ionmark.host.api.Decoration;
 import ionmark.host.api.Entry;
@@ -45,13 +46,14 @@ public final class WebShell extends HttpServlet {
     private final String csrf;
     private final transient List<EntryDecorator> decorators = new CopyOnWriteArrayList<>();
     private final transient List<SidePanel> panels = new CopyOnWriteArrayList<>();
+    private final transient List<AdminPage> adminPages = new CopyOnWriteArrayList<>();
 
     @Activate
     public WebShell(HostConfiguration config, BundleContext ctx) throws IOException {
         String folder = config.workspace().isBlank() ? ctx.getProperty("ionmark.workspace") : config.workspace();
         this.workspace = new Workspace(Path.of(folder == null || folder.isBlank() ? "workspace" : folder));
         this.workspace.seedDemo();
-        this.user = new HostUser(config.user(), Set.of("viewer"));
+        this.user = new HostUser(config.user(), Set.of(config.roles()));
         byte[] b = new byte[24];
         new SecureRandom().nextBytes(b);
         this.csrf = HexFormat.of().formatHex(b);
@@ -75,12 +77,42 @@ public final class WebShell extends HttpServlet {
         panels.remove(p);
     }
 
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addAdminPage(AdminPage p) {
+        adminPages.add(p);
+    }
+
+    void removeAdminPage(AdminPage p) {
+        adminPages.remove(p);
+    }
+
+    private boolean admin(String path, HttpServletRequest req, HttpServletResponse resp, boolean post)
+            throws IOException {
+        if (!path.startsWith("/admin/")) {
+            return false;
+        }
+        String id = path.substring(7);
+        AdminPage p = adminPages.stream().filter(x -> x.id().equals(id)).findFirst().orElse(null);
+        if (p == null) {
+            resp.sendError(404, "no such admin page");
+        } else if (!user.has(p.requiredRole())) {
+            resp.sendError(403, "the page needs the role " + p.requiredRole());
+        } else {
+            page(resp, p.title(), "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, user, csrf));
+        }
+        return true;
+    }
+
     @Override
     protected void doGet(HttpServletRequest req, HttpServletResponse resp) throws IOException {
         String path = req.getPathInfo() == null ? req.getRequestURI() : req.getPathInfo();
         try {
+            if (admin(path, req, resp, false)) {
+                return;
+            }
             if (path.equals("/") || path.isEmpty()) {
-                page(resp, "Entries", Pages.list(workspace.ids(), panels));
+                page(resp, "Entries", Pages.list(workspace.ids(), panels, adminPages.stream()
+                        .filter(p -> user.has(p.requiredRole())).toList()));
             } else if (path.startsWith("/entry/") && path.endsWith("/edit")) {
                 String id = path.substring(7, path.length() - 5);
                 page(resp, "Edit " + id, Pages.editor(id, workspace.text(id), csrf));
@@ -111,6 +143,9 @@ public final class WebShell extends HttpServlet {
         }
         String path = req.getPathInfo() == null ? req.getRequestURI() : req.getPathInfo();
         try {
+            if (admin(path, req, resp, true)) {
+                return;
+            }
             if (path.equals("/preview")) {
                 String text = new String(req.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
                 Entry e = Workspace.parse("preview", text);

@@ -43,7 +43,7 @@ final class Depiction {
             String svg = new DepictionGenerator().withSize(360, 240).withAnnotationScale(0.6)
                     .withAnnotationColor(new Color(0x22, 0x22, 0x22))
                     .withHighlight(acids, new Color(0xE0, 0x8A, 0x00)).withHighlight(bases, new Color(0x1F, 0x6F, 0xB5))
-                    .withOuterGlowHighlight(3.0).depict(mol).toSvgStr();
+                    .withOuterGlowHighlight(3.0).depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             int start = svg.indexOf("<svg");
             return start >= 0 ? svg.substring(start) : svg;
         } catch (Exception | LinkageError e) {

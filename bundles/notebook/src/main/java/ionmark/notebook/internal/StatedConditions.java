@@ -23,7 +23,8 @@ public final class StatedConditions {
 
     private static final String NUM = "(-?\\d{1,2}(?:\\.\\d+)?)";
     private static final Pattern PH = Pattern.compile("(?<![A-Za-z])pH(?![A-Za-z])\\s*(?:=|:|≈|~|of|is|at|was|to)?\\s*"
-            + NUM + "(?:\\s*(?:–|—|-|to|and)\\s*" + NUM + ")?(?![\\d.]*\\s*(?:M\\b|mM\\b|%))");
+            + NUM + "(?:\\s*(?:–|—|-|to|and)\\s*" + NUM + "(?!\\d|\\.\\d|\\s*(?:°|℃|deg|M\\b|mM\\b|%)))?"
+            + "(?![\\d.]*\\s*(?:M\\b|mM\\b|%))");
     private static final Pattern TEMP = Pattern.compile("(-?\\d{1,3}(?:\\.\\d+)?)\\s*(?:°\\s*C|℃|deg(?:rees)?\\s*C\\b)");
     private static final Pattern IONIC = Pattern.compile("(?<![A-Za-z])I\\s*=\\s*(\\d+(?:\\.\\d+)?)\\s*(m?M)\\b");
     private static final Pattern SALT = Pattern.compile("(\\d+(?:\\.\\d+)?)\\s*(m?M)\\s+(?:NaCl|KCl|NaNO3|KNO3)\\b");

@@ -173,9 +173,28 @@ public final class Engine {
             }
         }
         List<EstimatedSite> fitted = titr.subList(bestStart, bestStart + k);
+        // topologically equivalent sites share one shift (phosphoric acid's three O-H stay equal)
+        long[] sym = org.openscience.cdk.graph.invariant.Canon.symmetry(mol, GraphUtil.toAdjList(mol));
+        List<Long> classes = new ArrayList<>();
+        int[] classOf = new int[k];
+        for (int i = 0; i < k; i++) {
+            long c = sym[fitted.get(i).site().atom()];
+            int idx = classes.indexOf(c);
+            if (idx < 0) {
+                classes.add(c);
+                idx = classes.size() - 1;
+            }
+            classOf[i] = idx;
+        }
+        int p = classes.size();
+        double[] param = new double[p];
+        for (int i = 0; i < k; i++) {
+            param[classOf[i]] += (m.pka().get(i) - fitted.get(i).pka()) / java.util.Collections.frequency(
+                    java.util.Arrays.stream(classOf).boxed().toList(), classOf[i]);
+        }
         double[] shift = new double[k];
         for (int i = 0; i < k; i++) {
-            shift[i] = m.pka().get(i) - fitted.get(i).pka();
+            shift[i] = param[classOf[i]];
         }
         for (int iter = 0; iter < 40; iter++) {
             double[] r = residual(mol, est, titr, fitted, shift, m);
@@ -183,10 +202,14 @@ public final class Engine {
             if (worst < 1e-6) {
                 break;
             }
-            double[][] jac = new double[k][k];
-            for (int j = 0; j < k; j++) {
+            double[][] jac = new double[k][p];
+            for (int j = 0; j < p; j++) {
                 double[] trial = shift.clone();
-                trial[j] += 1e-4;
+                for (int i = 0; i < k; i++) {
+                    if (classOf[i] == j) {
+                        trial[i] += 1e-4;
+                    }
+                }
                 double[] rj = residual(mol, est, titr, fitted, trial, m);
                 for (int i = 0; i < k; i++) {
                     jac[i][j] = (rj[i] - r[i]) / 1e-4;
@@ -194,9 +217,15 @@ public final class Engine {
             }
             double[] step = solveDamped(jac, r, 1e-3);
             double norm = Arrays.stream(step).map(Math::abs).max().orElse(0);
+            if (norm < 1e-7) {
+                break; // least-squares optimum reached (fewer symmetry classes than constants)
+            }
             double scale = norm > 1 ? 1 / norm : 1;
-            for (int j = 0; j < k; j++) {
-                shift[j] -= scale * step[j];
+            for (int j = 0; j < p; j++) {
+                param[j] -= scale * step[j];
+            }
+            for (int i = 0; i < k; i++) {
+                shift[i] = param[classOf[i]];
             }
         }
         List<EstimatedSite> out = new ArrayList<>();
@@ -244,20 +273,21 @@ public final class Engine {
         return r;
     }
 
-    /** (JᵀJ + λI) x = Jᵀr by Gaussian elimination; k is small. */
+    /** (JᵀJ + λI) x = Jᵀr by Gaussian elimination: m residuals, k parameters, both small. */
     private static double[] solveDamped(double[][] j, double[] r, double lambda) {
-        int k = r.length;
+        int m = r.length;
+        int k = j[0].length;
         double[][] a = new double[k][k + 1];
         for (int p = 0; p < k; p++) {
             for (int q = 0; q < k; q++) {
                 double v = 0;
-                for (int i = 0; i < k; i++) {
+                for (int i = 0; i < m; i++) {
                     v += j[i][p] * j[i][q];
                 }
                 a[p][q] = v + (p == q ? lambda : 0);
             }
             double v = 0;
-            for (int i = 0; i < k; i++) {
+            for (int i = 0; i < m; i++) {
                 v += j[i][p] * r[i];
             }
             a[p][k] = v;
@@ -413,6 +443,9 @@ public final class Engine {
             neutral = chargeStates.getOrDefault(0, 0.0);
             logD = Double.isNaN(logP) ? null : logP + Math.log10(Math.max(neutral, 1e-12));
             species = species(mol, titr, pop, p.permanentCharge());
+            if (p.measured().isPresent() && measuredFit(p)) {
+                species = consistentWith(species, shift(pop.chargeStates(), p.permanentCharge()), chargeStates);
+            }
             if (sampled) {
                 warnings.add(String.format(Locale.ROOT, "populations sampled (Monte Carlo), standard error up to %.3f",
                         pop.stdError()));
@@ -628,8 +661,23 @@ public final class Engine {
         return out;
     }
 
+    /** Species fractions rescaled within each net charge so that they add up to the given charge states. */
+    private static List<Species> consistentWith(List<Species> species, Map<Integer, Double> model,
+            Map<Integer, Double> target) {
+        List<Species> out = new ArrayList<>();
+        for (Species s : species) {
+            double m = model.getOrDefault(s.charge(), 0.0);
+            double f = m > 0 ? s.fraction() * target.getOrDefault(s.charge(), 0.0) / m : s.fraction();
+            out.add(new Species(s.smiles(), s.charge(), f));
+        }
+        out.sort((a, b) -> Double.compare(b.fraction(), a.fraction()));
+        return out;
+    }
+
+    /** Leading species; microstates that are the same species (equivalent sites) are merged. */
     private static List<Species> species(IAtomContainer mol, List<EstimatedSite> titr, Populations pop, int permanent) {
         List<Species> out = new ArrayList<>();
+        List<String> keys = new ArrayList<>();
         for (Populations.Microstate m : pop.top()) {
             if (m.fraction() < 0.001 && !out.isEmpty()) {
                 break;
@@ -660,11 +708,25 @@ public final class Engine {
                         z--;
                     }
                 }
-                out.add(new Species(StructureReader.smiles(copy), z, m.fraction()));
+                String key = Overrides.canonical(copy);
+                int at = -1;
+                for (int j = 0; j < out.size(); j++) {
+                    if (keys.get(j).equals(key)) {
+                        at = j;
+                    }
+                }
+                if (at >= 0) {
+                    Species prior = out.get(at);
+                    out.set(at, new Species(prior.smiles(), prior.charge(), prior.fraction() + m.fraction()));
+                } else {
+                    keys.add(key);
+                    out.add(new Species(StructureReader.smiles(copy), z, m.fraction()));
+                }
             } catch (CloneNotSupportedException e) {
                 throw new IllegalStateException(e);
             }
         }
+        out.sort((a, b) -> Double.compare(b.fraction(), a.fraction()));
         return out;
     }
 

@@ -101,7 +101,7 @@ public final class Overrides {
         return or.isEmpty() ? 0 : (double) and.cardinality() / or.cardinality();
     }
 
-    static String canonical(IAtomContainer mol) {
+    public static String canonical(IAtomContainer mol) {
         try {
             return new SmilesGenerator(SmiFlavor.Unique).create(mol);
         } catch (CDKException e) {
