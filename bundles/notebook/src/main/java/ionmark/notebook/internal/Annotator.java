@@ -18,8 +18,10 @@ import ionmark.speciation.api.Curve;
 import ionmark.speciation.api.Speciation;
 
 /**
- * Annotates every structure block of an entry at the pH the entry states for it: the block's own
- * pH, else the nearest statement before it in the same section, else the entry's first statement.
+ * Annotates every structure of an entry (structure blocks, and SMILES written inline in text where
+ * unambiguous) at the pH the entry states for it: the block's own pH, else the nearest statement
+ * before it in the same section (for inline SMILES: up to the end of its own paragraph), else the
+ * entry's first statement.
  * Temperature and ionic strength are found the same way.
  */
 @Component(service = EntryDecorator.class)
@@ -53,6 +55,14 @@ public final class Annotator implements EntryDecorator {
         List<Decoration> out = new ArrayList<>();
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
+            if (b.kind() == Block.Kind.TEXT) {
+                // SMILES written inline in the text: annotated after the paragraph, at the pH that applies there
+                for (String smi : InlineStructures.find(b.content())) {
+                    Block inline = new Block(Block.Kind.STRUCTURE, smi, null, b.section());
+                    out.add(new Decoration(i, card(inline, i + 1, phs, temps, ionic).html()));
+                }
+                continue;
+            }
             if (b.kind() != Block.Kind.STRUCTURE || b.content().isBlank()) {
                 continue;
             }
