@@ -47,6 +47,7 @@ final class TableValidator {
         }
         Map<String, Patterns.Compiled> compiled = new HashMap<>();
         checkGroups(t, refIds, compiled, out);
+        checkOverlaps(t, compiled, out);
         checkSubstituents(t, refIds, out);
         checkMeasured(t, refIds, compiled, out);
         checkInteraction(t.interaction(), refIds, out);
@@ -107,6 +108,41 @@ final class TableValidator {
             sourced(out, p, g.sources(), refIds, "attenuation", g.attenuation());
             sourced(out, p, g.sources(), refIds, "enthalpy", g.enthalpy());
             unknownSourceKeys(out, p, g.sources(), refIds);
+        }
+    }
+
+    /**
+     * Two classes that both claim the site atom of one of their own examples with patterns of the
+     * same specificity: table order decides which wins, which a curator should know about.
+     */
+    private static void checkOverlaps(AcidityTable t, Map<String, Patterns.Compiled> compiled, List<Problem> out) {
+        for (int i = 0; i < t.groups().size(); i++) {
+            GroupClass g = t.groups().get(i);
+            Patterns.Compiled cg = compiled.get(g.id());
+            if (cg == null) {
+                continue;
+            }
+            for (String ex : g.matches()) {
+                IAtomContainer mol;
+                try {
+                    mol = Patterns.parseSmiles(ex);
+                } catch (InvalidSmilesException | RuntimeException e) {
+                    continue;
+                }
+                List<Integer> mine = Patterns.siteAtoms(cg, mol);
+                for (int j = 0; j < t.groups().size(); j++) {
+                    GroupClass o = t.groups().get(j);
+                    Patterns.Compiled co = compiled.get(o.id());
+                    if (j == i || co == null || o.specificity() != g.specificity()) {
+                        continue;
+                    }
+                    List<Integer> theirs = Patterns.siteAtoms(co, mol);
+                    if (theirs.stream().anyMatch(mine::contains)) {
+                        out.add(warn("$.groups[" + i + "].smarts", "overlaps with '" + o.id() + "' on example '" + ex
+                                + "' with the same specificity: table order decides"));
+                    }
+                }
+            }
         }
     }
 

@@ -45,6 +45,20 @@ class ShippedTableTest {
     }
 
     @Test
+    void everyGroupClassHasNegativeExamples() {
+        // the validator checks that no class matches its own negative examples; every class must have some
+        for (GroupClass g : TableSnapshotService.shipped().groups()) {
+            assertTrue(!g.misses().isEmpty(), g.id() + " has no example it must not match");
+        }
+    }
+
+    @Test
+    void shippedTableHasNoOverlappingClasses() throws IOException {
+        ValidationReport r = TableValidator.validate(shippedText());
+        assertTrue(r.warnings().stream().noneMatch(w -> w.message().contains("overlaps")), r.warnings().toString());
+    }
+
+    @Test
     void everyNumberHasASource() {
         AcidityTable t = TableSnapshotService.shipped();
         for (GroupClass g : t.groups()) {

@@ -54,7 +54,7 @@ public final class CompiledTable {
                 continue;
             }
             g.add(new Group(gc, SmartsPattern.create(gc.smarts(), SilentChemObjectBuilder.getInstance()), site,
-                    centres.stream().mapToInt(Integer::intValue).toArray(), specificity(gc.smarts(), q.getAtomCount()),
+                    centres.stream().mapToInt(Integer::intValue).toArray(), gc.specificity(),
                     i));
         }
         // most specific first: more pattern atoms, then table order
@@ -72,55 +72,6 @@ public final class CompiledTable {
         }
         s.sort(Comparator.comparingInt((Sub x) -> -x.size()).thenComparingInt(Sub::order));
         this.substituents = List.copyOf(s);
-    }
-
-    /**
-     * How much structure a pattern guarantees: its atoms, plus for every bracket atom with recursive
-     * SMARTS (not negated) the atoms of its smallest alternative beyond the first (so {@code [n;$(n1cccc2ccccc12)]},
-     * quinoline, counts 10 and outranks {@code [n;$(n1ccccc1)]}, pyridine, at 6).
-     */
-    static int specificity(String smarts, int topAtoms) {
-        int total = topAtoms;
-        int i = 0;
-        while (i < smarts.length()) {
-            if (smarts.charAt(i) != '[') {
-                i++;
-                continue;
-            }
-            int end = closing(smarts, i, '[', ']');
-            String atom = smarts.substring(i, end + 1);
-            int smallest = Integer.MAX_VALUE;
-            int k = atom.indexOf("$(");
-            while (k >= 0) {
-                int close = closing(atom, k + 1, '(', ')');
-                // a negated recursion (!$(...)) excludes structure; it guarantees none
-                if (k == 0 || atom.charAt(k - 1) != '!') {
-                    String inner = atom.substring(k + 2, close);
-                    QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
-                    if (Smarts.parse(q, inner)) {
-                        smallest = Math.min(smallest, q.getAtomCount());
-                    }
-                }
-                k = atom.indexOf("$(", close);
-            }
-            if (smallest != Integer.MAX_VALUE) {
-                total += Math.max(0, smallest - 1);
-            }
-            i = end + 1;
-        }
-        return total;
-    }
-
-    private static int closing(String s, int open, char o, char c) {
-        int depth = 0;
-        for (int j = open; j < s.length(); j++) {
-            if (s.charAt(j) == o) {
-                depth++;
-            } else if (s.charAt(j) == c && --depth == 0) {
-                return j;
-            }
-        }
-        return s.length() - 1;
     }
 
     public AcidityTable table() {
