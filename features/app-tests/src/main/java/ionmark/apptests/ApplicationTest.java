@@ -63,7 +63,26 @@ class ApplicationTest {
         service(Speciation.class);
         service(EntryDecorator.class);
         service(SidePanel.class);
-        service(TableListener.class);
+    }
+
+    @Test
+    void aRegisteredTableListenerHearsOfANewTable() throws InterruptedException {
+        // a test double registered as a whiteboard service, as any bundle would
+        java.util.concurrent.BlockingQueue<AcidityTable> heard = new java.util.concurrent.LinkedBlockingQueue<>();
+        var reg = ctx.registerService(TableListener.class, heard::add, null);
+        TableService tables = service(TableService.class);
+        AcidityTable before = tables.current();
+        try {
+            var v = before.version();
+            tables.install(before.withVersion(new ionmark.acidity.api.TableVersion(v.number() + 1, "in-framework test",
+                    v.time(), "listener check", "", v.number())));
+            AcidityTable got = heard.poll(10, TimeUnit.SECONDS);
+            assertNotNull(got, "the listener was not called");
+            assertEquals(v.number() + 1, got.version().number());
+        } finally {
+            reg.unregister();
+            tables.install(before);
+        }
     }
 
     @Test

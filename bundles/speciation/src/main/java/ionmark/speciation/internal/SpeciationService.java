@@ -15,7 +15,6 @@ import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.metatype.annotations.Designate;
 
 import ionmark.acidity.api.AcidityTable;
-import ionmark.acidity.api.TableListener;
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
@@ -27,30 +26,40 @@ import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.structure.StructureException;
 
 /**
- * The speciation service: one compiled {@link Engine} per table snapshot, swapped atomically when
- * the table changes; each molecule runs under a time limit.
+ * The speciation service: one compiled {@link Engine} per table snapshot. Every call compares the
+ * current snapshot with the engine's (an identity check) and rebuilds the engine when the table has
+ * changed, so a new table is used from the next call on and no change can be missed. (A listener
+ * callback would need the table service to reference this service while this service references
+ * the table service: a cycle that Declarative Services may leave unbound.) Each molecule runs under
+ * a time limit.
  */
-@Component(service = {Speciation.class, TableCalibration.class, TableListener.class},
-        configurationPid = "ionmark.speciation")
+@Component(service = {Speciation.class, TableCalibration.class}, configurationPid = "ionmark.speciation")
 @Designate(ocd = SpeciationConfiguration.class)
-public final class SpeciationService implements Speciation, TableCalibration, TableListener {
+public final class SpeciationService implements Speciation, TableCalibration {
     private final AtomicReference<Engine> engine = new AtomicReference<>();
+    private final TableService tables;
     private final int maxHeavyAtoms;
     private final int timeoutMillis;
     private final ExecutorService pool;
 
     @Activate
     public SpeciationService(@Reference TableService tables, SpeciationConfiguration config) {
-        this(tables.current(), config.maxHeavyAtoms(), config.timeoutMillis());
+        this(tables, tables.current(), config.maxHeavyAtoms(), config.timeoutMillis());
     }
 
+    /** With a fixed table (tests, tools). */
     public SpeciationService(AcidityTable table, int maxHeavyAtoms, int timeoutMillis) {
+        this(null, table, maxHeavyAtoms, timeoutMillis);
+    }
+
+    private SpeciationService(TableService tables, AcidityTable table, int maxHeavyAtoms, int timeoutMillis) {
         if (maxHeavyAtoms < 1) {
             throw new IllegalArgumentException("maxHeavyAtoms must be at least 1, not " + maxHeavyAtoms);
         }
         if (timeoutMillis < 10) {
             throw new IllegalArgumentException("timeoutMillis must be at least 10, not " + timeoutMillis);
         }
+        this.tables = tables;
         this.maxHeavyAtoms = maxHeavyAtoms;
         this.timeoutMillis = timeoutMillis;
         this.engine.set(new Engine(table, maxHeavyAtoms));
@@ -66,15 +75,30 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
         pool.shutdownNow();
     }
 
-    @Override
-    public void tableChanged(AcidityTable current) {
-        engine.set(new Engine(current, maxHeavyAtoms));
+    /** The engine for the current table, rebuilt once when the table service holds a new snapshot. */
+    Engine engine() {
+        Engine e = engine.get();
+        if (tables == null) {
+            return e;
+        }
+        AcidityTable now = tables.current();
+        if (e.table() == now) {
+            return e;
+        }
+        synchronized (this) {
+            e = engine.get();
+            if (e.table() != now) {
+                e = new Engine(now, maxHeavyAtoms);
+                engine.set(e);
+            }
+            return e;
+        }
     }
 
     @Override
     public Analysis analyse(String structure, Conditions conditions) {
         Conditions c = conditions == null ? Conditions.noPh() : conditions;
-        Engine e = engine.get();
+        Engine e = engine();
         Future<Analysis> f = pool.submit(() -> e.analyse(structure, c));
         try {
             return f.get(timeoutMillis, TimeUnit.MILLISECONDS);
@@ -93,7 +117,7 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
     @Override
     public Curve curve(String structure, Conditions conditions, double from, double to, double step) {
         try {
-            return engine.get().curve(structure, conditions == null ? Conditions.noPh() : conditions, from, to, step);
+            return engine().curve(structure, conditions == null ? Conditions.noPh() : conditions, from, to, step);
         } catch (StructureException e) {
             throw new IllegalArgumentException(e.getMessage(), e);
         }
@@ -109,6 +133,6 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
 
     /** The table version currently in use. */
     public String tableVersion() {
-        return engine.get().table().version().label();
+        return engine().table().version().label();
     }
 }
