@@ -120,8 +120,14 @@ class NotebookInBrowserTest {
         WebElement text = browser.findElement(By.id("text"));
         text.clear();
         text.sendKeys("# Quick test\n\nSample held at pH 3.0.\n\n```smiles\nCC(=O)O\n```\n");
-        new WebDriverWait(browser, Duration.ofSeconds(10)).until(d -> d.findElement(By.id("preview")).getText()
-                .contains("Sites at pH 3"));
+        try {
+            new WebDriverWait(browser, Duration.ofSeconds(30)).until(d -> d.findElement(By.id("preview")).getText()
+                    .contains("Sites at pH 3"));
+        } catch (org.openqa.selenium.TimeoutException e) {
+            shot("editor-preview-timeout");
+            throw new AssertionError("preview did not update; textarea holds: " + text.getAttribute("value")
+                    + "\npreview shows: " + browser.findElement(By.id("preview")).getText(), e);
+        }
         String card = browser.findElement(By.id("preview")).getText();
         // acetic acid, pKa 4.76 (CRC): about 98 % protonated at pH 3.0
         assertTrue(card.contains("4.76"), card);
