@@ -71,7 +71,7 @@ public final class Engine {
     /** The prepared problem for one structure: molecule, sites, numeric model at the conditions. */
     record Problem(StructureReader.Prepared prepared, List<EstimatedSite> sites, List<Integer> uncovered,
             SiteModel model, double[] polynomial, int permanentCharge, List<String> notes,
-            Optional<MeasuredCompound> measured) {
+            Optional<MeasuredCompound> measured, List<Double> measuredHere) {
         /** Net charge of the fully protonated form: every base site +1, plus permanent charges. */
         int topCharge() {
             int z = permanentCharge;
@@ -112,7 +112,41 @@ public final class Engine {
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
         SiteModel model = model(mol, est, c);
         double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
-        return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured);
+        final List<EstimatedSite> sitesNow = est;
+        List<Double> measuredHere = measured.map(m -> atConditions(m, mol, sitesNow, poly)).orElse(List.of());
+        return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
+    }
+
+    /**
+     * Measured macroscopic constants moved to the stated conditions: each by the model's own shift of
+     * the matching constant between 25 °C, I = 0 and the stated temperature and ionic strength
+     * (van 't Hoff per class enthalpy, Davies). Exact at standard conditions.
+     */
+    private List<Double> atConditions(MeasuredCompound m, IAtomContainer mol, List<EstimatedSite> est, double[] poly) {
+        List<Double> here = MacroConstants.of(poly);
+        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(mol, est, Conditions.noPh()),
+                table.table().interaction().cutoff()));
+        if (here.size() != std.size() || here.size() < m.pka().size()) {
+            return m.pka();
+        }
+        // the model constants nearest the measured ones, in order
+        int start = 0;
+        double best = Double.MAX_VALUE;
+        for (int s0 = 0; s0 + m.pka().size() <= std.size(); s0++) {
+            double cost = 0;
+            for (int i = 0; i < m.pka().size(); i++) {
+                cost += Math.abs(std.get(s0 + i) - m.pka().get(i));
+            }
+            if (cost < best) {
+                best = cost;
+                start = s0;
+            }
+        }
+        List<Double> out = new ArrayList<>();
+        for (int i = 0; i < m.pka().size(); i++) {
+            out.add(m.pka().get(i) + here.get(start + i) - std.get(start + i));
+        }
+        return out;
     }
 
     /**
@@ -415,7 +449,7 @@ public final class Engine {
         List<Double> macro = MacroConstants.of(p.polynomial()).stream()
                 .filter(v -> v >= MACRO_LOW && v <= MACRO_HIGH).map(v -> Math.round(v * 100) / 100.0).toList();
         if (p.measured().isPresent() && measuredFit(p)) {
-            macro = p.measured().get().pka();
+            macro = p.measuredHere().stream().map(v -> Math.round(v * 100) / 100.0).toList();
         }
         double logP = logP(mol);
         Double netCharge = null;
@@ -433,7 +467,10 @@ public final class Engine {
             if (p.measured().isPresent() && measuredFit(p)) {
                 chargeStates = fromMeasured(p, c.ph());
                 corrections.add("charge states from the measured macroscopic constants of "
-                        + p.measured().get().name() + " (exact, independent of the site model)");
+                        + p.measured().get().name() + (c.temperature() == Conditions.STANDARD_TEMPERATURE
+                                && c.ionicStrength() == 0 ? " (exact, independent of the site model)"
+                                        : ", moved to the stated conditions by the model's temperature and ionic-strength"
+                                                + " shifts"));
             }
             double mean = 0;
             for (var e : chargeStates.entrySet()) {
@@ -624,7 +661,7 @@ public final class Engine {
      * has weight 10^(Σ_(j≤d) (pH − pK_j)). Sites without measured values stay in their dominant form.
      */
     private Map<Integer, Double> fromMeasured(Problem p, double ph) {
-        List<Double> pk = p.measured().get().pka();
+        List<Double> pk = p.measuredHere();
         int z0 = p.permanentCharge();
         for (EstimatedSite s : p.sites()) {
             if (s.site().group().permanent()) {

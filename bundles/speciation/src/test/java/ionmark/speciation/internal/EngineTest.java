@@ -58,6 +58,16 @@ class EngineTest {
     }
 
     @Test
+    void measuredConstantsMoveWithTheStatedTemperature() {
+        // glycine amine ionization enthalpy about 44 kJ/mol (class value): at 37 °C its constant drops by about 0.3
+        Analysis warm = ENGINE.analyse("NCC(=O)O", new Conditions(7.4, 37, 0));
+        Analysis std = at("NCC(=O)O", 7.4);
+        assertEquals(9.78, std.macroPka().get(1), 1e-9);
+        double d = warm.macroPka().get(1) - 9.78;
+        assertTrue(d < -0.15 && d > -0.5, "shift " + d);
+    }
+
+    @Test
     void measuredValuesOverrideTheEstimate() {
         Analysis a = at("CC(=O)O", 7);
         assertEquals("measured", a.sites().get(0).basis());
