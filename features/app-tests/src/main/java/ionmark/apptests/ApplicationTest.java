@@ -66,6 +66,32 @@ class ApplicationTest {
     }
 
     @Test
+    void aPublishThroughTheStoreReachesTheSolverWithinFiveSeconds() throws Exception {
+        ionmark.store.api.TableStore store = service(ionmark.store.api.TableStore.class);
+        TableService tables = service(TableService.class);
+        var head = store.head().orElseThrow();
+        AcidityTable current = tables.validate(store.content(head.number()).orElseThrow()).table().orElseThrow();
+        double old = current.group("amine-secondary").orElseThrow().pka();
+        var groups = current.groups().stream()
+                .map(g -> g.id().equals("amine-secondary") ? g.withPka(g.pka() + 0.5, g.source("pka")) : g).toList();
+        var published = store.publish(tables.toJson(current.withGroups(groups)), head.number(), "in-framework test",
+                "raise secondary amines by 0.5");
+        long start = System.currentTimeMillis();
+        Speciation s = service(Speciation.class);
+        double classTerm = Double.NaN;
+        while (System.currentTimeMillis() - start < 5000) {
+            classTerm = s.analyse("CCCNCC", Conditions.noPh()).sites().get(0).derivation().get(0).value();
+            if (Math.abs(classTerm - (old + 0.5)) < 1e-9) {
+                break;
+            }
+            Thread.sleep(50);
+        }
+        assertEquals(old + 0.5, classTerm, 1e-9, "the published version did not reach the solver within 5 s");
+        assertTrue(s.analyse("CCN", Conditions.noPh()).tableVersion().startsWith("v" + published.number()));
+        assertTrue(store.audit(5).stream().anyMatch(e -> e.version() == published.number() && e.outcome().equals("ok")));
+    }
+
+    @Test
     void aRegisteredTableListenerHearsOfANewTable() throws InterruptedException {
         // a test double registered as a whiteboard service, as any bundle would
         java.util.concurrent.BlockingQueue<AcidityTable> heard = new java.util.concurrent.LinkedBlockingQueue<>();

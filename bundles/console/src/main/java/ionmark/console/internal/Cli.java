@@ -19,6 +19,7 @@ import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.api.TableCalibration;
+import ionmark.store.api.TableStore;
 
 /**
  * The command line: {@code check}, {@code batch}, {@code table}. Exit codes: 0 done, 1 the input
@@ -30,19 +31,24 @@ public final class Cli {
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M]
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N]
                    ionmark table validate FILE | table export [--out FILE]
-                   ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]""";
+                   ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
+                   ionmark table history | table diff A B | table audit [--limit N]
+                   ionmark table publish FILE --base N --comment TEXT [--author NAME]
+                   ionmark table rollback N --base M --comment TEXT [--author NAME]""";
 
     private final Speciation speciation;
     private final TableService tables;
     private final TableCalibration calibration;
+    private final TableStore store;
     private final PrintStream out;
     private final PrintStream err;
 
-    public Cli(Speciation speciation, TableService tables, TableCalibration calibration, PrintStream out,
-            PrintStream err) {
+    public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
+            PrintStream out, PrintStream err) {
         this.speciation = speciation;
         this.tables = tables;
         this.calibration = calibration;
+        this.store = store;
         this.out = out;
         this.err = err;
     }
@@ -251,6 +257,13 @@ public final class Cli {
             }
             case "calibrate" -> {
                 return calibrate(raw.subList(1, raw.size()));
+            }
+            case "history", "publish", "rollback", "diff", "audit" -> {
+                if (store == null) {
+                    err.println("ionmark: no table store is available for '" + raw.get(0) + "'");
+                    return 1;
+                }
+                return new StoreCommands(store, out, err).run(raw);
             }
             default -> throw new UsageException("unknown table subcommand '" + raw.get(0) + "'");
         }

@@ -14,6 +14,7 @@ import org.osgi.service.component.annotations.Reference;
 
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Speciation;
+import ionmark.store.api.TableStore;
 import ionmark.speciation.api.TableCalibration;
 
 /**
@@ -23,6 +24,28 @@ import ionmark.speciation.api.TableCalibration;
  */
 @Component(immediate = true)
 public final class CommandLineRunner {
+    static final long STORE_WAIT_MS = 20_000;
+
+    /**
+     * The table store, once it has opened and installed its head (its activation does both), so that
+     * commands see the department's table; null with a warning when it is not available in time.
+     */
+    static TableStore store(BundleContext ctx) {
+        org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> t = new org.osgi.util.tracker.ServiceTracker<>(ctx,
+                TableStore.class, null);
+        t.open();
+        try {
+            TableStore s = t.waitForService(STORE_WAIT_MS);
+            if (s == null) {
+                System.err.println("ionmark: the table store is not available: using the table in the bundle");
+            }
+            return s;
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            return null;
+        }
+    }
+
     static final String ARGS_FILE = "ionmark.args.file";
 
     @Activate
@@ -37,7 +60,7 @@ public final class CommandLineRunner {
             try {
                 String raw = Files.readString(Path.of(file), StandardCharsets.UTF_8);
                 List<String> args = Arrays.stream(raw.split("\0", -1)).filter(s -> !s.isEmpty()).toList();
-                code = new Cli(speciation, tables, calibration, System.out, System.err).run(args);
+                code = new Cli(speciation, tables, calibration, store(ctx), System.out, System.err).run(args);
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + e);
                 code = 1;

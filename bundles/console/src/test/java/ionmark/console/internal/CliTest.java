@@ -31,7 +31,7 @@ class CliTest {
     Path dir;
 
     int run(String... args) {
-        return new Cli(SPECIATION, TABLES, SPECIATION, new PrintStream(out, true, StandardCharsets.UTF_8),
+        return new Cli(SPECIATION, TABLES, SPECIATION, null, new PrintStream(out, true, StandardCharsets.UTF_8),
                 new PrintStream(err, true, StandardCharsets.UTF_8)).run(List.of(args));
     }
 

@@ -1,0 +1,150 @@
+package ionmark.store.internal;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ScheduledExecutorService;
+import java.util.concurrent.TimeUnit;
+
+import org.osgi.framework.BundleContext;
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Deactivate;
+import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.metatype.annotations.Designate;
+
+import ionmark.acidity.api.TableService;
+import ionmark.acidity.api.ValidationReport;
+import ionmark.store.api.AuditEvent;
+import ionmark.store.api.StoreConflictException;
+import ionmark.store.api.StoreRejectedException;
+import ionmark.store.api.TableStore;
+import ionmark.store.api.VersionInfo;
+
+/**
+ * The table store as a service. An empty store is seeded with the table in use as version 1. Every
+ * instance polls the head and installs a new head into the table service, so that all notebooks on
+ * one database show a publish within the poll interval.
+ */
+@Component(service = TableStore.class, immediate = true, configurationPid = "ionmark.store")
+@Designate(ocd = StoreConfiguration.class)
+public final class StoreComponent implements TableStore {
+    private final JdbcTableStore store;
+    private final TableService tables;
+    private final ScheduledExecutorService poller;
+    private volatile int installed;
+
+    @Activate
+    public StoreComponent(@Reference TableService tables, StoreConfiguration config, BundleContext ctx) throws IOException {
+        this.tables = tables;
+        if (config.pollSeconds() < 1) {
+            throw new IllegalArgumentException("pollSeconds must be at least 1, not " + config.pollSeconds());
+        }
+        String url = config.jdbcUrl().strip();
+        if (url.isEmpty()) {
+            String ws = ctx.getProperty("ionmark.workspace");
+            Path dir = Path.of(ws == null || ws.isBlank() ? "workspace" : ws, ".ionmark").toAbsolutePath();
+            Files.createDirectories(dir);
+            // AUTO_SERVER lets a command-line run open the store while the notebook has it open
+            url = "jdbc:h2:file:" + dir.resolve("table-store") + ";AUTO_SERVER=TRUE";
+        }
+        String password = config.passwordFile().isBlank() ? "" : Files.readAllLines(Path.of(config.passwordFile()))
+                .stream().findFirst().orElse("").strip();
+        this.store = new JdbcTableStore(tables, url, config.user(), password);
+        seed();
+        follow();
+        this.poller = Executors.newSingleThreadScheduledExecutor(r -> {
+            Thread t = new Thread(r, "ionmark-store-head");
+            t.setDaemon(true);
+            return t;
+        });
+        poller.scheduleWithFixedDelay(this::follow, config.pollSeconds(), config.pollSeconds(), TimeUnit.SECONDS);
+    }
+
+    private void seed() {
+        if (store.head().isEmpty()) {
+            try {
+                store.publish(tables.toJson(tables.current()), 0, "ionmark", "initial version: the table in use when the "
+                        + "store was created");
+            } catch (StoreConflictException e) {
+                // another instance seeded it first
+            } catch (StoreRejectedException e) {
+                throw new IllegalStateException("the table in use does not validate: " + e.problems(), e);
+            }
+        }
+    }
+
+    /** Installs the store's head into the table service when it is newer than what this instance installed. */
+    void follow() {
+        try {
+            Optional<VersionInfo> head = store.head();
+            if (head.isEmpty() || head.get().number() == installed) {
+                return;
+            }
+            String json = store.content(head.get().number()).orElseThrow();
+            ValidationReport r = tables.validate(json);
+            if (r.ok()) {
+                tables.install(r.table().orElseThrow());
+                installed = head.get().number();
+            } else {
+                System.err.println("ionmark: store head v" + head.get().number() + " does not validate: " + r.errors());
+            }
+        } catch (RuntimeException e) {
+            System.err.println("ionmark: cannot follow the table store: " + e.getMessage());
+        }
+    }
+
+    @Deactivate
+    void deactivate() {
+        poller.shutdownNow();
+    }
+
+    @Override
+    public Optional<VersionInfo> head() {
+        return store.head();
+    }
+
+    @Override
+    public List<VersionInfo> history() {
+        return store.history();
+    }
+
+    @Override
+    public Optional<String> content(int version) {
+        return store.content(version);
+    }
+
+    @Override
+    public VersionInfo publish(String json, int basedOn, String author, String comment)
+            throws StoreConflictException, StoreRejectedException {
+        VersionInfo v = store.publish(json, basedOn, author, comment);
+        follow();
+        return v;
+    }
+
+    @Override
+    public VersionInfo rollback(int toVersion, int basedOn, String author, String comment)
+            throws StoreConflictException, StoreRejectedException {
+        VersionInfo v = store.rollback(toVersion, basedOn, author, comment);
+        follow();
+        return v;
+    }
+
+    @Override
+    public void audit(String user, String action, int version, String outcome, String detail) {
+        store.audit(user, action, version, outcome, detail);
+    }
+
+    @Override
+    public List<AuditEvent> audit(int limit) {
+        return store.audit(limit);
+    }
+
+    @Override
+    public List<String> diff(int from, int to) {
+        return store.diff(from, to);
+    }
+}
