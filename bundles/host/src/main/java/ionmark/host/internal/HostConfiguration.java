@@ -12,6 +12,10 @@ import org.osgi.service.metatype.annotations.ObjectClassDefinition;
     @AttributeDefinition(name = "User name", description = "The user this single-user host vouches for")
     String user() default "chemist";
 
-    @AttributeDefinition(name = "Roles", description = "Roles the single-user host vouches for (viewer, admin)")
+    @AttributeDefinition(name = "Roles", description = "Roles of a visitor who has not signed in (viewer)")
     String[] roles() default {"viewer"};
+
+    @AttributeDefinition(name = "Users file", description = "Users and PBKDF2 password hashes; empty: "
+            + "<workspace>/.ionmark/users.properties, created with one admin on first start")
+    String usersFile() default "";
 }

@@ -18,10 +18,25 @@ final class Pages {
     }
 
     static String page(String title, String body) {
+        return page(title, body, null);
+    }
+
+    /** @param signedIn the signed-in user's name, or null */
+    static String page(String title, String body, String signedIn) {
+        String who = signedIn == null ? "<a href=\"/signin\" class=\"im-right\">Sign in</a>"
+                : "<span class=\"im-right\">" + esc(signedIn) + " · <a href=\"/signout\">Sign out</a></span>";
         return "<!doctype html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + esc(title)
                 + " · Ionmark notebook</title><style>" + STYLE + "</style></head><body><header><a href=\"/\">Ionmark "
-                + "notebook</a> <a href=\"/panel/quick-check\">Quick check</a></header><main>" + body
+                + "notebook</a> <a href=\"/panel/quick-check\">Quick check</a> " + who + "</header><main>" + body
                 + "</main></body></html>";
+    }
+
+    static String signIn(String token, String message) {
+        return "<h1>Sign in</h1>" + (message.isEmpty() ? "" : "<p class=\"im-error\" role=\"alert\">" + esc(message)
+                + "</p>") + "<form method=\"post\" action=\"/signin\"><input type=\"hidden\" name=\"token\" value=\""
+                + esc(token) + "\"><p><label>User <input name=\"user\" autocomplete=\"username\" required></label></p>"
+                + "<p><label>Password <input type=\"password\" name=\"password\" autocomplete=\"current-password\" "
+                + "required></label></p><p><button type=\"submit\">Sign in</button></p></form>";
     }
 
     static String list(List<String> ids, List<SidePanel> panels, List<ionmark.host.api.AdminPage> admin) {
@@ -97,5 +112,6 @@ final class Pages {
             + ".im-sites td,.im-sites th{border:1px solid #999;padding:.2em .5em;text-align:left}"
             + ".im-caution{font-size:.85em;border-left:4px solid #333;padding-left:.5em}"
             + ".im-error{color:#8a0000;font-weight:bold}pre.structure{background:#eee;padding:.4em}"
-            + "cite{font-size:.8em;color:#444}";
+            + "cite{font-size:.8em;color:#444}.im-right{float:right}.im-inline{display:inline}"
+            + ".im-ok{color:#064;font-weight:bold}";
 }

@@ -24,6 +24,7 @@ import ionmark.host.api.Block;
 import ionmark.host.api.Decoration;
 import ionmark.host.api.Entry;
 import ionmark.host.api.EntryDecorator;
+import ionmark.host.api.HostAuditor;
 import ionmark.host.api.HostUser;
 import ionmark.host.api.SidePanel;
 import jakarta.servlet.Servlet;
@@ -47,6 +48,9 @@ public final class WebShell extends HttpServlet {
     private final transient List<EntryDecorator> decorators = new CopyOnWriteArrayList<>();
     private final transient List<SidePanel> panels = new CopyOnWriteArrayList<>();
     private final transient List<AdminPage> adminPages = new CopyOnWriteArrayList<>();
+    private final transient List<HostAuditor> auditors = new CopyOnWriteArrayList<>();
+    private final transient Users users;
+    private final transient Sessions sessions = new Sessions();
 
     @Activate
     public WebShell(HostConfiguration config, BundleContext ctx) throws IOException {
@@ -57,6 +61,59 @@ public final class WebShell extends HttpServlet {
         byte[] b = new byte[24];
         new SecureRandom().nextBytes(b);
         this.csrf = HexFormat.of().formatHex(b);
+        Path usersFile = config.usersFile().isBlank() ? workspace.folder().resolve(".ionmark").resolve("users.properties")
+                : Path.of(config.usersFile());
+        this.users = new Users(usersFile);
+        if (users.isEmpty()) {
+            // first start: one admin with a random password, written next to the users file for the operator
+            String pw = users.randomPassword();
+            users.put("admin", Set.of("viewer", "admin"), pw.toCharArray());
+            Path pwFile = usersFile.resolveSibling("admin-password.txt");
+            java.nio.file.Files.writeString(pwFile, pw + "\n");
+            try {
+                java.nio.file.Files.setPosixFilePermissions(pwFile,
+                        java.nio.file.attribute.PosixFilePermissions.fromString("rw-------"));
+            } catch (UnsupportedOperationException e) {
+                // not a POSIX file system
+            }
+            System.err.println("ionmark: created user 'admin'; its password is in " + pwFile);
+        }
+    }
+
+    @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
+    void addAuditor(HostAuditor a) {
+        auditors.add(a);
+    }
+
+    void removeAuditor(HostAuditor a) {
+        auditors.remove(a);
+    }
+
+    private void audit(String who, String action, String outcome, String detail) {
+        for (HostAuditor a : auditors) {
+            try {
+                a.record(who, action, outcome, detail);
+            } catch (RuntimeException e) {
+                System.err.println("ionmark: auditor failed: " + e.getMessage());
+            }
+        }
+    }
+
+    /** The request's user and CSRF token: the session's when signed in, else the local viewer's. */
+    private record Who(HostUser user, String csrf, String session) {
+    }
+
+    private Who who(HttpServletRequest req) {
+        String id = null;
+        if (req.getCookies() != null) {
+            for (var c : req.getCookies()) {
+                if (c.getName().equals(Sessions.COOKIE)) {
+                    id = c.getValue();
+                }
+            }
+        }
+        var s = sessions.get(id);
+        return s.isPresent() ? new Who(s.get().user(), s.get().csrf(), id) : new Who(user, csrf, null);
     }
 
     @Reference(cardinality = ReferenceCardinality.MULTIPLE, policy = ReferencePolicy.DYNAMIC)
@@ -91,14 +148,18 @@ public final class WebShell extends HttpServlet {
         if (!path.startsWith("/admin/")) {
             return false;
         }
+        Who w = who(req);
         String id = path.substring(7);
         AdminPage p = adminPages.stream().filter(x -> x.id().equals(id)).findFirst().orElse(null);
         if (p == null) {
             resp.sendError(404, "no such admin page");
-        } else if (!user.has(p.requiredRole())) {
-            resp.sendError(403, "the page needs the role " + p.requiredRole());
+        } else if (!w.user().has(p.requiredRole())) {
+            audit(w.user().name(), "request", "denied", (post ? "POST " : "GET ") + path + " needs " + p.requiredRole());
+            resp.sendError(403, "the page needs the role " + p.requiredRole() + (w.session() == null
+                    ? ": sign in at /signin" : ""));
         } else {
-            page(resp, p.title(), "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, user, csrf));
+            page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, w.user(),
+                    w.csrf()));
         }
         return true;
     }
@@ -110,23 +171,30 @@ public final class WebShell extends HttpServlet {
             if (admin(path, req, resp, false)) {
                 return;
             }
-            if (path.equals("/") || path.isEmpty()) {
-                page(resp, "Entries", Pages.list(workspace.ids(), panels, adminPages.stream()
-                        .filter(p -> user.has(p.requiredRole())).toList()));
+            Who w = who(req);
+            if (path.equals("/signin")) {
+                page(resp, "Sign in", w, Pages.signIn(csrf, ""));
+            } else if (path.equals("/signout")) {
+                sessions.close(w.session());
+                resp.setHeader("Set-Cookie", Sessions.cookie("", 0));
+                resp.sendRedirect("/");
+            } else if (path.equals("/") || path.isEmpty()) {
+                page(resp, "Entries", w, Pages.list(workspace.ids(), panels, adminPages.stream()
+                        .filter(p -> w.user().has(p.requiredRole())).toList()));
             } else if (path.startsWith("/entry/") && path.endsWith("/edit")) {
                 String id = path.substring(7, path.length() - 5);
-                page(resp, "Edit " + id, Pages.editor(id, workspace.text(id), csrf));
+                page(resp, "Edit " + id, w, Pages.editor(id, workspace.text(id), w.csrf()));
             } else if (path.startsWith("/entry/")) {
                 String id = path.substring(7);
                 Entry e = workspace.entry(id);
-                page(resp, e.title(), Pages.entry(e, decorations(e), panels));
+                page(resp, e.title(), w, Pages.entry(e, decorations(e, w.user()), panels));
             } else if (path.startsWith("/panel/")) {
                 SidePanel p = panel(path.substring(7));
                 if (p == null) {
                     resp.sendError(404, "no such panel");
                     return;
                 }
-                page(resp, p.title(), "<h1>" + Pages.esc(p.title()) + "</h1>" + p.html(params(req), user));
+                page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.html(params(req), w.user()));
             } else {
                 resp.sendError(404);
             }
@@ -137,11 +205,19 @@ public final class WebShell extends HttpServlet {
 
     @Override
     protected void doPost(HttpServletRequest req, HttpServletResponse resp) throws IOException {
-        if (!csrf.equals(req.getHeader("X-Ionmark-Token")) && !csrf.equals(req.getParameter("token"))) {
+        Who w = who(req);
+        String path = req.getPathInfo() == null ? req.getRequestURI() : req.getPathInfo();
+        // sign-in forms carry the local token; everything else the token of the request's session
+        String expected = path.equals("/signin") ? csrf : w.csrf();
+        if (!expected.equals(req.getHeader("X-Ionmark-Token")) && !expected.equals(req.getParameter("token"))) {
+            audit(w.user().name(), "request", "denied", "POST " + path + " without a valid CSRF token");
             resp.sendError(403, "missing or wrong CSRF token");
             return;
         }
-        String path = req.getPathInfo() == null ? req.getRequestURI() : req.getPathInfo();
+        if (path.equals("/signin")) {
+            signIn(req, resp, w);
+            return;
+        }
         try {
             if (admin(path, req, resp, true)) {
                 return;
@@ -149,7 +225,7 @@ public final class WebShell extends HttpServlet {
             if (path.equals("/preview")) {
                 String text = new String(req.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
                 Entry e = Workspace.parse("preview", text);
-                send(resp, Pages.body(e, decorations(e)));
+                send(resp, Pages.body(e, decorations(e, w.user())));
             } else if (path.startsWith("/entry/")) {
                 String id = path.substring(7);
                 workspace.save(id, req.getParameter("text") == null ? "" : req.getParameter("text"));
@@ -162,10 +238,27 @@ public final class WebShell extends HttpServlet {
         }
     }
 
-    private Map<Integer, List<String>> decorations(Entry e) {
+    private void signIn(HttpServletRequest req, HttpServletResponse resp, Who w) throws IOException {
+        String name = req.getParameter("user") == null ? "" : req.getParameter("user").strip();
+        String pw = req.getParameter("password") == null ? "" : req.getParameter("password");
+        Users.Attempt a = users.signIn(name, pw.toCharArray());
+        audit(name, "sign-in", a.outcome(), req.getRemoteAddr());
+        if (a.user().isPresent()) {
+            resp.setHeader("Set-Cookie", Sessions.cookie(sessions.open(a.user().get()), Sessions.LIFETIME_MS / 1000));
+            resp.sendRedirect("/");
+            return;
+        }
+        String msg = a.outcome().equals("locked") || a.retryAfterMs() > 0
+                ? "Too many failed attempts: try again in " + (a.retryAfterMs() / 1000 + 1) + " s."
+                : "Wrong user name or password.";
+        resp.setStatus(401);
+        page(resp, "Sign in", w, Pages.signIn(csrf, msg));
+    }
+
+    private Map<Integer, List<String>> decorations(Entry e, HostUser who) {
         Map<Integer, List<String>> out = new HashMap<>();
         for (EntryDecorator d : decorators) {
-            for (Decoration x : d.decorate(e, user)) {
+            for (Decoration x : d.decorate(e, who)) {
                 out.computeIfAbsent(x.block(), k -> new java.util.ArrayList<>()).add(x.html());
             }
         }
@@ -182,8 +275,8 @@ public final class WebShell extends HttpServlet {
         return m;
     }
 
-    private static void page(HttpServletResponse resp, String title, String body) throws IOException {
-        send(resp, Pages.page(title, body));
+    private static void page(HttpServletResponse resp, String title, Who w, String body) throws IOException {
+        send(resp, Pages.page(title, body, w.session() == null ? null : w.user().name()));
     }
 
     private static void send(HttpServletResponse resp, String html) throws IOException {

@@ -22,6 +22,7 @@ import ionmark.speciation.api.Curve;
 import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.api.TableCalibration;
+import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.structure.StructureException;
 
@@ -33,9 +34,10 @@ import ionmark.speciation.internal.structure.StructureException;
  * the table service: a cycle that Declarative Services may leave unbound.) Each molecule runs under
  * a time limit.
  */
-@Component(service = {Speciation.class, TableCalibration.class}, configurationPid = "ionmark.speciation")
+@Component(service = {Speciation.class, TableCalibration.class, TableRegression.class},
+        configurationPid = "ionmark.speciation")
 @Designate(ocd = SpeciationConfiguration.class)
-public final class SpeciationService implements Speciation, TableCalibration {
+public final class SpeciationService implements Speciation, TableCalibration, TableRegression {
     private final AtomicReference<Engine> engine = new AtomicReference<>();
     private final TableService tables;
     private final int maxHeavyAtoms;
@@ -129,6 +131,11 @@ public final class SpeciationService implements Speciation, TableCalibration {
         java.util.List<Calibration.Point> points = data.parallelStream().map(e::calibrationPoint)
                 .flatMap(java.util.Optional::stream).toList();
         return Calibration.fit(base, points, referenceId, citation);
+    }
+
+    @Override
+    public Report compare(AcidityTable head, AcidityTable draft) {
+        return Regression.compare(head, draft, maxHeavyAtoms);
     }
 
     /** The table version currently in use. */

@@ -1,0 +1,148 @@
+package ionmark.browsertests;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.net.ServerSocket;
+import java.net.URI;
+import java.net.URLEncoder;
+import java.net.http.HttpClient;
+import java.net.http.HttpRequest;
+import java.net.http.HttpResponse;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The admin workflow over HTTP against the running application: a viewer is refused (403), failed
+ * sign-ins lock a name, an admin signs in, checks a draft (validation and regression report) and
+ * publishes it with a comment; a request without the session's CSRF token is refused.
+ */
+class AdminWorkflowHttpTest {
+    static Process app;
+    static String base;
+    static final HttpClient HTTP = HttpClient.newBuilder().followRedirects(HttpClient.Redirect.NEVER).build();
+
+    @TempDir
+    static Path workspace;
+
+    @BeforeAll
+    static void start() throws Exception {
+        Path jar = Path.of(System.getProperty("ionmark.app.jar", "../app/target/ionmark.jar"));
+        int port;
+        try (ServerSocket s = new ServerSocket(0)) {
+            port = s.getLocalPort();
+        }
+        base = "http://127.0.0.1:" + port;
+        app = new ProcessBuilder("java", "-Dorg.osgi.service.http.port=" + port, "-Dgosh.args=--nointeractive",
+                "-Dionmark.workspace=" + workspace, "-jar", jar.toString()).redirectErrorStream(true)
+                .redirectOutput(workspace.resolveSibling(workspace.getFileName() + "-admin-app.log").toFile()).start();
+        NotebookInBrowserTest.waitForCards(base + "/entry/05-assay-ph74");
+        // the admin page registers once the table store has opened (after the annotations)
+        long deadline = System.currentTimeMillis() + 60_000;
+        while (get("/admin/table", null).statusCode() == 404 && System.currentTimeMillis() < deadline) {
+            Thread.sleep(250);
+        }
+    }
+
+    @AfterAll
+    static void stop() {
+        if (app != null) {
+            app.destroy();
+        }
+    }
+
+    static HttpResponse<String> get(String path, String cookie) throws Exception {
+        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path));
+        if (cookie != null) {
+            b.header("Cookie", cookie);
+        }
+        return HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString());
+    }
+
+    static HttpResponse<String> post(String path, String cookie, Map<String, String> form) throws Exception {
+        String body = form.entrySet().stream().map(e -> e.getKey() + "=" + URLEncoder.encode(e.getValue(),
+                StandardCharsets.UTF_8)).collect(Collectors.joining("&"));
+        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path))
+                .header("Content-Type", "application/x-www-form-urlencoded").POST(HttpRequest.BodyPublishers.ofString(body));
+        if (cookie != null) {
+            b.header("Cookie", cookie);
+        }
+        return HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString());
+    }
+
+    static String token(String html) {
+        Matcher m = Pattern.compile("name=\"token\" value=\"([0-9a-f]+)\"").matcher(html);
+        assertTrue(m.find(), "no CSRF token in the page");
+        return m.group(1);
+    }
+
+    @Test
+    void viewerIsRefusedAndAdminPublishesThroughTheBrowserWorkflow() throws Exception {
+        assertEquals(403, get("/admin/table", null).statusCode(), "a viewer may not open the admin page");
+
+        String signInToken = token(get("/signin", null).body());
+        for (int i = 0; i < 4; i++) {
+            post("/signin", null, Map.of("token", signInToken, "user", "mallory", "password", "guess" + i));
+        }
+        HttpResponse<String> locked = post("/signin", null, Map.of("token", signInToken, "user", "mallory",
+                "password", "guess"));
+        assertTrue(locked.body().contains("Too many failed attempts"), locked.body());
+
+        String password = Files.readString(workspace.resolve(".ionmark/admin-password.txt")).strip();
+        HttpResponse<String> ok = post("/signin", null, Map.of("token", signInToken, "user", "admin", "password",
+                password));
+        assertEquals(302, ok.statusCode());
+        String setCookie = ok.headers().firstValue("Set-Cookie").orElseThrow();
+        assertTrue(setCookie.contains("HttpOnly") && setCookie.contains("SameSite=Strict"), setCookie);
+        String cookie = setCookie.substring(0, setCookie.indexOf(';'));
+
+        HttpResponse<String> admin = get("/admin/table", cookie);
+        assertEquals(200, admin.statusCode());
+        assertTrue(admin.body().contains("History") && admin.body().contains("v1"), admin.body());
+        String csrf = token(admin.body());
+        Matcher draft = Pattern.compile("<textarea id=\"draft\"[^>]*>(.*?)</textarea>", Pattern.DOTALL)
+                .matcher(admin.body());
+        assertTrue(draft.find());
+        String head = draft.group(1).replace("&quot;", "\"").replace("&lt;", "<").replace("&gt;", ">")
+                .replace("&#39;", "'").replace("&amp;", "&");
+        String edited = head.replaceFirst("(\"id\": \"amine-primary\", [^\\n]*?\"pka\": )[0-9.]+", "$110.95");
+
+        assertEquals(403, post("/admin/table", cookie, Map.of("action", "publish", "draft", edited, "base", "1",
+                "comment", "no token")).statusCode(), "a publish without the session's CSRF token is refused");
+
+        HttpResponse<String> check = post("/admin/table", cookie, Map.of("token", csrf, "action", "check", "draft",
+                edited, "base", "1"));
+        assertTrue(check.body().contains("Reference set") && check.body().contains("group amine-primary"), check.body());
+
+        HttpResponse<String> bad = post("/admin/table", cookie, Map.of("token", csrf, "action", "validate", "draft",
+                edited.replace("[CX4:2][NX3;H2", "[CX4:2][NX3;H2[")));
+        assertTrue(bad.body().contains("$.groups["), "validation points at the error by path");
+
+        HttpResponse<String> published = post("/admin/table", cookie, Map.of("token", csrf, "action", "publish", "draft",
+                edited, "base", "1", "comment", "primary amines raised for the test"));
+        assertTrue(published.body().contains("Published v2"), published.body());
+
+        // the notebook shows the new version within the poll interval
+        long deadline = System.currentTimeMillis() + 10_000;
+        String entry = "";
+        while (System.currentTimeMillis() < deadline) {
+            entry = get("/entry/04-buffer-preparation", null).body();
+            if (entry.contains("Table v2")) {
+                break;
+            }
+            Thread.sleep(250);
+        }
+        assertTrue(entry.contains("Table v2"), "annotations did not move to v2");
+    }
+}
