@@ -29,7 +29,7 @@ import ionmark.store.api.VersionInfo;
  * version, moves the head and appends the audit line in one transaction: a crash leaves the old head
  * or the new one, never a mix. Connections are opened per operation.
  */
-public final class JdbcTableStore implements TableStore {
+public final class JdbcTableStore implements TableStore, AutoCloseable {
     static final int SCHEMA_VERSION = 1;
 
     private final TableService tables;
@@ -40,7 +40,10 @@ public final class JdbcTableStore implements TableStore {
 
     public JdbcTableStore(TableService tables, String url, String user, String password) {
         this.tables = tables;
-        this.url = url;
+        // H2 closes a database when its last connection closes; reopening runs recovery again after an unclean
+        // stop. Keep it open while this JVM runs, so recovery happens once, at the first open.
+        this.url = url.startsWith("jdbc:h2:") && !url.toUpperCase(java.util.Locale.ROOT).contains("DB_CLOSE_DELAY")
+                ? url + ";DB_CLOSE_DELAY=-1" : url;
         this.credentials = new Properties();
         credentials.setProperty("user", user == null ? "" : user);
         credentials.setProperty("password", password == null ? "" : password);
@@ -129,6 +132,45 @@ public final class JdbcTableStore implements TableStore {
     private static VersionInfo info(ResultSet r) throws SQLException {
         return new VersionInfo(r.getInt(1), r.getString(2), r.getTimestamp(3).toInstant(), r.getString(4),
                 r.getString(5).strip(), r.getInt(6));
+    }
+
+    /** Closes an embedded H2 database (a server database needs nothing). */
+    @Override
+    public void close() {
+        if (!postgres) {
+            try (Connection c = connect(); Statement s = c.createStatement()) {
+                s.execute("shutdown");
+            } catch (SQLException e) {
+                // already closed
+            }
+        }
+    }
+
+    /** The head row and every version number, read in one transaction (a consistent snapshot). */
+    record Snapshot(int head, List<Integer> versions) {
+    }
+
+    Snapshot snapshot() {
+        try (Connection c = connect()) {
+            c.setAutoCommit(false);
+            c.setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
+            int head;
+            try (Statement s = c.createStatement(); ResultSet r = s.executeQuery("select number from ionmark_head where id = 1")) {
+                r.next();
+                head = r.getInt(1);
+            }
+            List<Integer> versions = new ArrayList<>();
+            try (Statement s = c.createStatement(); ResultSet r = s.executeQuery(
+                    "select number from ionmark_version order by number desc")) {
+                while (r.next()) {
+                    versions.add(r.getInt(1));
+                }
+            }
+            c.commit();
+            return new Snapshot(head, versions);
+        } catch (SQLException e) {
+            throw new IllegalStateException("cannot read the store: " + e.getMessage(), e);
+        }
     }
 
     @Override

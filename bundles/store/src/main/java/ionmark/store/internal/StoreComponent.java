@@ -100,6 +100,7 @@ public final class StoreComponent implements TableStore {
     @Deactivate
     void deactivate() {
         poller.shutdownNow();
+        store.close();
     }
 
     @Override

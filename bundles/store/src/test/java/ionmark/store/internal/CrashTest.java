@@ -44,15 +44,19 @@ class CrashTest {
                 Thread.sleep(200 + ThreadLocalRandom.current().nextInt(800));
                 p.destroyForcibly();
                 assertTrue(p.waitFor(30, TimeUnit.SECONDS));
-                check(new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2]));
+                try (JdbcTableStore s = new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2])) {
+                    check(s, t[0] + " round " + round);
+                }
             }
         }
     }
 
-    private static void check(JdbcTableStore s) {
-        int head = s.head().map(VersionInfo::number).orElse(0);
+    private static void check(JdbcTableStore s, String where) {
+        JdbcTableStore.Snapshot snap = s.snapshot();
+        int head = snap.head();
+        assertEquals(head, snap.versions().isEmpty() ? 0 : snap.versions().get(0), () -> where
+                + ": the head row names the newest version; newest versions " + snap.versions().stream().limit(4).toList());
         List<VersionInfo> history = s.history();
-        assertEquals(head, history.isEmpty() ? 0 : history.get(0).number(), "head is the newest complete version");
         for (int i = 0; i < history.size(); i++) {
             VersionInfo v = history.get(i);
             assertEquals(head - i, v.number(), "no gap in the versions");
