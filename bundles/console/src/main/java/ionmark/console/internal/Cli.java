@@ -235,6 +235,10 @@ public final class Cli {
                     return 1;
                 }
                 ValidationReport r = tables.validate(text);
+                if (store != null) {
+                    store.audit(System.getProperty("user.name", "unknown"), "validate", 0, r.ok() ? "ok" : "rejected",
+                            raw.get(1) + ": " + r.errors().size() + " errors");
+                }
                 r.problems().forEach(out::println);
                 out.println(String.format(Locale.ROOT, "%d errors, %d warnings", r.errors().size(),
                         r.warnings().size()));
@@ -243,6 +247,10 @@ public final class Cli {
             case "export" -> {
                 Args a = Args.parse(raw.subList(1, raw.size()), java.util.Set.of("--out"));
                 String json = tables.toJson(tables.current());
+                if (store != null) {
+                    store.audit(System.getProperty("user.name", "unknown"), "export", tables.current().version().number(),
+                            "ok", "command line" + (a.flags().containsKey("--out") ? " to " + a.flags().get("--out") : ""));
+                }
                 if (a.flags().containsKey("--out")) {
                     try {
                         Files.writeString(Path.of(a.flags().get("--out")), json, StandardCharsets.UTF_8);

@@ -25,6 +25,8 @@ final class Workspace {
     private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_-]{0,80}");
     private static final Pattern FENCE = Pattern.compile("^```\\s*(smiles|molfile)\\b(.*)$");
     private static final Pattern BLOCK_PH = Pattern.compile("ph\\s*=\\s*(-?\\d+(?:\\.\\d+)?)", Pattern.CASE_INSENSITIVE);
+    /** "Table version: v3" on a line of its own pins the entry's annotations to that table version. */
+    private static final Pattern PIN = Pattern.compile("^\\s*table version:\\s*v?(\\d+)\\s*$", Pattern.CASE_INSENSITIVE);
     static final List<String> DEMO = List.of("01-workup-extraction", "02-salt-screen", "03-hplc-mobile-phase",
             "04-buffer-preparation", "05-assay-ph74", "06-stability-ph12");
 
@@ -100,11 +102,16 @@ final class Workspace {
         List<Block> blocks = new ArrayList<>();
         String title = id;
         int section = 0;
+        int pinned = 0;
         StringBuilder para = new StringBuilder();
         String[] lines = text.split("\r?\n", -1);
         for (int i = 0; i < lines.length; i++) {
             String line = lines[i];
             Matcher f = FENCE.matcher(line.strip());
+            Matcher pin = PIN.matcher(line);
+            if (pin.matches()) {
+                pinned = Integer.parseInt(pin.group(1));
+            }
             if (f.matches()) {
                 flush(blocks, para, section);
                 StringBuilder body = new StringBuilder();
@@ -136,7 +143,7 @@ final class Workspace {
             }
         }
         flush(blocks, para, section);
-        return new Entry(id, title, blocks, 0);
+        return new Entry(id, title, blocks, pinned);
     }
 
     private static void flush(List<Block> blocks, StringBuilder para, int section) {

@@ -27,10 +27,32 @@ import ionmark.speciation.api.Speciation;
 @Component(service = EntryDecorator.class)
 public final class Annotator implements EntryDecorator {
     private final Speciation speciation;
+    private final ionmark.store.api.TableStore store;
+    private final ionmark.acidity.api.TableService tables;
 
+    public Annotator(Speciation speciation) {
+        this(speciation, null, null);
+    }
+
+    /** With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version. */
     @Activate
-    public Annotator(@Reference Speciation speciation) {
+    public Annotator(@Reference Speciation speciation,
+            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
+            ionmark.store.api.TableStore store,
+            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
+            ionmark.acidity.api.TableService tables) {
         this.speciation = speciation;
+        this.store = store;
+        this.tables = tables;
+    }
+
+    /** The speciation for an entry: bound to its pinned table version when it names one the store holds. */
+    Speciation forEntry(Entry entry) {
+        if (entry.pinnedTableVersion() <= 0 || store == null || tables == null) {
+            return speciation;
+        }
+        return store.content(entry.pinnedTableVersion()).flatMap(json -> tables.validate(json).table())
+                .map(speciation::pinned).orElse(speciation);
     }
 
     /** A statement found in a text block. */
@@ -39,6 +61,7 @@ public final class Annotator implements EntryDecorator {
 
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
+        Speciation sp = forEntry(entry);
         List<Found<StatedConditions.PhStatement>> phs = new ArrayList<>();
         List<Found<StatedConditions.Value>> temps = new ArrayList<>();
         List<Found<StatedConditions.Value>> ionic = new ArrayList<>();
@@ -59,19 +82,19 @@ public final class Annotator implements EntryDecorator {
                 // SMILES written inline in the text: annotated after the paragraph, at the pH that applies there
                 for (String smi : InlineStructures.find(b.content())) {
                     Block inline = new Block(Block.Kind.STRUCTURE, smi, null, b.section());
-                    out.add(new Decoration(i, card(inline, i + 1, phs, temps, ionic).html()));
+                    out.add(new Decoration(i, card(sp, inline, i + 1, phs, temps, ionic).html()));
                 }
                 continue;
             }
             if (b.kind() != Block.Kind.STRUCTURE || b.content().isBlank()) {
                 continue;
             }
-            out.add(new Decoration(i, card(b, i, phs, temps, ionic).html()));
+            out.add(new Decoration(i, card(sp, b, i, phs, temps, ionic).html()));
         }
         return out;
     }
 
-    Card card(Block b, int index, List<Found<StatedConditions.PhStatement>> phs,
+    Card card(Speciation sp, Block b, int index, List<Found<StatedConditions.PhStatement>> phs,
             List<Found<StatedConditions.Value>> temps, List<Found<StatedConditions.Value>> ionic) {
         List<String> taken = new ArrayList<>();
         double t = Conditions.STANDARD_TEMPERATURE;
@@ -100,10 +123,15 @@ public final class Annotator implements EntryDecorator {
                 taken.add(0, f.value().words());
             }
         }
-        return check(b.content(), phValues, t, is, taken);
+        return check(sp, b.content(), phValues, t, is, taken);
     }
 
     Card check(String structure, List<Double> phValues, double t, double is, List<String> taken) {
+        return check(speciation, structure, phValues, t, is, taken);
+    }
+
+    Card check(Speciation speciation, String structure, List<Double> phValues, double t, double is,
+            List<String> taken) {
         List<Analysis> analyses = new ArrayList<>();
         if (phValues.isEmpty()) {
             analyses.add(speciation.analyse(structure, new Conditions(null, t, is)));

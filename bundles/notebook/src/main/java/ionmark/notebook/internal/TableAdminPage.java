@@ -63,13 +63,23 @@ public final class TableAdminPage implements AdminPage {
         if (post) {
             switch (action) {
                 case "validate" -> {
-                    return problems(tables.validate(draft));
+                    ValidationReport r = tables.validate(draft);
+                    store.audit(user.name(), "validate", head.number(), r.ok() ? "ok" : "rejected",
+                            r.errors().size() + " errors, " + r.warnings().size() + " warnings (as you type)");
+                    return problems(r);
                 }
-                case "check" -> sb.append(check(head, draft));
+                case "check" -> {
+                    store.audit(user.name(), "validate", head.number(), "ok", "validate and compare");
+                    sb.append(check(head, draft));
+                }
                 case "publish" -> sb.append(publish(draft, params, user));
                 case "rollback" -> sb.append(rollback(params, user));
                 default -> sb.append("<p class=\"im-error\">Unknown action.</p>");
             }
+        } else if (action.equals("export")) {
+            store.audit(user.name(), "export", head.number(), "ok", "head shown for download");
+            return "<p>Table v" + head.number() + " as JSON (select all and save, or use <code>./ionmark table export</code>):"
+                    + "</p><pre class=\"im-export\">" + Html.esc(store.content(head.number()).orElse("")) + "</pre>";
         } else if (action.equals("diff")) {
             int from = Integer.parseInt(params.getOrDefault("from", "1"));
             int to = Integer.parseInt(params.getOrDefault("to", String.valueOf(head.number())));
@@ -156,6 +166,8 @@ public final class TableAdminPage implements AdminPage {
                 + "<input type=\"hidden\" name=\"token\" value=\"" + t + "\"><input type=\"hidden\" name=\"base\" value=\""
                 + head.number() + "\"><textarea id=\"draft\" name=\"draft\" rows=\"18\" cols=\"110\" spellcheck=\"false\">"
                 + Html.esc(draft) + "</textarea><div id=\"live\" aria-live=\"polite\"></div>"
+                + "<p><label>Or load a table file <input type=\"file\" id=\"upload\" accept=\".json,application/json\">"
+                + "</label> <a href=\"/admin/table?action=export\">Export the head</a></p>"
                 + "<p><label>Why (required to publish) <input name=\"comment\" size=\"70\"></label></p>"
                 + "<p><button name=\"action\" value=\"check\">Validate and compare</button> "
                 + "<button name=\"action\" value=\"publish\">Publish</button></p></form><script>"
@@ -164,7 +176,9 @@ public final class TableAdminPage implements AdminPage {
                 + "fetch('/admin/table',{method:'POST',headers:{'Content-Type':'application/x-www-form-urlencoded'},"
                 + "body:new URLSearchParams({token:'" + t + "',action:'validate',draft:d.value})}).then(x=>x.text())"
                 + ".then(x=>{if(my===seq){const doc=new DOMParser().parseFromString(x,'text/html');"
-                + "const p=doc.getElementById('problems');l.innerHTML=p?p.innerHTML:'';}});},600);});</script>";
+                + "const p=doc.getElementById('problems');l.innerHTML=p?p.innerHTML:'';}});},600);});"
+                + "document.getElementById('upload').addEventListener('change',e=>{const f=e.target.files[0];if(f){"
+                + "f.text().then(t=>{d.value=t;d.dispatchEvent(new Event('input'));});}});</script>";
     }
 
     private String history(VersionInfo head, String csrf) {

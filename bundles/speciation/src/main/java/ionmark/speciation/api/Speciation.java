@@ -14,4 +14,10 @@ public interface Speciation {
 
     /** Curves of charge and site protonation from pH {@code from} to {@code to} at {@code step}. */
     Curve curve(String structure, Conditions conditions, double from, double to, double step);
+
+    /**
+     * The same service bound to one table snapshot instead of the current one: what an entry pinned
+     * to an earlier table version showed can be reproduced.
+     */
+    Speciation pinned(ionmark.acidity.api.AcidityTable table);
 }

@@ -133,6 +133,22 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
         return Calibration.fit(base, points, referenceId, citation);
     }
 
+    private final java.util.Map<String, SpeciationService> pinned = java.util.Collections.synchronizedMap(
+            new java.util.LinkedHashMap<>(8, 0.75f, true) {
+                private static final long serialVersionUID = 1L;
+
+                @Override
+                protected boolean removeEldestEntry(java.util.Map.Entry<String, SpeciationService> e) {
+                    return size() > 8;
+                }
+            });
+
+    @Override
+    public Speciation pinned(AcidityTable table) {
+        return pinned.computeIfAbsent(table.version().hash() + "/" + table.version().number(),
+                k -> new SpeciationService(table, maxHeavyAtoms, timeoutMillis));
+    }
+
     @Override
     public Report compare(AcidityTable head, AcidityTable draft) {
         return Regression.compare(head, draft, maxHeavyAtoms);

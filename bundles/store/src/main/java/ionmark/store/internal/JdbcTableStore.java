@@ -59,6 +59,18 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
         migrate();
     }
 
+    String connectUrl() {
+        return url;
+    }
+
+    String user() {
+        return credentials.getProperty("user");
+    }
+
+    String password() {
+        return credentials.getProperty("password");
+    }
+
     Connection connect() throws SQLException {
         Connection c = driver.connect(url, credentials);
         if (c == null) {

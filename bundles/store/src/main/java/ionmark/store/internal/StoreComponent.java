@@ -5,9 +5,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.Executors;
-import java.util.concurrent.ScheduledExecutorService;
-import java.util.concurrent.TimeUnit;
 
 import org.osgi.framework.BundleContext;
 import org.osgi.service.component.annotations.Activate;
@@ -17,7 +14,6 @@ import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.metatype.annotations.Designate;
 
 import ionmark.acidity.api.TableService;
-import ionmark.acidity.api.ValidationReport;
 import ionmark.store.api.AuditEvent;
 import ionmark.store.api.StoreConflictException;
 import ionmark.store.api.StoreRejectedException;
@@ -34,8 +30,7 @@ import ionmark.store.api.VersionInfo;
 public final class StoreComponent implements TableStore {
     private final JdbcTableStore store;
     private final TableService tables;
-    private final ScheduledExecutorService poller;
-    private volatile int installed;
+    private final HeadFollower follower;
 
     @Activate
     public StoreComponent(@Reference TableService tables, StoreConfiguration config, BundleContext ctx) throws IOException {
@@ -55,13 +50,7 @@ public final class StoreComponent implements TableStore {
                 .stream().findFirst().orElse("").strip();
         this.store = new JdbcTableStore(tables, url, config.user(), password);
         seed();
-        follow();
-        this.poller = Executors.newSingleThreadScheduledExecutor(r -> {
-            Thread t = new Thread(r, "ionmark-store-head");
-            t.setDaemon(true);
-            return t;
-        });
-        poller.scheduleWithFixedDelay(this::follow, config.pollSeconds(), config.pollSeconds(), TimeUnit.SECONDS);
+        this.follower = new HeadFollower(store, tables, config.pollSeconds());
     }
 
     private void seed() {
@@ -77,29 +66,13 @@ public final class StoreComponent implements TableStore {
         }
     }
 
-    /** Installs the store's head into the table service when it is newer than what this instance installed. */
-    void follow() {
-        try {
-            Optional<VersionInfo> head = store.head();
-            if (head.isEmpty() || head.get().number() == installed) {
-                return;
-            }
-            String json = store.content(head.get().number()).orElseThrow();
-            ValidationReport r = tables.validate(json);
-            if (r.ok()) {
-                tables.install(r.table().orElseThrow());
-                installed = head.get().number();
-            } else {
-                System.err.println("ionmark: store head v" + head.get().number() + " does not validate: " + r.errors());
-            }
-        } catch (RuntimeException e) {
-            System.err.println("ionmark: cannot follow the table store: " + e.getMessage());
-        }
+    private void follow() {
+        follower.follow();
     }
 
     @Deactivate
     void deactivate() {
-        poller.shutdownNow();
+        follower.close();
         store.close();
     }
 
