@@ -19,6 +19,7 @@ import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.api.TableCalibration;
+import ionmark.speciation.api.TableRegression;
 import ionmark.store.api.TableStore;
 
 /**
@@ -32,6 +33,7 @@ public final class Cli {
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
+                   ionmark table check DRAFT      (validation and the regression report against the head)
                    ionmark table history | table diff A B | table audit [--limit N]
                    ionmark table publish FILE --base N --comment TEXT [--author NAME]
                    ionmark table rollback N --base M --comment TEXT [--author NAME]""";
@@ -40,6 +42,7 @@ public final class Cli {
     private final TableService tables;
     private final TableCalibration calibration;
     private final TableStore store;
+    private final TableRegression regression;
     private final PrintStream out;
     private final PrintStream err;
 
@@ -49,6 +52,7 @@ public final class Cli {
         this.tables = tables;
         this.calibration = calibration;
         this.store = store;
+        this.regression = speciation instanceof TableRegression tr ? tr : null;
         this.out = out;
         this.err = err;
     }
@@ -266,6 +270,9 @@ public final class Cli {
             case "calibrate" -> {
                 return calibrate(raw.subList(1, raw.size()));
             }
+            case "check" -> {
+                return checkDraft(raw.subList(1, raw.size()));
+            }
             case "history", "publish", "rollback", "diff", "audit" -> {
                 if (store == null) {
                     err.println("ionmark: no table store is available for '" + raw.get(0) + "'");
@@ -275,6 +282,40 @@ public final class Cli {
             }
             default -> throw new UsageException("unknown table subcommand '" + raw.get(0) + "'");
         }
+    }
+
+    /** Validation of a draft and the regression report over the reference set, head against draft. */
+    private int checkDraft(List<String> raw) {
+        if (raw.size() != 1) {
+            throw new UsageException("table check takes one draft FILE");
+        }
+        String text;
+        try {
+            text = Files.readString(Path.of(raw.get(0)), StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            err.println("ionmark: cannot read " + raw.get(0) + ": " + e.getMessage());
+            return 1;
+        }
+        ValidationReport r = tables.validate(text);
+        r.problems().forEach(out::println);
+        out.println(String.format(Locale.ROOT, "%d errors, %d warnings", r.errors().size(), r.warnings().size()));
+        if (store != null) {
+            store.audit(System.getProperty("user.name", "unknown"), "validate", 0, r.ok() ? "ok" : "rejected",
+                    raw.get(0) + " (table check)");
+        }
+        if (!r.ok() || regression == null) {
+            return r.ok() ? 0 : 1;
+        }
+        TableRegression.Report rep = regression.compare(tables.current(), r.table().orElseThrow());
+        out.println(String.format(Locale.ROOT, "reference set: %d compounds; MAE against handbook values: head %.3f, "
+                + "draft %.3f", rep.compounds(), rep.maeHead(), rep.maeDraft()));
+        out.println("touched: " + (rep.classesTouched().isEmpty() ? "nothing" : String.join(", ", rep.classesTouched())));
+        for (TableRegression.Shift sh : rep.shifts()) {
+            out.println(String.format(Locale.ROOT, "  %-28s reference %s  head %s  draft %s%s%s", sh.name(), sh.reference(),
+                    sh.head(), sh.draft(), sh.sitesGained().isEmpty() ? "" : "  gained " + sh.sitesGained(),
+                    sh.sitesLost().isEmpty() ? "" : "  lost " + sh.sitesLost()));
+        }
+        return 0;
     }
 
     /** "K/N" → {k, n}, or null when absent. */

@@ -770,7 +770,7 @@ public final class Engine {
     private static double logP(IAtomContainer mol) {
         try {
             IAtomContainer copy = mol.clone();
-            var v = new JPlogPDescriptor().calculate(copy).getValue();
+            var v = QuietLogP.quietly(() -> new JPlogPDescriptor().calculate(copy).getValue());
             return v instanceof DoubleResult d ? Math.round(d.doubleValue() * 100) / 100.0 : Double.NaN;
         } catch (CloneNotSupportedException | RuntimeException e) {
             return Double.NaN;
