@@ -42,8 +42,14 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
         this.tables = tables;
         // H2 closes a database when its last connection closes; reopening runs recovery again after an unclean
         // stop. Keep it open while this JVM runs, so recovery happens once, at the first open.
-        this.url = url.startsWith("jdbc:h2:") && !url.toUpperCase(java.util.Locale.ROOT).contains("DB_CLOSE_DELAY")
-                ? url + ";DB_CLOSE_DELAY=-1" : url;
+        // Also wait up to 30 s for the head-row lock (H2's default of 1 s fails busy publishers; PostgreSQL waits).
+        String u = url;
+        if (u.startsWith("jdbc:h2:")) {
+            String upper = u.toUpperCase(java.util.Locale.ROOT);
+            u += upper.contains("DB_CLOSE_DELAY") ? "" : ";DB_CLOSE_DELAY=-1";
+            u += upper.contains("LOCK_TIMEOUT") ? "" : ";LOCK_TIMEOUT=30000";
+        }
+        this.url = u;
         this.credentials = new Properties();
         credentials.setProperty("user", user == null ? "" : user);
         credentials.setProperty("password", password == null ? "" : password);

@@ -111,9 +111,10 @@ class StoreTest {
             AtomicInteger conflicts = new AtomicInteger();
             ConcurrentLinkedQueue<Integer> numbers = new ConcurrentLinkedQueue<>();
             ExecutorService pool = Executors.newFixedThreadPool(8);
+            List<java.util.concurrent.Future<Object>> tasks = new ArrayList<>();
             for (int t = 0; t < 8; t++) {
                 int thread = t;
-                pool.submit(() -> {
+                tasks.add(pool.submit(() -> {
                     for (int i = 0; i < 100; i++) {
                         int head = s.head().orElseThrow().number();
                         int base = ThreadLocalRandom.current().nextBoolean() ? head : Math.max(0, head - 1);
@@ -128,10 +129,13 @@ class StoreTest {
                         }
                     }
                     return null;
-                });
+                }));
             }
             pool.shutdown();
             assertTrue(pool.awaitTermination(5, TimeUnit.MINUTES));
+            for (var task : tasks) {
+                task.get(); // a worker that died on anything but a conflict fails the test with its cause
+            }
             assertEquals(800, accepted.get() + conflicts.get());
             int head = s.head().orElseThrow().number();
             assertEquals(1 + accepted.get(), head, "every accepted publish is a version");
