@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
-import java.net.ServerSocket;
 import java.net.URI;
 import java.net.URLEncoder;
 import java.net.http.HttpClient;
@@ -29,7 +28,7 @@ import org.junit.jupiter.api.io.TempDir;
  * publishes it with a comment; a request without the session's CSRF token is refused.
  */
 class AdminWorkflowHttpTest {
-    static Process app;
+    static RunningApp app;
     static String base;
     static final HttpClient HTTP = HttpClient.newBuilder().followRedirects(HttpClient.Redirect.NEVER).build();
 
@@ -38,16 +37,8 @@ class AdminWorkflowHttpTest {
 
     @BeforeAll
     static void start() throws Exception {
-        Path jar = Path.of(System.getProperty("ionmark.app.jar", "../app/target/ionmark.jar"));
-        int port;
-        try (ServerSocket s = new ServerSocket(0)) {
-            port = s.getLocalPort();
-        }
-        base = "http://127.0.0.1:" + port;
-        app = new ProcessBuilder("java", "-Dorg.osgi.service.http.port=" + port, "-Dgosh.args=--nointeractive",
-                "-Dionmark.workspace=" + workspace, "-jar", jar.toString()).redirectErrorStream(true)
-                .redirectOutput(workspace.resolveSibling(workspace.getFileName() + "-admin-app.log").toFile()).start();
-        NotebookInBrowserTest.waitForCards(base + "/entry/05-assay-ph74");
+        app = RunningApp.start(workspace, "admin-app");
+        base = app.base;
         // the admin page registers once the table store has opened (after the annotations)
         long deadline = System.currentTimeMillis() + 60_000;
         while (get("/admin/table", null).statusCode() == 404 && System.currentTimeMillis() < deadline) {
@@ -58,7 +49,7 @@ class AdminWorkflowHttpTest {
     @AfterAll
     static void stop() {
         if (app != null) {
-            app.destroy();
+            app.close();
         }
     }
 

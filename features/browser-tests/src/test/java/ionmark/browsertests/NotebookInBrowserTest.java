@@ -4,9 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.IOException;
-import java.net.HttpURLConnection;
-import java.net.ServerSocket;
-import java.net.URI;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
@@ -34,7 +31,7 @@ import org.openqa.selenium.support.ui.WebDriverWait;
 class NotebookInBrowserTest {
     static final Path CHROMIUM = Path.of("/usr/bin/chromium");
     static final Path DRIVER = Path.of("/usr/bin/chromedriver");
-    static Process app;
+    static RunningApp app;
     static WebDriver browser;
     static String base;
     static Path shots;
@@ -50,17 +47,8 @@ class NotebookInBrowserTest {
             assertTrue(present, "CI must install chromium and chromium-driver (see .ci/run)");
         }
         assumeTrue(present, "chromium and chromedriver are not installed: browser test skipped");
-        Path jar = Path.of(System.getProperty("ionmark.app.jar", "../app/target/ionmark.jar"));
-        assertTrue(Files.isRegularFile(jar), "build the application first: " + jar);
-        int port;
-        try (ServerSocket s = new ServerSocket(0)) {
-            port = s.getLocalPort();
-        }
-        base = "http://127.0.0.1:" + port;
-        app = new ProcessBuilder("java", "-Dorg.osgi.service.http.port=" + port, "-Dgosh.args=--nointeractive",
-                "-Dionmark.workspace=" + workspace, "-jar", jar.toString()).redirectErrorStream(true)
-                .redirectOutput(workspace.resolveSibling(workspace.getFileName() + "-app.log").toFile()).start();
-        waitForCards(base + "/entry/05-assay-ph74");
+        app = RunningApp.start(workspace, "app");
+        base = app.base;
         ChromeOptions o = new ChromeOptions();
         o.setBinary(CHROMIUM.toFile());
         o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run",
@@ -71,30 +59,13 @@ class NotebookInBrowserTest {
         Files.createDirectories(shots);
     }
 
-    /** Waits until the server answers and the speciation service has annotated the demo entry. */
-    static void waitForCards(String url) throws Exception {
-        long deadline = System.currentTimeMillis() + 60_000;
-        while (System.currentTimeMillis() < deadline) {
-            try {
-                HttpURLConnection c = (HttpURLConnection) URI.create(url).toURL().openConnection();
-                if (c.getResponseCode() == 200 && new String(c.getInputStream().readAllBytes()).contains("im-card")) {
-                    return;
-                }
-            } catch (IOException e) {
-                // not up yet
-            }
-            Thread.sleep(250);
-        }
-        throw new AssertionError("the notebook did not come up with annotations within 60 s");
-    }
-
     @AfterAll
     static void stop() {
         if (browser != null) {
             browser.quit();
         }
         if (app != null) {
-            app.destroy();
+            app.close();
         }
     }
 
