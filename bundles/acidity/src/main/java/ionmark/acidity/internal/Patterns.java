@@ -35,6 +35,10 @@ final class Patterns {
             return new Compiled(null, -1, 0, "SMARTS does not compile: " + result.getMessage() + " at position "
                     + result.getPosition() + " in '" + smarts + "'");
         }
+        if (q.getAtomCount() > 0 && !org.openscience.cdk.graph.ConnectivityChecker.isConnected(q)) {
+            return new Compiled(null, -1, q.getAtomCount(), "SMARTS is not one connected pattern (no '.' parts): '"
+                    + smarts + "'");
+        }
         int site = -1;
         for (int i = 0; i < q.getAtomCount(); i++) {
             Integer map = q.getAtom(i).getProperty(CDKConstants.ATOM_ATOM_MAPPING);

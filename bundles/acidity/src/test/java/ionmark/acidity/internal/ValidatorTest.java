@@ -70,6 +70,13 @@ class ValidatorTest {
     }
 
     @Test
+    void smartsInSeveralParts() {
+        // site perception matches each class rooted at its site atom, which needs one connected pattern
+        expectError(broken(t -> t.replace("[CX4][NX3;H2:1]", "[CX4].[NX3;H2:1]")), "$.groups[1].smarts",
+                "not one connected pattern");
+    }
+
+    @Test
     void noMarkedAtom() {
         expectError(broken(t -> t.replace("[CX4][NX3;H2:1]", "[CX4][NX3;H2]")), "$.groups[1].smarts",
                 "no ionizable atom marked");

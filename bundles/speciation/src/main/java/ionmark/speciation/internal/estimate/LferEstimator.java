@@ -18,6 +18,7 @@ import ionmark.acidity.api.Relation;
 import ionmark.acidity.api.Substituent;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.internal.sites.CompiledTable;
+import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.sites.PerceivedSite;
 
 /**
@@ -46,7 +47,13 @@ public final class LferEstimator {
     }
 
     public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, List<PerceivedSite> sites) {
-        SubstituentMap subs = new SubstituentMap(table, mol);
+        return estimate(table, mol, new RootedPattern.Target(mol), sites);
+    }
+
+    /** {@code target} is {@code mol} as arrays, shared with site perception. */
+    public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, RootedPattern.Target target,
+            List<PerceivedSite> sites) {
+        SubstituentMap subs = new SubstituentMap(table, target);
         int[][] rings = Cycles.sssr(mol).paths();
         List<EstimatedSite> out = new ArrayList<>();
         for (PerceivedSite s : sites) {

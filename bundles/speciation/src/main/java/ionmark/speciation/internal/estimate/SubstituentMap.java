@@ -2,16 +2,17 @@ package ionmark.speciation.internal.estimate;
 
 import java.util.ArrayList;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
-
-import org.openscience.cdk.interfaces.IAtomContainer;
+import java.util.Set;
 
 import ionmark.speciation.internal.sites.CompiledTable;
+import ionmark.speciation.internal.sites.RootedPattern;
 
 /**
- * Every substituent match in one molecule, indexed by attachment atom, largest pattern first.
- * Built once per molecule.
+ * Substituent matches in one molecule by attachment atom, largest pattern first. One map per
+ * molecule; each attachment atom is matched when first asked about. Not thread-safe.
  */
 final class SubstituentMap {
     record Hit(CompiledTable.Sub sub, int[] atoms) {
@@ -25,19 +26,44 @@ final class SubstituentMap {
         }
     }
 
+    private final CompiledTable table;
+    private final RootedPattern.Target target;
+    /** Filled per attachment atom on first use: most estimates ask about a handful of atoms. */
     private final Map<Integer, List<Hit>> byAttachment = new HashMap<>();
 
-    SubstituentMap(CompiledTable table, IAtomContainer mol) {
-        for (CompiledTable.Sub s : table.substituents()) {
-            for (int[] m : s.pattern().matchAll(mol).uniqueAtoms()) {
-                byAttachment.computeIfAbsent(m[0], k -> new ArrayList<>()).add(new Hit(s, m));
-            }
+    SubstituentMap(CompiledTable table, RootedPattern.Target target) {
+        this.table = table;
+        this.target = target;
+    }
+
+    private List<Hit> hits(int atom) {
+        List<Hit> hits = byAttachment.get(atom);
+        if (hits != null) {
+            return hits;
         }
+        hits = new ArrayList<>();
+        Integer z = target.atom(atom).getAtomicNumber();
+        for (CompiledTable.Sub s : table.substituentsRootedAt(z == null ? 0 : z)) {
+            Set<Set<Integer>> seen = new HashSet<>();
+            List<Hit> found = hits;
+            s.pattern().forEach(target, atom, m -> {
+                Set<Integer> atoms = new HashSet<>();
+                for (int a : m) {
+                    atoms.add(a);
+                }
+                if (seen.add(atoms)) {
+                    found.add(new Hit(s, m.clone()));
+                }
+                return true;
+            });
+        }
+        byAttachment.put(atom, hits);
+        return hits;
     }
 
     /** The most specific substituent attached by {@code atom} that stays clear of {@code forbidden}. */
     Hit at(int atom, java.util.Set<Integer> forbidden) {
-        for (Hit h : byAttachment.getOrDefault(atom, List.of())) {
+        for (Hit h : hits(atom)) {
             if (!h.touches(forbidden)) {
                 return h;
             }

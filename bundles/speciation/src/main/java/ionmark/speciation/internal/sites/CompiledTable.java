@@ -2,13 +2,17 @@ package ionmark.speciation.internal.sites;
 
 import java.util.ArrayList;
 import java.util.Comparator;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+import java.util.function.Function;
 
 import org.openscience.cdk.CDKConstants;
 import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
 import org.openscience.cdk.silent.SilentChemObjectBuilder;
 import org.openscience.cdk.smarts.Smarts;
-import org.openscience.cdk.smarts.SmartsPattern;
 
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
@@ -20,16 +24,20 @@ import ionmark.acidity.api.Substituent;
  */
 public final class CompiledTable {
     /** A group class, its pattern, the query index of the site atom and of the centres. */
-    public record Group(GroupClass group, SmartsPattern pattern, int site, int[] centres, int size, int order) {
+    public record Group(GroupClass group, RootedPattern pattern, int site, int[] centres, int size, int order) {
     }
 
-    /** A substituent and its pattern (query atom 0 is the attachment atom). */
-    public record Sub(Substituent substituent, SmartsPattern pattern, int size, int order) {
+    /** A substituent and its pattern, rooted at query atom 0, the attachment atom. */
+    public record Sub(Substituent substituent, RootedPattern pattern, int size, int order) {
     }
 
     private final AcidityTable table;
     private final List<Group> groups;
     private final List<Sub> substituents;
+    private final Map<Integer, List<Group>> groupsByElement;
+    private final List<Group> groupsAnyElement;
+    private final Map<Integer, List<Sub>> subsByElement;
+    private final List<Sub> subsAnyElement;
 
     public CompiledTable(AcidityTable table) {
         this.table = table;
@@ -53,7 +61,7 @@ public final class CompiledTable {
             if (site < 0) {
                 continue;
             }
-            g.add(new Group(gc, SmartsPattern.create(gc.smarts(), SilentChemObjectBuilder.getInstance()), site,
+            g.add(new Group(gc, new RootedPattern(q, site), site,
                     centres.stream().mapToInt(Integer::intValue).toArray(), gc.specificity(),
                     i));
         }
@@ -67,11 +75,61 @@ public final class CompiledTable {
             if (!Smarts.parse(q, sub.smarts())) {
                 continue;
             }
-            s.add(new Sub(sub, SmartsPattern.create(sub.smarts(), SilentChemObjectBuilder.getInstance()),
-                    q.getAtomCount(), i));
+            s.add(new Sub(sub, new RootedPattern(q, 0), q.getAtomCount(), i));
         }
         s.sort(Comparator.comparingInt((Sub x) -> -x.size()).thenComparingInt(Sub::order));
         this.substituents = List.copyOf(s);
+        this.groupsByElement = byRootElement(this.groups, Group::pattern);
+        this.groupsAnyElement = anyRootElement(this.groups, Group::pattern);
+        this.subsByElement = byRootElement(this.substituents, Sub::pattern);
+        this.subsAnyElement = anyRootElement(this.substituents, Sub::pattern);
+    }
+
+    /**
+     * For each element some root names: the patterns whose root can be that element, in the list's
+     * order (most specific first). Patterns whose root does not confine the element are in every
+     * list.
+     */
+    private static <T> Map<Integer, List<T>> byRootElement(List<T> all, Function<T, RootedPattern> p) {
+        Set<Integer> named = new TreeSet<>();
+        for (T x : all) {
+            Set<Integer> e = p.apply(x).rootElements();
+            if (e != null) {
+                named.addAll(e);
+            }
+        }
+        Map<Integer, List<T>> out = new HashMap<>();
+        for (int z : named) {
+            List<T> l = new ArrayList<>();
+            for (T x : all) {
+                Set<Integer> e = p.apply(x).rootElements();
+                if (e == null || e.contains(z)) {
+                    l.add(x);
+                }
+            }
+            out.put(z, List.copyOf(l));
+        }
+        return Map.copyOf(out);
+    }
+
+    private static <T> List<T> anyRootElement(List<T> all, Function<T, RootedPattern> p) {
+        List<T> l = new ArrayList<>();
+        for (T x : all) {
+            if (p.apply(x).rootElements() == null) {
+                l.add(x);
+            }
+        }
+        return List.copyOf(l);
+    }
+
+    /** The classes whose site can be an atom of this element, most specific first. */
+    public List<Group> groupsRootedAt(int atomicNumber) {
+        return groupsByElement.getOrDefault(atomicNumber, groupsAnyElement);
+    }
+
+    /** The substituents whose attachment atom can be of this element, most specific first. */
+    public List<Sub> substituentsRootedAt(int atomicNumber) {
+        return subsByElement.getOrDefault(atomicNumber, subsAnyElement);
     }
 
     public AcidityTable table() {

@@ -1,43 +1,50 @@
 package ionmark.speciation.internal.sites;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
 
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 
 /**
- * One site per ionizable atom: every class pattern is matched, and for each atom the most specific
- * class (the one with the most pattern atoms; ties go to table order) wins.
+ * One site per ionizable atom: for each atom the most specific class whose pattern matches with its
+ * site on that atom (the one with the most pattern atoms; ties go to table order) wins.
  */
 public final class SitePerceiver {
     private SitePerceiver() {
     }
 
-    /** The molecule must have been prepared (aromaticity, rings) by the structure reader. */
+    /**
+     * The molecule must have been prepared (aromaticity, rings) by the structure reader. Each atom
+     * tries the classes whose site can be its element, most specific first; the first that matches
+     * with its site on the atom wins.
+     */
     public static List<PerceivedSite> perceive(CompiledTable table, IAtomContainer mol) {
-        Map<Integer, PerceivedSite> byAtom = new LinkedHashMap<>();
-        for (CompiledTable.Group g : table.groups()) {
-            for (int[] m : g.pattern().matchAll(mol)) {
-                int atom = m[g.site()];
-                if (byAtom.containsKey(atom)) {
-                    continue; // a more specific class already holds this atom
+        return perceive(table, new RootedPattern.Target(mol));
+    }
+
+    public static List<PerceivedSite> perceive(CompiledTable table, RootedPattern.Target target) {
+        List<PerceivedSite> out = new ArrayList<>();
+        for (int atom = 0; atom < target.atomCount(); atom++) {
+            Integer z = target.atom(atom).getAtomicNumber();
+            for (CompiledTable.Group g : table.groupsRootedAt(z == null ? 0 : z)) {
+                int[] m = g.pattern().first(target, atom);
+                if (m == null) {
+                    continue;
                 }
                 Set<Integer> core = new HashSet<>();
                 for (int a : m) {
                     core.add(a);
                 }
                 int[] centres = g.centres().length == 0 ? new int[] {atom}
-                        : java.util.Arrays.stream(g.centres()).map(k -> m[k]).distinct().toArray();
-                byAtom.put(atom, new PerceivedSite(atom, g.group(), Set.copyOf(core), centres));
+                        : Arrays.stream(g.centres()).map(k -> m[k]).distinct().toArray();
+                out.add(new PerceivedSite(atom, g.group(), Set.copyOf(core), centres));
+                break;
             }
         }
-        List<PerceivedSite> out = new ArrayList<>(byAtom.values());
-        out.sort(java.util.Comparator.comparingInt(PerceivedSite::atom));
         return out;
     }
 

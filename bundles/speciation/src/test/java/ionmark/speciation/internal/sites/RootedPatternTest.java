@@ -1,0 +1,146 @@
+package ionmark.speciation.internal.sites;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+
+import org.junit.jupiter.api.Test;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
+import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smarts.Smarts;
+import org.openscience.cdk.smarts.SmartsPattern;
+
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.Substituent;
+import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.speciation.internal.structure.StructureReader;
+
+/**
+ * Rooted matching must find exactly what CDK's whole-molecule SMARTS matcher finds, filtered to the
+ * root: CDK's {@link SmartsPattern} is the reference here, over every class and substituent pattern
+ * of the shipped table and every structure of the project's reference set.
+ */
+class RootedPatternTest {
+    static final CompiledTable TABLE = new CompiledTable(TableSnapshotService.shipped());
+
+    static List<IAtomContainer> referenceMolecules() throws Exception {
+        List<IAtomContainer> out = new ArrayList<>();
+        StructureReader reader = new StructureReader(300);
+        try (InputStream in = RootedPatternTest.class.getResourceAsStream("/ionmark/speciation/reference-set.tsv")) {
+            for (String line : new String(in.readAllBytes(), StandardCharsets.UTF_8).split("\n")) {
+                if (line.isBlank() || line.startsWith("#")) {
+                    continue;
+                }
+                IAtomContainer mol = reader.read(line.split("\t")[1]).molecule();
+                mol.setTitle(line.split("\t")[0]);
+                out.add(mol);
+            }
+        }
+        assertTrue(out.size() >= 150, "reference set read: " + out.size());
+        return out;
+    }
+
+    static QueryAtomContainer query(String smarts) {
+        QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
+        assertTrue(Smarts.parse(q, smarts), smarts);
+        return q;
+    }
+
+    /** Atom sets of all mappings, keyed by the molecule atom that query atom {@code root} sits on. */
+    static Map<Integer, Set<Set<Integer>>> byRoot(Iterable<int[]> mappings, int root) {
+        Map<Integer, Set<Set<Integer>>> out = new HashMap<>();
+        for (int[] m : mappings) {
+            Set<Integer> atoms = new TreeSet<>();
+            for (int a : m) {
+                atoms.add(a);
+            }
+            out.computeIfAbsent(m[root], k -> new HashSet<>()).add(atoms);
+        }
+        return out;
+    }
+
+    static Map<Integer, Set<Set<Integer>>> rooted(RootedPattern p, IAtomContainer mol, int root) {
+        RootedPattern.Target t = new RootedPattern.Target(mol);
+        List<int[]> all = new ArrayList<>();
+        for (int a = 0; a < mol.getAtomCount(); a++) {
+            p.forEach(t, a, m -> all.add(m.clone()));
+        }
+        return byRoot(all, root);
+    }
+
+    @Test
+    void everyClassAndSubstituentMatchesWhereCdkMatchesOnTheReferenceSet() throws Exception {
+        List<IAtomContainer> mols = referenceMolecules();
+        int compared = 0;
+        int hits = 0;
+        for (CompiledTable.Group g : TABLE.groups()) {
+            GroupClass gc = g.group();
+            SmartsPattern cdk = SmartsPattern.create(gc.smarts(), SilentChemObjectBuilder.getInstance()).setPrepare(false);
+            for (IAtomContainer mol : mols) {
+                Map<Integer, Set<Set<Integer>>> want = byRoot(cdk.matchAll(mol), g.site());
+                Map<Integer, Set<Set<Integer>>> got = rooted(g.pattern(), mol, g.site());
+                assertEquals(want, got, gc.id() + " on " + mol.getTitle());
+                compared++;
+                hits += want.size();
+            }
+        }
+        for (CompiledTable.Sub s : TABLE.substituents()) {
+            Substituent sub = s.substituent();
+            SmartsPattern cdk = SmartsPattern.create(sub.smarts(), SilentChemObjectBuilder.getInstance()).setPrepare(false);
+            for (IAtomContainer mol : mols) {
+                assertEquals(byRoot(cdk.matchAll(mol), 0), rooted(s.pattern(), mol, 0), sub.id());
+                compared++;
+            }
+        }
+        assertTrue(compared > 10_000, "pairs compared: " + compared);
+        assertTrue(hits > 245, "class sites found: " + hits);
+    }
+
+    @Test
+    void aSymmetricSubstituentAttachesByEitherEnd() throws Exception {
+        // ethynyl, C#C: in HC≡C–C the attachment is the inner carbon; a whole-molecule match that keeps
+        // one mapping per atom set may keep the other orientation and lose the attachment
+        IAtomContainer mol = new StructureReader(300).read("C#CC(C)(C)N(C)C").molecule();
+        RootedPattern ethynyl = new RootedPattern(query("C#C"), 0);
+        RootedPattern.Target t = new RootedPattern.Target(mol);
+        assertNotNull(ethynyl.first(t, 1));
+        assertNotNull(ethynyl.first(t, 0));
+        assertNull(ethynyl.first(t, 2));
+    }
+
+    @Test
+    void ringClosuresInTheQueryAreChecked() throws Exception {
+        RootedPattern sixRing = new RootedPattern(query("[NX3;R]1CCCCC1"), 0);
+        assertNotNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("C1CCNCC1").molecule()), 3));
+        // a five-membered ring and an open chain have no six-membered closure
+        assertNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("C1CCNC1").molecule()), 3));
+        assertNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("CCCNCCC").molecule()), 3));
+    }
+
+    @Test
+    void rootElementsComeFromTheSiteExpression() {
+        assertEquals(Set.of(7), new RootedPattern(query("[NX3;H2]C"), 0).rootElements());
+        assertEquals(Set.of(7, 8), new RootedPattern(query("[N,O;H1]C"), 0).rootElements());
+        assertNull(new RootedPattern(query("[!#6]C"), 0).rootElements());
+        assertNull(new RootedPattern(query("*C"), 0).rootElements());
+    }
+
+    @Test
+    void aDisconnectedQueryIsRefused() {
+        assertThrows(IllegalArgumentException.class, () -> new RootedPattern(query("C.O"), 0));
+    }
+
+}
