@@ -26,8 +26,8 @@ import ionmark.speciation.api.Conditions;
 import ionmark.speciation.internal.Engine;
 
 /**
- * End to end (read, perceive, estimate, solve at one pH, and everything else an annotation shows)
- * against a floor that only parses SMILES and perceives rings and aromaticity with CDK. Both walk
+ * End to end, in full (everything an annotation shows) and brief (read, perceive, estimate, solve at
+ * one pH), against a floor that only parses SMILES and perceives rings and aromaticity with CDK. Both walk
  * the same 20 drug-like molecules per operation.
  */
 @State(Scope.Benchmark)
@@ -60,10 +60,22 @@ public class EndToEndBenchmark {
         }
     }
 
+    /** Everything a notebook card shows, including logP/logD, species structures and pH windows. */
     @Benchmark
     public void endToEndAtPh74(Blackhole bh) {
         for (String smi : Molecules.DRUG_LIKE) {
             bh.consume(engine.analyse(smi, ph74));
+        }
+    }
+
+    /**
+     * Read, perceive, estimate (with derivations and overrides) and solve at one pH: the brief form
+     * that {@code batch --brief} writes.
+     */
+    @Benchmark
+    public void endToEndBriefAtPh74(Blackhole bh) {
+        for (String smi : Molecules.DRUG_LIKE) {
+            bh.consume(engine.analyse(smi, ph74, true));
         }
     }
 }

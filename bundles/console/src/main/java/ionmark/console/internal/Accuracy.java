@@ -50,7 +50,7 @@ final class Accuracy {
 
     static List<Scored> run(Speciation s, List<Observation> data, PrintStream jsonl, Progress bar) {
         List<Scored> out = new ArrayList<>();
-        List<Analysis> results = data.parallelStream().map(o -> s.analyse(o.structure(), Conditions.noPh())).toList();
+        List<Analysis> results = data.parallelStream().map(o -> s.screen(o.structure(), Conditions.noPh())).toList();
         for (int i = 0; i < data.size(); i++) {
             Observation o = data.get(i);
             Analysis a = results.get(i);

@@ -18,6 +18,14 @@ final class AnalysisJson {
     }
 
     static ObjectNode of(String id, Analysis a) {
+        return of(id, a, false);
+    }
+
+    /**
+     * {@code brief}: the record of {@code Speciation.screen}, which has no species, logP, logD,
+     * windows or isoelectric point; those keys are left out and {@code "brief": true} says why.
+     */
+    static ObjectNode of(String id, Analysis a, boolean brief) {
         ObjectNode o = JSON.createObjectNode();
         if (id != null) {
             o.put("id", id);
@@ -73,15 +81,19 @@ final class AnalysisJson {
         ObjectNode cs = o.putObject("chargeStates");
         a.chargeStates().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
                 .forEach(e -> cs.put(String.valueOf(e.getKey()), round4(e.getValue())));
-        ArrayNode sp = o.putArray("species");
-        for (Species s : a.species()) {
-            sp.addObject().put("smiles", s.smiles()).put("charge", s.charge()).put("fraction", round4(s.fraction()));
+        if (brief) {
+            o.put("brief", true);
+        } else {
+            ArrayNode sp = o.putArray("species");
+            for (Species s : a.species()) {
+                sp.addObject().put("smiles", s.smiles()).put("charge", s.charge()).put("fraction", round4(s.fraction()));
+            }
+            nullable(o, "isoelectricPoint", a.isoelectricPoint());
+            num(o, "logP", a.logP());
+            nullable(o, "logD", a.logD());
+            windows(o.putArray("neutralWindows"), a.neutralWindows());
+            windows(o.putArray("chargedWindows"), a.chargedWindows());
         }
-        nullable(o, "isoelectricPoint", a.isoelectricPoint());
-        num(o, "logP", a.logP());
-        nullable(o, "logD", a.logD());
-        windows(o.putArray("neutralWindows"), a.neutralWindows());
-        windows(o.putArray("chargedWindows"), a.chargedWindows());
         a.corrections().forEach(o.putArray("corrections")::add);
         ArrayNode w = o.putArray("warnings");
         a.warnings().forEach(w::add);

@@ -29,7 +29,7 @@ import ionmark.store.api.TableStore;
 public final class Cli {
     static final String USAGE = """
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
-                   ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M]
+                   ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M] [--brief]
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
@@ -92,11 +92,20 @@ public final class Cli {
     /** Flags and positionals. */
     record Args(List<String> positional, java.util.Map<String, String> flags) {
         static Args parse(List<String> raw, java.util.Set<String> known) {
+            return parse(raw, known, java.util.Set.of());
+        }
+
+        /** {@code switches} take no value; a given switch maps to "true". */
+        static Args parse(List<String> raw, java.util.Set<String> known, java.util.Set<String> switches) {
             List<String> pos = new ArrayList<>();
             java.util.Map<String, String> flags = new java.util.HashMap<>();
             for (int i = 0; i < raw.size(); i++) {
                 String a = raw.get(i);
                 if (a.startsWith("--")) {
+                    if (switches.contains(a)) {
+                        flags.put(a, "true");
+                        continue;
+                    }
                     if (!known.contains(a)) {
                         throw new UsageException("unknown option '" + a + "'");
                     }
@@ -166,7 +175,7 @@ public final class Cli {
     }
 
     private int batch(List<String> raw) {
-        Args a = Args.parse(raw, java.util.Set.of("--in", "--out", "--ph", "--temp", "--ionic"));
+        Args a = Args.parse(raw, java.util.Set.of("--in", "--out", "--ph", "--temp", "--ionic"), java.util.Set.of("--brief"));
         if (!a.flags().containsKey("--in")) {
             throw new UsageException("batch needs --in FILE");
         }
@@ -184,7 +193,7 @@ public final class Cli {
                 target = new PrintStream(Files.newOutputStream(Path.of(a.flags().get("--out"))), false,
                         StandardCharsets.UTF_8);
             }
-            runBatch(items, c, target);
+            runBatch(items, c, target, a.flags().containsKey("--brief"));
         } catch (IOException e) {
             err.println("ionmark: cannot write " + a.flags().get("--out") + ": " + e.getMessage());
             return 1;
@@ -196,7 +205,7 @@ public final class Cli {
         return 0;
     }
 
-    private void runBatch(List<Records.Item> items, Conditions c, PrintStream target) {
+    private void runBatch(List<Records.Item> items, Conditions c, PrintStream target, boolean brief) {
         int cores = Math.max(1, Runtime.getRuntime().availableProcessors());
         ExecutorService pool = Executors.newFixedThreadPool(cores);
         try {
@@ -204,7 +213,8 @@ public final class Cli {
             for (Records.Item it : items) {
                 futures.add(pool.submit(() -> it.error() != null
                         ? AnalysisJson.of(it.id(), Analysis.failed(it.structure(), c, "", it.error())).toString()
-                        : AnalysisJson.of(it.id(), speciation.analyse(it.structure(), c)).toString()));
+                        : brief ? AnalysisJson.of(it.id(), speciation.screen(it.structure(), c), true).toString()
+                                : AnalysisJson.of(it.id(), speciation.analyse(it.structure(), c)).toString()));
             }
             Progress bar = new Progress(err, items.size());
             for (int i = 0; i < futures.size(); i++) {

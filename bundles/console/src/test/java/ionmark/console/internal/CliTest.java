@@ -89,6 +89,24 @@ class CliTest {
     }
 
     @Test
+    void briefBatchKeepsSitesAndChargeAndLeavesOutSpecies() throws IOException {
+        Path in = dir.resolve("in.smi");
+        Files.writeString(in, "NCC(=O)O\tglycine\n");
+        Path full = dir.resolve("full.jsonl");
+        Path brief = dir.resolve("brief.jsonl");
+        assertEquals(0, run("batch", "--in", in.toString(), "--out", full.toString(), "--ph", "6.0"));
+        assertEquals(0, run("batch", "--in", in.toString(), "--out", brief.toString(), "--ph", "6.0", "--brief"));
+        ObjectMapper m = new ObjectMapper();
+        JsonNode f = m.readTree(Files.readAllLines(full).get(0));
+        JsonNode b = m.readTree(Files.readAllLines(brief).get(0));
+        assertTrue(b.get("brief").asBoolean());
+        assertTrue(!b.has("species") && !b.has("logD") && f.has("species"), b.toString());
+        for (String k : List.of("sites", "macroPka", "netCharge", "fractionNeutral", "chargeStates", "tableVersion")) {
+            assertEquals(f.get(k), b.get(k), k);
+        }
+    }
+
+    @Test
     void usageErrorsExitWithTwo() {
         assertEquals(2, run("frobnicate"));
         assertEquals(2, run("check", "CCO", "--ph", "99"));

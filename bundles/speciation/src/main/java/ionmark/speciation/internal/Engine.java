@@ -36,6 +36,7 @@ import ionmark.speciation.internal.microstates.Populations;
 import ionmark.speciation.internal.microstates.SiteModel;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.PerceivedSite;
+import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
@@ -83,10 +84,15 @@ public final class Engine {
     }
 
     public Analysis analyse(String input, Conditions c) {
+        return analyse(input, c, false);
+    }
+
+    /** {@code brief}: without logP/logD, species structures, windows and isoelectric point. */
+    public Analysis analyse(String input, Conditions c, boolean brief) {
         String version = table.table().version().label();
         try {
             Problem p = prepare(input, c);
-            return analyse(input, c, p, version);
+            return analyse(input, c, p, version, brief);
         } catch (StructureException e) {
             return Analysis.failed(input, c, version, e.getMessage());
         } catch (RuntimeException e) {
@@ -99,15 +105,19 @@ public final class Engine {
     Problem prepare(String input, Conditions c) throws StructureException {
         StructureReader.Prepared prep = reader.read(input);
         IAtomContainer mol = prep.molecule();
-        List<PerceivedSite> perceived = SitePerceiver.perceive(table, mol);
-        List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, perceived));
+        RootedPattern.Target target = new RootedPattern.Target(mol);
+        List<PerceivedSite> perceived = SitePerceiver.perceive(table, target);
+        List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(mol);
         if (measured.isPresent()) {
             est = fitToMeasured(mol, est, measured.get());
         } else {
-            BitSet fp = Overrides.fingerprint(mol);
-            est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
+            // the fingerprint only when some site's class has a measured analog to compare with
+            if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
+                BitSet fp = Overrides.fingerprint(mol);
+                est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
+            }
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
         SiteModel model = model(mol, est, c);
@@ -429,7 +439,7 @@ public final class Engine {
         return out;
     }
 
-    private Analysis analyse(String input, Conditions c, Problem p, String version) {
+    private Analysis analyse(String input, Conditions c, Problem p, String version, boolean brief) {
         IAtomContainer mol = p.prepared().molecule();
         List<EstimatedSite> titr = p.sites().stream().filter(s -> !s.site().group().permanent()).toList();
         List<String> corrections = new ArrayList<>();
@@ -451,7 +461,7 @@ public final class Engine {
         if (p.measured().isPresent() && measuredFit(p)) {
             macro = p.measuredHere().stream().map(v -> Math.round(v * 100) / 100.0).toList();
         }
-        double logP = logP(mol);
+        double logP = brief ? Double.NaN : logP(mol);
         Double netCharge = null;
         Double neutral = null;
         Double logD = null;
@@ -479,8 +489,8 @@ public final class Engine {
             netCharge = mean;
             neutral = chargeStates.getOrDefault(0, 0.0);
             logD = Double.isNaN(logP) ? null : logP + Math.log10(Math.max(neutral, 1e-12));
-            species = species(mol, titr, pop, p.permanentCharge());
-            if (p.measured().isPresent() && measuredFit(p)) {
+            species = brief ? List.of() : species(mol, titr, pop, p.permanentCharge());
+            if (!brief && p.measured().isPresent() && measuredFit(p)) {
                 species = consistentWith(species, shift(pop.chargeStates(), p.permanentCharge()), chargeStates);
             }
             if (sampled) {
@@ -508,10 +518,12 @@ public final class Engine {
         }
         List<Window> neutralWindows = new ArrayList<>();
         List<Window> chargedWindows = new ArrayList<>();
-        windows(p, neutralWindows, chargedWindows);
+        if (!brief) {
+            windows(p, neutralWindows, chargedWindows);
+        }
         warnings.add(CAUTION);
         return new Analysis(input, p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
-                chargeStates, species, isoelectricPoint(p), logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
+                chargeStates, species, brief ? null : isoelectricPoint(p), logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
                 null);
     }
 

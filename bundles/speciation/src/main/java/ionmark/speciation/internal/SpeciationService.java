@@ -99,9 +99,18 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
 
     @Override
     public Analysis analyse(String structure, Conditions conditions) {
+        return run(structure, conditions, false);
+    }
+
+    @Override
+    public Analysis screen(String structure, Conditions conditions) {
+        return run(structure, conditions, true);
+    }
+
+    private Analysis run(String structure, Conditions conditions, boolean brief) {
         Conditions c = conditions == null ? Conditions.noPh() : conditions;
         Engine e = engine();
-        Future<Analysis> f = pool.submit(() -> e.analyse(structure, c));
+        Future<Analysis> f = pool.submit(() -> e.analyse(structure, c, brief));
         try {
             return f.get(timeoutMillis, TimeUnit.MILLISECONDS);
         } catch (TimeoutException ex) {

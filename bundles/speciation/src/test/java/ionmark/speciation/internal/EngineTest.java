@@ -154,4 +154,24 @@ class EngineTest {
         assertTrue(terms.size() >= 2, terms.toString());
         assertTrue(terms.get(0).label().contains("class"));
     }
+
+    @Test
+    void theBriefFormAgreesWithTheFullOneOnWhatItReports() {
+        // a base, an acid and an ampholyte with a measured entry, at a pH where each is partly charged
+        for (String smi : java.util.List.of("CN(C)CCOC(c1ccccc1)c1ccccc1", "OC(=O)Cc1ccccc1Nc1c(Cl)cccc1Cl",
+                "NC(CCCNC(N)=N)C(=O)O", "OC(=O)CC(O)(CC(=O)O)C(=O)O")) {
+            var c = ionmark.speciation.api.Conditions.atPh(5.5);
+            var full = ENGINE.analyse(smi, c);
+            var brief = ENGINE.analyse(smi, c, true);
+            assertTrue(full.ok() && brief.ok(), smi);
+            assertEquals(full.sites(), brief.sites(), smi);
+            assertEquals(full.macroPka(), brief.macroPka(), smi);
+            assertEquals(full.chargeStates(), brief.chargeStates(), smi);
+            assertEquals(full.netCharge(), brief.netCharge(), smi);
+            assertEquals(full.fractionNeutral(), brief.fractionNeutral(), smi);
+            assertEquals(full.warnings(), brief.warnings(), smi);
+            assertTrue(brief.species().isEmpty() && brief.logD() == null && Double.isNaN(brief.logP()), smi);
+            assertTrue(!full.species().isEmpty() && full.logD() != null, smi);
+        }
+    }
 }

@@ -7,9 +7,12 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Optional;
+import java.util.HashSet;
+import java.util.Set;
 
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.fingerprint.CircularFingerprinter;
+import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.smiles.SmiFlavor;
 import org.openscience.cdk.smiles.SmilesGenerator;
@@ -35,7 +38,10 @@ public final class Overrides {
     }
 
     private final Map<String, MeasuredCompound> exact = new HashMap<>();
+    /** Formulas of the measured compounds: a canonical SMILES is made only when the formula is one of these. */
+    private final Set<String> formulas = new HashSet<>();
     private final List<Analog> analogs = new ArrayList<>();
+    private final Set<String> analogGroups = new HashSet<>();
 
     public Overrides(CompiledTable table) {
         StructureReader reader = new StructureReader(1000);
@@ -43,11 +49,13 @@ public final class Overrides {
             try {
                 IAtomContainer mol = reader.read(m.smiles()).molecule();
                 exact.putIfAbsent(canonical(mol), m);
+                formulas.add(formula(mol));
                 List<PerceivedSite> sites = SitePerceiver.perceive(table, mol).stream()
                         .filter(s -> !s.group().permanent()).toList();
                 if (sites.size() == 1 && m.pka().size() == 1) {
                     EstimatedSite e = LferEstimator.estimate(table, mol, sites).get(0);
                     analogs.add(new Analog(m, sites.get(0).group().id(), m.pka().get(0) - e.pka(), fingerprint(mol)));
+                    analogGroups.add(sites.get(0).group().id());
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has parsed every measured structure; nothing to do for one that fails here
@@ -56,7 +64,39 @@ public final class Overrides {
     }
 
     public Optional<MeasuredCompound> exact(IAtomContainer mol) {
+        if (!formulas.contains(formula(mol))) {
+            return Optional.empty();
+        }
         return Optional.ofNullable(exact.get(canonical(mol)));
+    }
+
+    /** Whether any measured single-site compound of this class can serve as an analog. */
+    public boolean hasAnalogs(String groupId) {
+        return analogGroups.contains(groupId);
+    }
+
+    /**
+     * Element counts (with implicit hydrogens) and total formal charge; equal canonical SMILES imply
+     * equal formulas, so this is a safe screen before the costlier canonical form.
+     */
+    static String formula(IAtomContainer mol) {
+        int[] count = new int[120];
+        int charge = 0;
+        for (IAtom a : mol.atoms()) {
+            Integer z = a.getAtomicNumber();
+            count[z == null || z < 0 || z >= count.length ? 0 : z]++;
+            Integer h = a.getImplicitHydrogenCount();
+            count[1] += h == null ? 0 : h;
+            Integer q = a.getFormalCharge();
+            charge += q == null ? 0 : q;
+        }
+        StringBuilder sb = new StringBuilder();
+        for (int z = 0; z < count.length; z++) {
+            if (count[z] > 0) {
+                sb.append(z).append(':').append(count[z]).append(' ');
+            }
+        }
+        return sb.append('q').append(charge).toString();
     }
 
     /** The query site shifted by its nearest analog, or unchanged. */

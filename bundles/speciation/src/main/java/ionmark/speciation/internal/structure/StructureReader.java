@@ -69,12 +69,16 @@ public final class StructureReader {
         return text.contains("V2000") || text.contains("V3000") || text.contains("M  END");
     }
 
+    /** One parser per thread: a parser keeps state between calls and is not thread-safe. */
+    private static final ThreadLocal<SmilesParser> PARSER = ThreadLocal
+            .withInitial(() -> new SmilesParser(SilentChemObjectBuilder.getInstance()));
+
     private static IAtomContainer readSmiles(String smi) throws StructureException {
         String first = smi.lines().findFirst().orElse("").strip();
         int ws = indexOfWhitespace(first);
         String s = ws < 0 ? first : first.substring(0, ws);
         try {
-            return new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(s);
+            return PARSER.get().parseSmiles(s);
         } catch (InvalidSmilesException e) {
             String msg = e.getMessage() == null ? "invalid SMILES" : e.getMessage().replace('\n', ' ')
                     .replaceAll("\\s+", " ");
