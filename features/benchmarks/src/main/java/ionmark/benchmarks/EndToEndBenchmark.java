@@ -33,7 +33,7 @@ import ionmark.speciation.internal.Engine;
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.Throughput)
 @OutputTimeUnit(TimeUnit.SECONDS)
-@Warmup(iterations = 3, time = 2)
+@Warmup(iterations = 10, time = 3)
 @Measurement(iterations = 5, time = 2)
 @Fork(1)
 public class EndToEndBenchmark {

@@ -135,8 +135,8 @@ public final class LferEstimator {
                 double delta = -g.rho() * sigma;
                 total += delta;
                 String sym = d == 1 ? "σo = " + fmt(f) + "·σp + σI" : (d == 3 && size == 6 ? "σ" + g.resonance() : "σm");
-                terms.add(new Term(String.format(Locale.ROOT, "Hammett %s %s: %s %.2f × ρ %.2f", pos, sub.name(), sym,
-                        sigma, g.rho()), delta, t.citation(sub.source(d == 2 || size == 5 ? "sigmaMeta" : "sigmaPara"))
+                terms.add(new Term("Hammett " + pos + " " + sub.name() + ": " + sym + " " + fmt(sigma) + " × ρ "
+                        + fmt(g.rho()), delta, t.citation(sub.source(d == 2 || size == 5 ? "sigmaMeta" : "sigmaPara"))
                                 + "; ρ: " + t.citation(g.source("rho"))));
             }
         }
@@ -238,8 +238,8 @@ public final class LferEstimator {
             return 0;
         }
         double delta = -g.rho() * sum;
-        terms.add(new Term(String.format(Locale.ROOT, "inductive Σ σI·%s^(n−1) = %.3f × ρ %.2f from %s", fmt(a), sum,
-                g.rho(), String.join(", ", parts)), delta, "σI: " + t.citation("charton1981") + "; ρ: "
+        terms.add(new Term("inductive Σ σI·" + fmt(a) + "^(n−1) = " + fixed(sum, 3) + " × ρ " + fmt(g.rho()) + " from "
+                + String.join(", ", parts), delta, "σI: " + t.citation("charton1981") + "; ρ: "
                         + t.citation(g.source("rho"))));
         return delta;
     }
@@ -257,6 +257,29 @@ public final class LferEstimator {
     }
 
     private static String fmt(double v) {
-        return String.format(Locale.ROOT, "%.2f", v);
+        return fixed(v, 2);
+    }
+
+    /**
+     * {@code v} with {@code digits} decimals, rounded half away from zero, as {@code %.2f} would
+     * print it in the root locale; derivations are built for every site of every molecule, and the
+     * general formatter was a visible share of that.
+     */
+    static String fixed(double v, int digits) {
+        if (Double.isNaN(v) || Double.isInfinite(v) || Math.abs(v) > 1e12) {
+            return String.format(Locale.ROOT, "%." + digits + "f", v);
+        }
+        long scale = digits == 3 ? 1000 : digits == 2 ? 100 : (long) Math.pow(10, digits);
+        long r = Math.round(Math.abs(v) * scale);
+        StringBuilder sb = new StringBuilder(12);
+        if (v < 0 && r != 0) {
+            sb.append('-');
+        }
+        sb.append(r / scale).append('.');
+        String frac = Long.toString(r % scale);
+        for (int i = frac.length(); i < digits; i++) {
+            sb.append('0');
+        }
+        return sb.append(frac).toString();
     }
 }

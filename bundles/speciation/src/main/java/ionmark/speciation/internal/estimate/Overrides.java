@@ -11,7 +11,6 @@ import java.util.HashSet;
 import java.util.Set;
 
 import org.openscience.cdk.exception.CDKException;
-import org.openscience.cdk.fingerprint.CircularFingerprinter;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.smiles.SmiFlavor;
@@ -28,8 +27,8 @@ import ionmark.speciation.internal.structure.StructureReader;
 /**
  * Measured compounds of the table: exact matches override estimates; single-site compounds also
  * serve as analogs whose measured-minus-estimated shift is applied to a query site of the same
- * class, damped by similarity (shift × T², T the Tanimoto similarity of ECFP4 fingerprints, from
- * {@link #MIN_SIMILARITY} upwards).
+ * class, damped by similarity (shift × T², T the Tanimoto similarity of circular fingerprints of
+ * radius 2, {@link Morgan}, from {@link #MIN_SIMILARITY} upwards).
  */
 public final class Overrides {
     public static final double MIN_SIMILARITY = 0.55;
@@ -126,11 +125,7 @@ public final class Overrides {
     }
 
     public static BitSet fingerprint(IAtomContainer mol) {
-        try {
-            return new CircularFingerprinter(CircularFingerprinter.CLASS_ECFP4).getBitFingerprint(mol).asBitSet();
-        } catch (CDKException | RuntimeException e) {
-            return new BitSet();
-        }
+        return Morgan.of(mol);
     }
 
     static double tanimoto(BitSet a, BitSet b) {

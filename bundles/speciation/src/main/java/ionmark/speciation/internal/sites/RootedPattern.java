@@ -4,6 +4,7 @@ import java.util.ArrayDeque;
 import java.util.Arrays;
 import java.util.HashSet;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -46,6 +47,14 @@ public final class RootedPattern {
     private final int[][] closeTo;
     private final IQueryBond[][] closeBond;
     private final Set<Integer> rootElements;
+    /**
+     * Per query atom: whether its expression reads only what {@link Target#key} holds, and then the
+     * outcomes by key. The expression is still CDK's; it is only not evaluated twice for atoms that
+     * look alike to it.
+     */
+    private final boolean[] byKey;
+    private final ConcurrentHashMap<Long, Boolean>[] outcomes;
+    static final int MAX_KEYS = 4096;
 
     public RootedPattern(QueryAtomContainer q, int root) {
         int n = q.getAtomCount();
@@ -107,6 +116,14 @@ public final class RootedPattern {
             closeBond[i] = tb;
         }
         rootElements = atoms[root] instanceof QueryAtom qa ? elements(qa.getExpression()) : null;
+        byKey = new boolean[n];
+        @SuppressWarnings("unchecked")
+        ConcurrentHashMap<Long, Boolean>[] o = new ConcurrentHashMap[n];
+        outcomes = o;
+        for (int i = 0; i < n; i++) {
+            byKey[i] = atoms[i] instanceof QueryAtom qa && local(qa.getExpression());
+            outcomes[i] = byKey[i] ? new ConcurrentHashMap<>() : null;
+        }
     }
 
     /**
@@ -129,7 +146,7 @@ public final class RootedPattern {
 
     /** Every mapping with the root on {@code atom}, in search order, until the visitor says stop. */
     public void forEach(Target t, int atom, Visitor v) {
-        if (!atoms[order[0]].matches(t.atoms[atom])) {
+        if (!atomMatches(order[0], t, atom)) {
             return;
         }
         int[] map = new int[atoms.length];
@@ -150,7 +167,7 @@ public final class RootedPattern {
         IBond[] bonds = t.bonds[from];
         for (int k = 0; k < nbrs.length; k++) {
             int x = nbrs[k];
-            if (used[x] || !parentBond[i].matches(bonds[k]) || !atoms[qa].matches(t.atoms[x]) || !closes(t, i, map, x)) {
+            if (used[x] || !parentBond[i].matches(bonds[k]) || !atomMatches(qa, t, x) || !closes(t, i, map, x)) {
                 continue;
             }
             map[qa] = x;
@@ -162,6 +179,67 @@ public final class RootedPattern {
             }
         }
         return true;
+    }
+
+    private boolean atomMatches(int q, Target t, int atom) {
+        long key = byKey[q] ? t.key[atom] : -1;
+        if (key < 0) {
+            return atoms[q].matches(t.atoms[atom]);
+        }
+        Boolean known = outcomes[q].get(key);
+        if (known != null) {
+            return known;
+        }
+        boolean m = atoms[q].matches(t.atoms[atom]);
+        if (outcomes[q].size() < MAX_KEYS) {
+            outcomes[q].put(key, m);
+        }
+        return m;
+    }
+
+    /**
+     * True when every primitive in {@code e} depends only on the atom itself and its bond counts
+     * (see {@link Target#key}); ring sizes, ring counts, recursive SMARTS and the like are not.
+     */
+    static boolean local(Expr e) {
+        if (e == null) {
+            return false;
+        }
+        switch (e.type()) {
+            case AND:
+            case OR:
+                return local(e.left()) && local(e.right());
+            case NOT:
+                return local(e.left());
+            case TRUE:
+            case FALSE:
+            case IS_AROMATIC:
+            case IS_ALIPHATIC:
+            case IS_IN_RING:
+            case IS_IN_CHAIN:
+            case IS_HETERO:
+            case HAS_IMPLICIT_HYDROGEN:
+            case HAS_ISOTOPE:
+            case HAS_UNSPEC_ISOTOPE:
+            case UNSATURATED:
+            case ELEMENT:
+            case ALIPHATIC_ELEMENT:
+            case AROMATIC_ELEMENT:
+            case IMPL_H_COUNT:
+            case TOTAL_H_COUNT:
+            case DEGREE:
+            case HEAVY_DEGREE:
+            case TOTAL_DEGREE:
+            case VALENCE:
+            case ISOTOPE:
+            case FORMAL_CHARGE:
+            case RING_BOND_COUNT:
+            case INSATURATION:
+            case PERIODIC_GROUP:
+                return true;
+            default:
+                return false;
+        }
     }
 
     private boolean closes(Target t, int i, int[] map, int x) {
@@ -228,6 +306,12 @@ public final class RootedPattern {
         final IAtom[] atoms;
         final int[][] adj;
         final IBond[][] bonds;
+        /**
+         * Per atom, everything a local atom expression can read, packed: element, aromatic and ring
+         * flags, implicit and explicit hydrogens, bond count, bond-order sum, formal charge, mass
+         * number, ring bonds and double bonds. −1 when a value is out of the packed range.
+         */
+        final long[] key;
 
         public Target(IAtomContainer mol) {
             int n = mol.getAtomCount();
@@ -255,6 +339,50 @@ public final class RootedPattern {
                 adj[w][deg[w]] = u;
                 bonds[w][deg[w]++] = b;
             }
+            key = new long[n];
+            for (int i = 0; i < n; i++) {
+                key[i] = key(atoms[i], adj[i], bonds[i]);
+            }
+        }
+
+        private long key(IAtom a, int[] nbrs, IBond[] bs) {
+            Integer zz = a.getAtomicNumber();
+            Integer hh = a.getImplicitHydrogenCount();
+            Integer qq = a.getFormalCharge();
+            Integer mm = a.getMassNumber();
+            int z = zz == null ? 0 : zz;
+            int implicitH = hh == null ? 7 : hh; // 7: unset
+            int q = (qq == null ? 0 : qq) + 8;
+            int mass = mm == null ? 0 : mm + 1;
+            int explicitH = 0;
+            int orders = 0;
+            int ring = 0;
+            int doubles = 0;
+            for (int k = 0; k < nbrs.length; k++) {
+                if (atoms[nbrs[k]].getAtomicNumber() != null && atoms[nbrs[k]].getAtomicNumber() == 1) {
+                    explicitH++;
+                }
+                IBond.Order o = bs[k].getOrder();
+                orders += o == null ? 0 : o.numeric();
+                ring += bs[k].isInRing() ? 1 : 0;
+                doubles += o == IBond.Order.DOUBLE ? 1 : 0;
+            }
+            if (z > 255 || implicitH > 7 || q < 0 || q > 15 || mass > 1023 || explicitH > 7 || nbrs.length > 15
+                    || orders > 31 || ring > 7 || doubles > 7) {
+                return -1;
+            }
+            long k = z;
+            k = k << 1 | (a.isAromatic() ? 1 : 0);
+            k = k << 1 | (a.isInRing() ? 1 : 0);
+            k = k << 3 | implicitH;
+            k = k << 3 | explicitH;
+            k = k << 4 | nbrs.length;
+            k = k << 5 | orders;
+            k = k << 4 | q;
+            k = k << 10 | mass;
+            k = k << 3 | ring;
+            k = k << 3 | doubles;
+            return k;
         }
 
         public IAtom atom(int i) {

@@ -1,0 +1,99 @@
+package ionmark.speciation.internal.estimate;
+
+import java.util.Arrays;
+import java.util.BitSet;
+
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IBond;
+
+/**
+ * Circular (Morgan) fingerprint of radius 2, in the manner of extended-connectivity fingerprints
+ * (Rogers, D.; Hahn, M. J. Chem. Inf. Model. 2010, 50, 742–754): every atom starts from a hash of
+ * its own invariants (element, heavy-atom degree, hydrogens, formal charge, aromaticity, ring
+ * membership); each round hashes the atom's identifier with the sorted (bond, neighbour identifier)
+ * pairs around it. Identifiers of rounds 0, 1 and 2 are folded into {@link #BITS} bits. Only used to
+ * rank measured analogs by Tanimoto similarity, so the exact hash function is an internal matter;
+ * it is the same for the query and the measured compounds.
+ *
+ * <p>Written over plain arrays because a general-purpose fingerprinter was the largest single cost
+ * of an estimate.
+ */
+final class Morgan {
+    static final int BITS = 2048;
+    static final int RADIUS = 2;
+
+    private Morgan() {
+    }
+
+    static BitSet of(IAtomContainer mol) {
+        int n = mol.getAtomCount();
+        int[][] nbr = new int[n][];
+        int[][] bnd = new int[n][];
+        int[] deg = new int[n];
+        for (IBond b : mol.bonds()) {
+            deg[b.getBegin().getIndex()]++;
+            deg[b.getEnd().getIndex()]++;
+        }
+        for (int i = 0; i < n; i++) {
+            nbr[i] = new int[deg[i]];
+            bnd[i] = new int[deg[i]];
+            deg[i] = 0;
+        }
+        for (IBond b : mol.bonds()) {
+            int u = b.getBegin().getIndex();
+            int w = b.getEnd().getIndex();
+            int code = b.isAromatic() ? 4 : b.getOrder() == null ? 0 : b.getOrder().numeric();
+            nbr[u][deg[u]] = w;
+            bnd[u][deg[u]++] = code;
+            nbr[w][deg[w]] = u;
+            bnd[w][deg[w]++] = code;
+        }
+        BitSet fp = new BitSet(BITS);
+        int[] id = new int[n];
+        for (int i = 0; i < n; i++) {
+            IAtom a = mol.getAtom(i);
+            int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
+            int q = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
+            int z = a.getAtomicNumber() == null ? 0 : a.getAtomicNumber();
+            int x = mix(mix(mix(mix(mix(mix(0x9747b28c, z), nbr[i].length), h), q + 8), a.isAromatic() ? 1 : 0),
+                    a.isInRing() ? 1 : 0);
+            id[i] = x;
+            fp.set(Math.floorMod(x, BITS));
+        }
+        long[] pairs = new long[8];
+        for (int round = 1; round <= RADIUS; round++) {
+            int[] next = new int[n];
+            for (int i = 0; i < n; i++) {
+                int d = nbr[i].length;
+                if (pairs.length < d) {
+                    pairs = new long[d];
+                }
+                for (int k = 0; k < d; k++) {
+                    pairs[k] = ((long) bnd[i][k] << 32) | (id[nbr[i][k]] & 0xffffffffL);
+                }
+                Arrays.sort(pairs, 0, d);
+                int x = mix(mix(0x5bd1e995, round), id[i]);
+                for (int k = 0; k < d; k++) {
+                    x = mix(mix(x, (int) (pairs[k] >>> 32)), (int) pairs[k]);
+                }
+                next[i] = x;
+                fp.set(Math.floorMod(x, BITS));
+            }
+            id = next;
+        }
+        return fp;
+    }
+
+    /** One step of a 32-bit multiplicative hash (MurmurHash3's mixing constants). */
+    private static int mix(int h, int v) {
+        int k = v * 0xcc9e2d51;
+        k = Integer.rotateLeft(k, 15) * 0x1b873593;
+        h ^= k;
+        h = Integer.rotateLeft(h, 13) * 5 + 0xe6546b64;
+        h ^= h >>> 16;
+        h *= 0x85ebca6b;
+        h ^= h >>> 13;
+        return h;
+    }
+}
