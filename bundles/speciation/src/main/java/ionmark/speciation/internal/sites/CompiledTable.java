@@ -41,6 +41,7 @@ public final class CompiledTable {
 
     public CompiledTable(AcidityTable table) {
         this.table = table;
+        RootedPattern.Recursions recursions = new RootedPattern.Recursions();
         List<Group> g = new ArrayList<>();
         for (int i = 0; i < table.groups().size(); i++) {
             GroupClass gc = table.groups().get(i);
@@ -61,7 +62,7 @@ public final class CompiledTable {
             if (site < 0) {
                 continue;
             }
-            g.add(new Group(gc, new RootedPattern(q, site), site,
+            g.add(new Group(gc, new RootedPattern(q, site, recursions), site,
                     centres.stream().mapToInt(Integer::intValue).toArray(), gc.specificity(),
                     i));
         }
@@ -75,7 +76,7 @@ public final class CompiledTable {
             if (!Smarts.parse(q, sub.smarts())) {
                 continue;
             }
-            s.add(new Sub(sub, new RootedPattern(q, 0), q.getAtomCount(), i));
+            s.add(new Sub(sub, new RootedPattern(q, 0, recursions), q.getAtomCount(), i));
         }
         s.sort(Comparator.comparingInt((Sub x) -> -x.size()).thenComparingInt(Sub::order));
         this.substituents = List.copyOf(s);

@@ -2,9 +2,10 @@ package ionmark.speciation.internal.sites;
 
 import java.util.ArrayDeque;
 import java.util.Arrays;
+import java.util.HashMap;
 import java.util.HashSet;
+import java.util.Map;
 import java.util.Set;
-import java.util.concurrent.ConcurrentHashMap;
 
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -14,6 +15,7 @@ import org.openscience.cdk.isomorphism.matchers.IQueryAtom;
 import org.openscience.cdk.isomorphism.matchers.IQueryBond;
 import org.openscience.cdk.isomorphism.matchers.QueryAtom;
 import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
+import org.openscience.cdk.smarts.Smarts;
 
 /**
  * A connected SMARTS query matched with one query atom held on one given molecule atom.
@@ -25,10 +27,12 @@ import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
  * sit on that atom fails on its first atom expression, and the search grows only outward from the
  * root, in breadth-first order over the query.
  *
- * <p>Atom and bond expressions are CDK's own ({@link IQueryAtom#matches}), so every SMARTS
- * primitive, including recursive ones, means what it means in CDK's matcher. The molecule must have
- * been prepared once ({@code SmartsPattern.prepare}); nothing is prepared here. Immutable and
- * thread-safe.
+ * <p>Every SMARTS primitive is evaluated by CDK ({@link Expr#matches}), so it means what it means
+ * in CDK's matcher; only the and/or/not logic above the primitives is walked here, so that a
+ * recursive SMARTS shared by several patterns is matched once per molecule atom (a memo in
+ * {@link Target}). The molecule must have been prepared once ({@code SmartsPattern.prepare});
+ * nothing is prepared here. The pattern is immutable and thread-safe; a {@link Target} belongs to
+ * one thread.
  */
 public final class RootedPattern {
     /** Visits one mapping (query atom index → molecule atom index); return false to stop. */
@@ -47,16 +51,18 @@ public final class RootedPattern {
     private final int[][] closeTo;
     private final IQueryBond[][] closeBond;
     private final Set<Integer> rootElements;
-    /**
-     * Per query atom: whether its expression reads only what {@link Target#key} holds, and then the
-     * outcomes by key. The expression is still CDK's; it is only not evaluated twice for atoms that
-     * look alike to it.
-     */
-    private final boolean[] byKey;
-    private final ConcurrentHashMap<Long, Boolean>[] outcomes;
-    static final int MAX_KEYS = 4096;
+    /** Per query atom: its expression with recursive parts numbered for the per-molecule memo, or null. */
+    private final Node[] trees;
 
     public RootedPattern(QueryAtomContainer q, int root) {
+        this(q, root, new Recursions());
+    }
+
+    /**
+     * {@code recursions} is shared by every pattern of one table, so that a recursive SMARTS written
+     * in several classes (say "not an amide nitrogen") is evaluated once per molecule atom.
+     */
+    public RootedPattern(QueryAtomContainer q, int root, Recursions recursions) {
         int n = q.getAtomCount();
         if (root < 0 || root >= n) {
             throw new IllegalArgumentException("root " + root + " is not a query atom");
@@ -116,13 +122,9 @@ public final class RootedPattern {
             closeBond[i] = tb;
         }
         rootElements = atoms[root] instanceof QueryAtom qa ? elements(qa.getExpression()) : null;
-        byKey = new boolean[n];
-        @SuppressWarnings("unchecked")
-        ConcurrentHashMap<Long, Boolean>[] o = new ConcurrentHashMap[n];
-        outcomes = o;
+        trees = new Node[n];
         for (int i = 0; i < n; i++) {
-            byKey[i] = atoms[i] instanceof QueryAtom qa && local(qa.getExpression());
-            outcomes[i] = byKey[i] ? new ConcurrentHashMap<>() : null;
+            trees[i] = atoms[i] instanceof QueryAtom qa ? Node.of(qa.getExpression(), recursions) : null;
         }
     }
 
@@ -182,64 +184,7 @@ public final class RootedPattern {
     }
 
     private boolean atomMatches(int q, Target t, int atom) {
-        long key = byKey[q] ? t.key[atom] : -1;
-        if (key < 0) {
-            return atoms[q].matches(t.atoms[atom]);
-        }
-        Boolean known = outcomes[q].get(key);
-        if (known != null) {
-            return known;
-        }
-        boolean m = atoms[q].matches(t.atoms[atom]);
-        if (outcomes[q].size() < MAX_KEYS) {
-            outcomes[q].put(key, m);
-        }
-        return m;
-    }
-
-    /**
-     * True when every primitive in {@code e} depends only on the atom itself and its bond counts
-     * (see {@link Target#key}); ring sizes, ring counts, recursive SMARTS and the like are not.
-     */
-    static boolean local(Expr e) {
-        if (e == null) {
-            return false;
-        }
-        switch (e.type()) {
-            case AND:
-            case OR:
-                return local(e.left()) && local(e.right());
-            case NOT:
-                return local(e.left());
-            case TRUE:
-            case FALSE:
-            case IS_AROMATIC:
-            case IS_ALIPHATIC:
-            case IS_IN_RING:
-            case IS_IN_CHAIN:
-            case IS_HETERO:
-            case HAS_IMPLICIT_HYDROGEN:
-            case HAS_ISOTOPE:
-            case HAS_UNSPEC_ISOTOPE:
-            case UNSATURATED:
-            case ELEMENT:
-            case ALIPHATIC_ELEMENT:
-            case AROMATIC_ELEMENT:
-            case IMPL_H_COUNT:
-            case TOTAL_H_COUNT:
-            case DEGREE:
-            case HEAVY_DEGREE:
-            case TOTAL_DEGREE:
-            case VALENCE:
-            case ISOTOPE:
-            case FORMAL_CHARGE:
-            case RING_BOND_COUNT:
-            case INSATURATION:
-            case PERIODIC_GROUP:
-                return true;
-            default:
-                return false;
-        }
+        return trees[q] != null ? trees[q].matches(t, atom) : atoms[q].matches(t.atoms[atom]);
     }
 
     private boolean closes(Target t, int i, int[] map, int x) {
@@ -301,17 +246,81 @@ public final class RootedPattern {
         return b;
     }
 
+    /** Numbers recursive SMARTS by their text, so equal ones share one memo slot per molecule. */
+    public static final class Recursions {
+        private final Map<String, Integer> ids = new HashMap<>();
+
+        synchronized int id(Expr recursive) {
+            String text;
+            try {
+                text = Smarts.generate(recursive.subquery());
+            } catch (RuntimeException e) {
+                text = "#" + System.identityHashCode(recursive);
+            }
+            return ids.computeIfAbsent(text, k -> ids.size());
+        }
+    }
+
+    /**
+     * An atom expression as a tree whose logic is evaluated here and whose leaves are CDK's: a
+     * recursive leaf is looked up in the molecule's memo before it is matched.
+     */
+    private record Node(Expr.Type op, Expr leaf, Node left, Node right, int recursion) {
+        static Node of(Expr e, Recursions r) {
+            if (e == null || !plain(e)) {
+                return null;
+            }
+            return build(e, r);
+        }
+
+        private static Node build(Expr e, Recursions r) {
+            switch (e.type()) {
+                case AND:
+                case OR:
+                    return new Node(e.type(), null, build(e.left(), r), build(e.right(), r), -1);
+                case NOT:
+                    return new Node(e.type(), null, build(e.left(), r), null, -1);
+                case RECURSIVE:
+                    return new Node(e.type(), e, null, null, r.id(e));
+                default:
+                    return new Node(e.type(), e, null, null, -1);
+            }
+        }
+
+        /** No stereo primitives: CDK's NOT has a special case for them that this tree does not copy. */
+        private static boolean plain(Expr e) {
+            if (e == null) {
+                return true;
+            }
+            if (e.type() == Expr.Type.STEREOCHEMISTRY) {
+                return false;
+            }
+            return e.type() == Expr.Type.RECURSIVE || plain(e.left()) && plain(e.right());
+        }
+
+        boolean matches(Target t, int atom) {
+            switch (op) {
+                case AND:
+                    return left.matches(t, atom) && right.matches(t, atom);
+                case OR:
+                    return left.matches(t, atom) || right.matches(t, atom);
+                case NOT:
+                    return !left.matches(t, atom);
+                case RECURSIVE:
+                    return t.recursive(recursion, atom, leaf);
+                default:
+                    return leaf.matches(t.atoms[atom]);
+            }
+        }
+    }
+
     /** A prepared molecule as arrays: atoms, neighbour lists and the bond to each neighbour. */
     public static final class Target {
         final IAtom[] atoms;
         final int[][] adj;
         final IBond[][] bonds;
-        /**
-         * Per atom, everything a local atom expression can read, packed: element, aromatic and ring
-         * flags, implicit and explicit hydrogens, bond count, bond-order sum, formal charge, mass
-         * number, ring bonds and double bonds. −1 when a value is out of the packed range.
-         */
-        final long[] key;
+        /** Outcomes of recursive SMARTS by recursion number and atom: 0 not yet known, 1 no, 2 yes. */
+        private byte[][] memo = new byte[16][];
 
         public Target(IAtomContainer mol) {
             int n = mol.getAtomCount();
@@ -339,50 +348,20 @@ public final class RootedPattern {
                 adj[w][deg[w]] = u;
                 bonds[w][deg[w]++] = b;
             }
-            key = new long[n];
-            for (int i = 0; i < n; i++) {
-                key[i] = key(atoms[i], adj[i], bonds[i]);
-            }
         }
 
-        private long key(IAtom a, int[] nbrs, IBond[] bs) {
-            Integer zz = a.getAtomicNumber();
-            Integer hh = a.getImplicitHydrogenCount();
-            Integer qq = a.getFormalCharge();
-            Integer mm = a.getMassNumber();
-            int z = zz == null ? 0 : zz;
-            int implicitH = hh == null ? 7 : hh; // 7: unset
-            int q = (qq == null ? 0 : qq) + 8;
-            int mass = mm == null ? 0 : mm + 1;
-            int explicitH = 0;
-            int orders = 0;
-            int ring = 0;
-            int doubles = 0;
-            for (int k = 0; k < nbrs.length; k++) {
-                if (atoms[nbrs[k]].getAtomicNumber() != null && atoms[nbrs[k]].getAtomicNumber() == 1) {
-                    explicitH++;
-                }
-                IBond.Order o = bs[k].getOrder();
-                orders += o == null ? 0 : o.numeric();
-                ring += bs[k].isInRing() ? 1 : 0;
-                doubles += o == IBond.Order.DOUBLE ? 1 : 0;
+        boolean recursive(int id, int atom, Expr e) {
+            if (id >= memo.length) {
+                memo = Arrays.copyOf(memo, Math.max(id + 1, memo.length * 2));
             }
-            if (z > 255 || implicitH > 7 || q < 0 || q > 15 || mass > 1023 || explicitH > 7 || nbrs.length > 15
-                    || orders > 31 || ring > 7 || doubles > 7) {
-                return -1;
+            byte[] m = memo[id];
+            if (m == null) {
+                m = memo[id] = new byte[atoms.length];
             }
-            long k = z;
-            k = k << 1 | (a.isAromatic() ? 1 : 0);
-            k = k << 1 | (a.isInRing() ? 1 : 0);
-            k = k << 3 | implicitH;
-            k = k << 3 | explicitH;
-            k = k << 4 | nbrs.length;
-            k = k << 5 | orders;
-            k = k << 4 | q;
-            k = k << 10 | mass;
-            k = k << 3 | ring;
-            k = k << 3 | doubles;
-            return k;
+            if (m[atom] == 0) {
+                m[atom] = (byte) (e.matches(atoms[atom]) ? 2 : 1);
+            }
+            return m[atom] == 2;
         }
 
         public IAtom atom(int i) {
