@@ -30,7 +30,10 @@ import ionmark.store.api.VersionInfo;
 public final class StoreComponent implements TableStore {
     private final JdbcTableStore store;
     private final TableService tables;
+    /** Null when this run was given its own table file. */
     private final HeadFollower follower;
+    /** The launcher's table file (IONMARK_TABLE), the same property the table service reads. */
+    static final String LOCAL_TABLE_PROPERTY = "ionmark.table.file";
 
     @Activate
     public StoreComponent(@Reference TableService tables, StoreConfiguration config, BundleContext ctx) throws IOException {
@@ -49,8 +52,17 @@ public final class StoreComponent implements TableStore {
         String password = config.passwordFile().isBlank() ? "" : Files.readAllLines(Path.of(config.passwordFile()))
                 .stream().findFirst().orElse("").strip();
         this.store = new JdbcTableStore(tables, url, config.user(), password);
-        seed();
-        this.follower = new HeadFollower(store, tables, config.pollSeconds());
+        String localFile = ctx.getProperty(LOCAL_TABLE_PROPERTY);
+        if (localFile != null && !localFile.isBlank()) {
+            // a run given its own table file (IONMARK_TABLE: a draft, a calibration or cross-validation
+            // fold) uses that file; following the shared head would silently replace it
+            System.err.println("ionmark: using the table file " + localFile + "; the table store's head is not "
+                    + "followed in this run");
+            this.follower = null;
+        } else {
+            seed();
+            this.follower = new HeadFollower(store, tables, config.pollSeconds());
+        }
     }
 
     private void seed() {
@@ -67,12 +79,16 @@ public final class StoreComponent implements TableStore {
     }
 
     private void follow() {
-        follower.follow();
+        if (follower != null) {
+            follower.follow();
+        }
     }
 
     @Deactivate
     void deactivate() {
-        follower.close();
+        if (follower != null) {
+            follower.close();
+        }
         store.close();
     }
 
