@@ -28,7 +28,9 @@ import ionmark.speciation.internal.sites.PerceivedSite;
  * <li>Hammett (aromatic sites): ΔpKa = −ρ Σσ over substituents on the ring that carries the
  * centre; meta σm, para σp (σp⁻ or σp⁺ when the class is in through-resonance); ortho by the
  * stated rule σo = f·σp + σI, f the class's ortho factor; in five-membered rings the adjacent
- * position counts as ortho and the next as meta.</li>
+ * position counts as ortho and the next as meta. An aromatic ring fused to the site's ring is
+ * part of the class (quinoline, naphthol), not a substituent; an atom of a fused saturated ring
+ * is a substituent like any other (the N of a tetrahydronaphthyridine acts as an amino group).</li>
  * <li>Taft/inductive (sp3 paths): ΔpKa = −ρ Σ σI·a^(n−1), n the bonds from a centre to the
  * substituent's attachment atom, a the class's attenuation per bond; saturated carbons transmit,
  * every other atom is a substituent. Paths are counted from each centre without passing back
@@ -107,7 +109,7 @@ public final class LferEstimator {
             IAtom ra = mol.getAtom(r);
             for (IAtom nb : mol.getConnectedAtomsList(ra)) {
                 int x = mol.indexOf(nb);
-                if (ringSet.contains(x) || s.core().contains(x) || isFusedNeighbour(rings, ringSet, r, x)) {
+                if (ringSet.contains(x) || s.core().contains(x) || nb.isAromatic() && isFusedNeighbour(rings, ringSet, r, x)) {
                     continue;
                 }
                 SubstituentMap.Hit h = subs.at(x, forbidden);
@@ -152,7 +154,7 @@ public final class LferEstimator {
                 hasX |= a == x;
             }
             if (hasR && hasX) {
-                return true; // x is in another ring fused at r: the class covers fused systems
+                return true; // x is in another ring fused at r
             }
         }
         return false;
