@@ -70,7 +70,7 @@ final class Accuracy {
                 groups.add(near == null ? "?" : near.group());
                 sds.add(near == null ? Double.NaN : near.sd());
             }
-            out.add(new Scored(o, pred, Scoring.assign(o.pka(), pred), groups, sds, null));
+            out.add(new Scored(o, pred, ionmark.speciation.api.MacroPairing.assign(o.pka(), pred), groups, sds, null));
             bar.step(i + 1);
         }
         bar.done();

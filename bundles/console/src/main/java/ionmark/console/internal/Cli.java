@@ -395,7 +395,9 @@ public final class Cli {
         for (var fit : r.fits()) {
             out.println(String.format(Locale.ROOT, "%-32s n=%4d trimmed=%3d pKa %6.2f -> %6.2f  rho %6.2f -> %6.2f  "
                     + "RMSE %.2f%s", fit.group(), fit.n(), fit.trimmed(), fit.pkaBefore(), fit.pkaAfter(), fit.rhoBefore(),
-                    fit.rhoAfter(), fit.rmse(), fit.rejected() ? "  REJECTED (moves too far; class unchanged)" : ""));
+                    fit.rhoAfter(), fit.rmse(), fit.rejected() ? "  REJECTED (moves too far; class unchanged)"
+                            : fit.wholeModelN() > 0 ? String.format(Locale.ROOT, "  (one-site %.2f, whole model on %d)",
+                                    fit.pkaSingleSite(), fit.wholeModelN()) : ""));
         }
         try {
             Files.writeString(Path.of(a.flags().get("--out")), tables.toJson(r.table()), StandardCharsets.UTF_8);

@@ -118,7 +118,7 @@ class CliTest {
     @Test
     void scoringPairsOneToOneByLeastTotalError() {
         // the same pairing as the reviewers' script: 4.1 pairs with 4.0, 9.9 with 10.0, 6.0 stays unpaired
-        List<int[]> pairs = Scoring.assign(List.of(4.0, 10.0), List.of(9.9, 6.0, 4.1));
+        List<int[]> pairs = ionmark.speciation.api.MacroPairing.assign(List.of(4.0, 10.0), List.of(9.9, 6.0, 4.1));
         assertEquals(2, pairs.size());
         assertTrue(pairs.stream().anyMatch(p -> p[0] == 0 && p[1] == 2));
         assertTrue(pairs.stream().anyMatch(p -> p[0] == 1 && p[1] == 0));

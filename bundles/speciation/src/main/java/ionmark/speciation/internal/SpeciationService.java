@@ -139,7 +139,23 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
         Engine e = new Engine(base, maxHeavyAtoms);
         java.util.List<Calibration.Point> points = data.parallelStream().map(e::calibrationPoint)
                 .flatMap(java.util.Optional::stream).toList();
-        return Calibration.fit(base, points, referenceId, citation);
+        Result first = Calibration.fit(base, points, referenceId, citation);
+        ModelCalibration.Outcome second = new ModelCalibration(maxHeavyAtoms).refine(first.table(), data, referenceId);
+        java.util.Map<String, ModelCalibration.Move> moved = new java.util.HashMap<>();
+        second.moves().forEach(m -> moved.put(m.group(), m));
+        java.util.List<ionmark.speciation.api.ClassFit> fits = new java.util.ArrayList<>();
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (ionmark.speciation.api.ClassFit f : first.fits()) {
+            ModelCalibration.Move m = moved.get(f.group());
+            fits.add(m == null ? f : f.refined(m.after(), m.rhoAfter(), m.compounds()));
+            seen.add(f.group());
+        }
+        for (ModelCalibration.Move m : second.moves()) {
+            if (!seen.contains(m.group())) {
+                fits.add(ionmark.speciation.api.ClassFit.refinedOnly(m.group(), m.compounds(), m.before(), m.after(), m.rhoBefore(), m.rhoAfter()));
+            }
+        }
+        return new Result(second.table(), fits);
     }
 
     private final java.util.Map<String, SpeciationService> pinned = java.util.Collections.synchronizedMap(

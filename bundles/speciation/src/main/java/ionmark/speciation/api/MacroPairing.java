@@ -1,4 +1,4 @@
-package ionmark.console.internal;
+package ionmark.speciation.api;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -7,16 +7,19 @@ import java.util.List;
 /**
  * Pairs predicted with experimental macroscopic pKa values one to one by least total absolute error
  * (exhaustive when small, greedy otherwise, as the team's reviewers score), counting experimental
- * values without a partner as misses.
+ * values without a partner as misses. Shared by the accuracy report and by calibration, so that a
+ * table is fitted to the same pairing it is scored by.
+ *
+ * @since 1.1
  */
-final class Scoring {
-    static final long EXHAUSTIVE_LIMIT = 200_000;
+public final class MacroPairing {
+    public static final long EXHAUSTIVE_LIMIT = 200_000;
 
-    private Scoring() {
+    private MacroPairing() {
     }
 
     /** Index pairs [exp, pred]. */
-    static List<int[]> assign(List<Double> exp, List<Double> pred) {
+    public static List<int[]> assign(List<Double> exp, List<Double> pred) {
         if (exp.isEmpty() || pred.isEmpty()) {
             return List.of();
         }

@@ -1,0 +1,309 @@
+package ionmark.speciation.internal;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.Relation;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.MacroPairing;
+import ionmark.speciation.api.Observation;
+import ionmark.speciation.api.Site;
+
+/**
+ * Second calibration stage: each class's reference pKa refined against every compound that has a
+ * site of that class, through the whole model (substituent terms, analogs, site interactions,
+ * microstates, macroscopic constants), scored with the same one-to-one pairing as the accuracy
+ * report.
+ *
+ * <p>The first stage ({@code Calibration}) can only use compounds with one perceived site, so the
+ * many multiprotic compounds (amino acids, diamines, hydroxy-azines with a ring nitrogen) do not
+ * inform it, and their classes keep whatever the one-site compounds or the handbook said. Here the
+ * objective is a robust least-squares sum (Huber, quadratic within {@link #HUBER} unit) over paired
+ * values, plus a prior that weighs the stage-one value like {@link #PRIOR_WEIGHT} compounds. Classes
+ * are visited one at a time (coordinate descent), largest first, trying shifts of
+ * {@link #STEPS} units and both twice that; a class with fewer than {@link #MIN_COMPOUNDS}
+ * compounds is left alone, and no class moves more than {@link #MAX_SHIFT} from where stage one
+ * left it. Finally each class's uncertainty is set from the refined model's errors
+ * ({@link #withHonestSd}).
+ */
+final class ModelCalibration {
+    static final double HUBER = 1.0;
+    static final int PRIOR_WEIGHT = 3;
+    static final int MIN_COMPOUNDS = 5;
+    static final int MIN_COMPOUNDS_RHO = 15;
+    static final double MIN_SD = 0.25;
+    /** The table's ceiling for a class uncertainty: a class that is worse than this is flagged by it. */
+    static final double MAX_SD = 5.0;
+    static final double MAX_SHIFT = 2.0;
+    static final double[] STEPS = {0.4, 0.15};
+    /** Loss of an experimental value left without a predicted partner (as a 3-unit error). */
+    static final double MISS = huber(3.0);
+
+    /** What the refinement did to one class. */
+    record Move(String group, int compounds, double before, double after, double rhoBefore, double rhoAfter,
+            double lossBefore, double lossAfter) {
+    }
+
+    record Outcome(AcidityTable table, List<Move> moves) {
+    }
+
+    private final int maxHeavyAtoms;
+
+    ModelCalibration(int maxHeavyAtoms) {
+        this.maxHeavyAtoms = maxHeavyAtoms;
+    }
+
+    Outcome refine(AcidityTable start, List<Observation> data, String refId) {
+        List<Observation> usable = data.stream().filter(o -> !o.pka().isEmpty()).toList();
+        Engine e0 = new Engine(start, maxHeavyAtoms);
+        Map<String, List<Observation>> byClass = new LinkedHashMap<>();
+        usable.parallelStream().map(o -> Map.entry(o, classes(e0.analyse(o.structure(), Conditions.noPh(), true))))
+                .toList().forEach(en -> en.getValue().forEach(
+                        g -> byClass.computeIfAbsent(g, k -> new ArrayList<>()).add(en.getKey())));
+        List<String> order = byClass.keySet().stream().filter(g -> byClass.get(g).size() >= MIN_COMPOUNDS)
+                .sorted(Comparator.comparingInt((String g) -> -byClass.get(g).size()).thenComparing(g -> g)).toList();
+        Map<String, Double> origin = new HashMap<>();
+        start.groups().forEach(g -> origin.put(g.id(), g.pka()));
+        Map<String, Double> lossBefore = new HashMap<>();
+        AcidityTable t = start;
+        Map<String, Double> rhoOrigin = new HashMap<>();
+        start.groups().forEach(g -> rhoOrigin.put(g.id(), g.rho()));
+        Map<String, Double> attOrigin = new HashMap<>();
+        start.groups().forEach(g -> attOrigin.put(g.id(), g.attenuation()));
+        for (double step : STEPS) {
+            for (String id : order) {
+                List<Observation> obs = byClass.get(id);
+                GroupClass g = group(t, id);
+                double here = loss(new Engine(t, maxHeavyAtoms), obs) + prior(g, origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
+                lossBefore.putIfAbsent(id, here);
+                double best = here;
+                AcidityTable bestTable = null;
+                for (double d : new double[] {-2 * step, -step, step, 2 * step}) {
+                    if (Math.abs(g.pka() + d - origin.get(id)) > MAX_SHIFT) {
+                        continue;
+                    }
+                    AcidityTable trial = withPka(t, id, round(g.pka() + d), refId);
+                    double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id), origin.get(id),
+                            rhoOrigin.get(id), attOrigin.get(id));
+                    if (l < best - 1e-9) {
+                        best = l;
+                        bestTable = trial;
+                    }
+                }
+                if (bestTable != null) {
+                    t = bestTable;
+                    g = group(t, id);
+                }
+                // the reaction constant, by relative steps, where the class has one and enough compounds
+                if (g.relation() != Relation.NONE && !Double.isNaN(g.rho()) && obs.size() >= MIN_COMPOUNDS_RHO) {
+                    AcidityTable rhoBest = null;
+                    for (double f : new double[] {1 - step, 1 - step / 2, 1 + step / 2, 1 + step}) {
+                        double rho = round(g.rho() * f);
+                        if (rho / rhoOrigin.get(id) < 0.5 || rho / rhoOrigin.get(id) > 2.0) {
+                            continue;
+                        }
+                        AcidityTable trial = withRho(t, id, rho, refId);
+                        double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id),
+                                origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
+                        if (l < best - 1e-9) {
+                            best = l;
+                            rhoBest = trial;
+                        }
+                    }
+                    if (rhoBest != null) {
+                        t = rhoBest;
+                        g = group(t, id);
+                    }
+                }
+                // the ortho factor (Hammett) or the attenuation per bond (Taft), by absolute steps
+                if (g.relation() != Relation.NONE && !Double.isNaN(g.attenuation()) && obs.size() >= MIN_COMPOUNDS_RHO) {
+                    AcidityTable attBest = null;
+                    boolean hammett = g.relation() == Relation.HAMMETT;
+                    for (double d : new double[] {-step, -step / 2, step / 2, step}) {
+                        double att = round(g.attenuation() + (hammett ? d : d / 2));
+                        if (att < (hammett ? 0 : 0.2) || att > (hammett ? 1 : 0.7)) {
+                            continue;
+                        }
+                        AcidityTable trial = withAttenuation(t, id, att, refId);
+                        double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id),
+                                origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
+                        if (l < best - 1e-9) {
+                            best = l;
+                            attBest = trial;
+                        }
+                    }
+                    if (attBest != null) {
+                        t = attBest;
+                    }
+                }
+            }
+        }
+        t = withHonestSd(t, usable, refId);
+        List<Move> moves = new ArrayList<>();
+        List<GroupClass> groups = new ArrayList<>();
+        Engine end = new Engine(t, maxHeavyAtoms);
+        for (GroupClass g : t.groups()) {
+            double before = origin.getOrDefault(g.id(), g.pka());
+            double rhoBefore = rhoOrigin.getOrDefault(g.id(), g.rho());
+            double attBefore = attOrigin.getOrDefault(g.id(), g.attenuation());
+            boolean same = Math.abs(g.pka() - before) < 1e-9
+                    && (Double.isNaN(g.rho()) || Math.abs(g.rho() - rhoBefore) < 1e-9)
+                    && (Double.isNaN(g.attenuation()) || Math.abs(g.attenuation() - attBefore) < 1e-9);
+            if (!order.contains(g.id()) || same) {
+                groups.add(g);
+                continue;
+            }
+            List<Observation> obs = byClass.get(g.id());
+            double after = loss(end, obs) + prior(g, before, rhoBefore, attBefore);
+            moves.add(new Move(g.id(), obs.size(), before, g.pka(), rhoBefore, g.rho(), lossBefore.get(g.id()), after));
+            String rhoText = Double.isNaN(g.rho()) || Math.abs(g.rho() - rhoBefore) < 1e-9 ? ""
+                    : String.format(Locale.ROOT, ", rho %.2f -> %.2f", rhoBefore, g.rho());
+            if (!Double.isNaN(g.attenuation()) && Math.abs(g.attenuation() - attBefore) >= 1e-9) {
+                rhoText += String.format(Locale.ROOT, ", %s %.2f -> %.2f", g.relation() == Relation.HAMMETT
+                        ? "ortho factor" : "attenuation", attBefore, g.attenuation());
+            }
+            String note = (g.note() == null || g.note().isBlank() ? "" : g.note() + "; ") + String.format(Locale.ROOT,
+                    "%s whole-model refinement: %d compounds with a site of this class, pKa %.2f -> %.2f%s, objective "
+                            + "%.1f -> %.1f", refId, obs.size(), before, g.pka(), rhoText, lossBefore.get(g.id()), after);
+            groups.add(new GroupClass(g.id(), g.name(), g.smarts(), g.type(), g.pka(), g.relation(), g.rho(),
+                    g.attenuation(), g.resonance(), g.enthalpy(), g.sd(), g.permanent(), g.sources(), note, g.matches(),
+                    g.misses()));
+        }
+        return new Outcome(t.withGroups(groups), moves);
+    }
+
+    /**
+     * Class uncertainties from the refined model's own errors: for every paired value, the class of
+     * the site whose estimate lies nearest the predicted constant takes the absolute error; a class's
+     * sd becomes the 68th percentile of its errors (what "within one sd" should cover), pooled with
+     * the current sd weighted as {@link #PRIOR_WEIGHT} values, between {@link #MIN_SD} and
+     * {@link #MAX_SD}.
+     */
+    AcidityTable withHonestSd(AcidityTable t, List<Observation> obs, String refId) {
+        Engine e = new Engine(t, maxHeavyAtoms);
+        Map<String, List<Double>> errors = new HashMap<>();
+        List<Map.Entry<String, Double>> all = obs.parallelStream().flatMap(o -> classErrors(e.analyse(o.structure(),
+                Conditions.noPh(), true), o).stream()).toList();
+        all.forEach(en -> errors.computeIfAbsent(en.getKey(), k -> new ArrayList<>()).add(en.getValue()));
+        List<GroupClass> gs = new ArrayList<>();
+        for (GroupClass g : t.groups()) {
+            List<Double> err = errors.getOrDefault(g.id(), List.of());
+            if (err.size() < MIN_COMPOUNDS || g.permanent()) {
+                gs.add(g);
+                continue;
+            }
+            double q68 = err.stream().sorted().skip((long) Math.floor(0.68 * (err.size() - 1))).findFirst().orElseThrow();
+            int n = err.size();
+            double sd = Math.min(MAX_SD, Math.max(MIN_SD,
+                    Math.sqrt((n * q68 * q68 + PRIOR_WEIGHT * g.sd() * g.sd()) / (n + PRIOR_WEIGHT))));
+            gs.add(g.withSd(round(sd), refId));
+        }
+        return t.withGroups(gs);
+    }
+
+    /** (class, |error|) for every paired value of one compound. */
+    static List<Map.Entry<String, Double>> classErrors(Analysis a, Observation o) {
+        List<Map.Entry<String, Double>> out = new ArrayList<>();
+        if (!a.ok()) {
+            return out;
+        }
+        List<Site> sites = a.sites().stream().filter(s -> !s.permanent()).toList();
+        List<Double> pred = a.macroPka();
+        for (int[] p : MacroPairing.assign(o.pka(), pred)) {
+            double v = pred.get(p[1]);
+            sites.stream().min(Comparator.comparingDouble((Site s) -> Math.abs(s.pka() - v)))
+                    .ifPresent(s -> out.add(Map.entry(s.group(), Math.abs(v - o.pka().get(p[0])))));
+        }
+        return out;
+    }
+
+    /** Classes of the titratable sites in one analysis. */
+    static Set<String> classes(Analysis a) {
+        Set<String> out = new TreeSet<>();
+        if (a.ok()) {
+            for (Site s : a.sites()) {
+                if (!s.permanent()) {
+                    out.add(s.group());
+                }
+            }
+        }
+        return out;
+    }
+
+    /** Sum over compounds of the paired Huber losses and the misses. */
+    static double loss(Engine e, List<Observation> obs) {
+        return obs.parallelStream().mapToDouble(o -> loss(e.analyse(o.structure(), Conditions.noPh(), true), o)).sum();
+    }
+
+    static double loss(Analysis a, Observation o) {
+        List<Double> pred = a.ok() ? a.macroPka() : List.of();
+        List<int[]> pairs = MacroPairing.assign(o.pka(), pred);
+        double l = MISS * (o.pka().size() - pairs.size());
+        for (int[] p : pairs) {
+            l += huber(pred.get(p[1]) - o.pka().get(p[0]));
+        }
+        return l;
+    }
+
+    static double huber(double e) {
+        double a = Math.abs(e);
+        return a <= HUBER ? 0.5 * a * a : HUBER * (a - 0.5 * HUBER);
+    }
+
+    /**
+     * The stage-one values count as {@link #PRIOR_WEIGHT} compounds with no error: for the reference
+     * pKa by its shift, for ρ by the shift it causes at a substituent sum of 0.5.
+     */
+    static double prior(GroupClass g, double pka0, double rho0, double att0) {
+        double p = PRIOR_WEIGHT * huber(g.pka() - pka0);
+        if (!Double.isNaN(rho0) && !Double.isNaN(g.rho())) {
+            p += PRIOR_WEIGHT * huber(0.5 * (g.rho() - rho0));
+        }
+        if (!Double.isNaN(att0) && !Double.isNaN(g.attenuation())) {
+            p += PRIOR_WEIGHT * huber(g.attenuation() - att0);
+        }
+        return p;
+    }
+
+    private static GroupClass group(AcidityTable t, String id) {
+        return t.groups().stream().filter(g -> g.id().equals(id)).findFirst().orElseThrow();
+    }
+
+    private static AcidityTable withPka(AcidityTable t, String id, double pka, String refId) {
+        List<GroupClass> gs = new ArrayList<>();
+        for (GroupClass g : t.groups()) {
+            gs.add(g.id().equals(id) ? g.withPka(pka, refId) : g);
+        }
+        return t.withGroups(gs);
+    }
+
+    private static AcidityTable withRho(AcidityTable t, String id, double rho, String refId) {
+        List<GroupClass> gs = new ArrayList<>();
+        for (GroupClass g : t.groups()) {
+            gs.add(g.id().equals(id) ? g.withRho(rho, refId) : g);
+        }
+        return t.withGroups(gs);
+    }
+
+    private static AcidityTable withAttenuation(AcidityTable t, String id, double att, String refId) {
+        List<GroupClass> gs = new ArrayList<>();
+        for (GroupClass g : t.groups()) {
+            gs.add(g.id().equals(id) ? g.withAttenuation(att, refId) : g);
+        }
+        return t.withGroups(gs);
+    }
+
+    private static double round(double v) {
+        return Math.round(v * 100) / 100.0;
+    }
+}
