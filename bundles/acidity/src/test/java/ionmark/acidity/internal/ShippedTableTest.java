@@ -88,4 +88,32 @@ class ShippedTableTest {
         AcidityTable t = TableValidator.validate(text).table().orElseThrow();
         assertEquals(TableCodec.write(t), text, "re-write the shipped table with the codec (see DEVELOPERS.md)");
     }
+
+    /**
+     * The shipped table is the calibration base with fitted numbers: same classes in the same order
+     * with the same patterns, types and relations; same substituents, measured compounds and
+     * interaction parameters. A class rule changed in one file and not the other fails here.
+     */
+    @Test
+    void shippedTableIsTheCalibrationBaseWithFittedNumbers() throws IOException {
+        String json = java.nio.file.Files.readString(java.nio.file.Path.of("calibration/base-table.json"));
+        ValidationReport r = TableValidator.validate(json);
+        assertTrue(r.ok(), r.errors().toString());
+        AcidityTable base = r.table().orElseThrow();
+        AcidityTable shipped = TableSnapshotService.shipped();
+        assertEquals(1, base.version().number());
+        assertEquals(base.version().number(), shipped.version().parent());
+        assertEquals(base.groups().size(), shipped.groups().size());
+        for (int i = 0; i < base.groups().size(); i++) {
+            GroupClass b = base.groups().get(i);
+            GroupClass s = shipped.groups().get(i);
+            assertEquals(b.id() + " " + b.smarts() + " " + b.type() + " " + b.relation() + " " + b.permanent(),
+                    s.id() + " " + s.smarts() + " " + s.type() + " " + s.relation() + " " + s.permanent());
+        }
+        assertEquals(base.substituents(), shipped.substituents());
+        assertEquals(base.measured(), shipped.measured());
+        assertTrue(java.util.Arrays.deepEquals(base.interaction().shifts().toArray(), shipped.interaction().shifts().toArray()));
+        assertEquals(base.interaction().decay(), shipped.interaction().decay());
+        assertEquals(base.interaction().cutoff(), shipped.interaction().cutoff());
+    }
 }
