@@ -98,11 +98,14 @@ final class Pages {
                 + "<input type=\"hidden\" name=\"token\" value=\"" + esc(token) + "\"><textarea id=\"text\" name=\"text\" "
                 + "rows=\"24\" cols=\"90\">" + esc(text) + "</textarea><p><button type=\"submit\">Save</button></p>"
                 + "</form><h2>Preview</h2><div id=\"preview\" aria-live=\"polite\"></div><script>"
-                + "const t=document.getElementById('text'),p=document.getElementById('preview');let h,seq=0;"
+                + "const t=document.getElementById('text'),p=document.getElementById('preview');let h,seq=0,last='';"
                 // only the newest request may update the preview: answers can arrive out of order
                 + "function r(){const my=++seq;fetch('/preview',{method:'POST',headers:{'X-Ionmark-Token':'"
-                + esc(token) + "'},body:t.value}).then(x=>x.text()).then(x=>{if(my===seq){p.innerHTML=x;}});}"
-                + "t.addEventListener('input',()=>{clearTimeout(h);h=setTimeout(r,300);});r();</script>";
+                + esc(token) + "'},body:t.value}).then(x=>x.text()).then(x=>{if(my===seq&&x!==last){last=x;p.innerHTML=x;}});}"
+                + "t.addEventListener('input',()=>{clearTimeout(h);h=setTimeout(r,300);});r();"
+                // a published table, or annotations that were not ready at the last keystroke, reach an open
+                // editor too: ask again every 10 s while the page is shown, and touch the preview only on change
+                + "setInterval(()=>{if(document.visibilityState==='visible'){r();}},10000);</script>";
     }
 
     static final String STYLE = "body{font-family:sans-serif;max-width:980px;margin:0 auto;padding:0 1em;color:#1a1a1a}"
