@@ -118,33 +118,29 @@ public record GroupClass(String id, String name, String smarts, SiteType type, d
 
     /** A copy with another attenuation (Taft: per bond; Hammett: the ortho factor) and its source. */
     public GroupClass withAttenuation(double value, String source) {
-        var s = new java.util.TreeMap<>(sources);
-        s.put("attenuation", source);
-        return new GroupClass(id, name, smarts, type, pka, relation, rho, value, resonance, enthalpy, sd,
-                permanent, s, note, matches, misses);
+        return copy(pka, rho, value, sd, "attenuation", source);
     }
 
     /** A copy with another uncertainty and its source. */
     public GroupClass withSd(double value, String source) {
-        var s = new java.util.TreeMap<>(sources);
-        s.put("sd", source);
-        return new GroupClass(id, name, smarts, type, pka, relation, rho, attenuation, resonance, enthalpy, value,
-                permanent, s, note, matches, misses);
+        return copy(pka, rho, attenuation, value, "sd", source);
     }
 
     /** A copy with another reaction constant and its source. */
     public GroupClass withRho(double value, String source) {
-        var s = new java.util.TreeMap<>(sources);
-        s.put("rho", source);
-        return new GroupClass(id, name, smarts, type, pka, relation, value, attenuation, resonance, enthalpy, sd,
-                permanent, s, note, matches, misses);
+        return copy(pka, value, attenuation, sd, "rho", source);
     }
 
     /** A copy with another reference pKa and its source. */
     public GroupClass withPka(double value, String source) {
+        return copy(value, rho, attenuation, sd, "pka", source);
+    }
+
+    private GroupClass copy(double newPka, double newRho, double newAttenuation, double newSd, String field,
+            String source) {
         var s = new java.util.TreeMap<>(sources);
-        s.put("pka", source);
-        return new GroupClass(id, name, smarts, type, value, relation, rho, attenuation, resonance, enthalpy, sd,
-                permanent, s, note, matches, misses);
+        s.put(field, source);
+        return new GroupClass(id, name, smarts, type, newPka, relation, newRho, newAttenuation, resonance, enthalpy,
+                newSd, permanent, s, note, matches, misses);
     }
 }

@@ -83,68 +83,42 @@ final class ModelCalibration {
         for (double step : STEPS) {
             for (String id : order) {
                 List<Observation> obs = byClass.get(id);
+                double[] origin0 = {origin.get(id), rhoOrigin.get(id), attOrigin.get(id)};
                 GroupClass g = group(t, id);
-                double here = loss(new Engine(t, maxHeavyAtoms), obs) + prior(g, origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
-                lossBefore.putIfAbsent(id, here);
-                double best = here;
-                AcidityTable bestTable = null;
+                double[] best = {objective(t, id, obs, origin0)};
+                lossBefore.putIfAbsent(id, best[0]);
+                List<AcidityTable> trials = new ArrayList<>();
                 for (double d : new double[] {-2 * step, -step, step, 2 * step}) {
-                    if (Math.abs(g.pka() + d - origin.get(id)) > MAX_SHIFT) {
-                        continue;
-                    }
-                    AcidityTable trial = withPka(t, id, round(g.pka() + d), refId);
-                    double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id), origin.get(id),
-                            rhoOrigin.get(id), attOrigin.get(id));
-                    if (l < best - 1e-9) {
-                        best = l;
-                        bestTable = trial;
+                    double pka = round(g.pka() + d);
+                    if (Math.abs(g.pka() + d - origin0[0]) <= MAX_SHIFT) {
+                        trials.add(with(t, id, x -> x.withPka(pka, refId)));
                     }
                 }
-                if (bestTable != null) {
-                    t = bestTable;
-                    g = group(t, id);
-                }
+                t = better(t, trials, id, obs, origin0, best);
+                g = group(t, id);
                 // the reaction constant, by relative steps, where the class has one and enough compounds
                 if (g.relation() != Relation.NONE && !Double.isNaN(g.rho()) && obs.size() >= MIN_COMPOUNDS_RHO) {
-                    AcidityTable rhoBest = null;
+                    trials = new ArrayList<>();
                     for (double f : new double[] {1 - step, 1 - step / 2, 1 + step / 2, 1 + step}) {
                         double rho = round(g.rho() * f);
-                        if (rho / rhoOrigin.get(id) < 0.5 || rho / rhoOrigin.get(id) > 2.0) {
-                            continue;
-                        }
-                        AcidityTable trial = withRho(t, id, rho, refId);
-                        double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id),
-                                origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
-                        if (l < best - 1e-9) {
-                            best = l;
-                            rhoBest = trial;
+                        if (rho / origin0[1] >= 0.5 && rho / origin0[1] <= 2.0) {
+                            trials.add(with(t, id, x -> x.withRho(rho, refId)));
                         }
                     }
-                    if (rhoBest != null) {
-                        t = rhoBest;
-                        g = group(t, id);
-                    }
+                    t = better(t, trials, id, obs, origin0, best);
+                    g = group(t, id);
                 }
                 // the ortho factor (Hammett) or the attenuation per bond (Taft), by absolute steps
                 if (g.relation() != Relation.NONE && !Double.isNaN(g.attenuation()) && obs.size() >= MIN_COMPOUNDS_RHO) {
-                    AcidityTable attBest = null;
+                    trials = new ArrayList<>();
                     boolean hammett = g.relation() == Relation.HAMMETT;
                     for (double d : new double[] {-step, -step / 2, step / 2, step}) {
                         double att = round(g.attenuation() + (hammett ? d : d / 2));
-                        if (att < (hammett ? 0 : 0.2) || att > (hammett ? 1 : 0.7)) {
-                            continue;
-                        }
-                        AcidityTable trial = withAttenuation(t, id, att, refId);
-                        double l = loss(new Engine(trial, maxHeavyAtoms), obs) + prior(group(trial, id),
-                                origin.get(id), rhoOrigin.get(id), attOrigin.get(id));
-                        if (l < best - 1e-9) {
-                            best = l;
-                            attBest = trial;
+                        if (att >= (hammett ? 0 : 0.2) && att <= (hammett ? 1 : 0.7)) {
+                            trials.add(with(t, id, x -> x.withAttenuation(att, refId)));
                         }
                     }
-                    if (attBest != null) {
-                        t = attBest;
-                    }
+                    t = better(t, trials, id, obs, origin0, best);
                 }
             }
         }
@@ -279,28 +253,38 @@ final class ModelCalibration {
         return t.groups().stream().filter(g -> g.id().equals(id)).findFirst().orElseThrow();
     }
 
-    private static AcidityTable withPka(AcidityTable t, String id, double pka, String refId) {
+
+
+
+    /** {@code t} with class {@code id} changed by {@code change}. */
+    private static AcidityTable with(AcidityTable t, String id, java.util.function.UnaryOperator<GroupClass> change) {
         List<GroupClass> gs = new ArrayList<>();
         for (GroupClass g : t.groups()) {
-            gs.add(g.id().equals(id) ? g.withPka(pka, refId) : g);
+            gs.add(g.id().equals(id) ? change.apply(g) : g);
         }
         return t.withGroups(gs);
     }
 
-    private static AcidityTable withRho(AcidityTable t, String id, double rho, String refId) {
-        List<GroupClass> gs = new ArrayList<>();
-        for (GroupClass g : t.groups()) {
-            gs.add(g.id().equals(id) ? g.withRho(rho, refId) : g);
-        }
-        return t.withGroups(gs);
+    /** Loss over the class's compounds plus the prior, for one table. */
+    private double objective(AcidityTable t, String id, List<Observation> obs, double[] origin0) {
+        return loss(new Engine(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2]);
     }
 
-    private static AcidityTable withAttenuation(AcidityTable t, String id, double att, String refId) {
-        List<GroupClass> gs = new ArrayList<>();
-        for (GroupClass g : t.groups()) {
-            gs.add(g.id().equals(id) ? g.withAttenuation(att, refId) : g);
+    /**
+     * The trial with the lowest objective when it beats {@code best[0]} (which is then lowered to it),
+     * else {@code current}.
+     */
+    private AcidityTable better(AcidityTable current, List<AcidityTable> trials, String id, List<Observation> obs,
+            double[] origin0, double[] best) {
+        AcidityTable chosen = current;
+        for (AcidityTable trial : trials) {
+            double l = objective(trial, id, obs, origin0);
+            if (l < best[0] - 1e-9) {
+                best[0] = l;
+                chosen = trial;
+            }
         }
-        return t.withGroups(gs);
+        return chosen;
     }
 
     private static double round(double v) {
