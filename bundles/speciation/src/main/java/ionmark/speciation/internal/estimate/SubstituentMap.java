@@ -42,8 +42,7 @@ final class SubstituentMap {
             return hits;
         }
         hits = new ArrayList<>();
-        Integer z = target.atom(atom).getAtomicNumber();
-        for (CompiledTable.Sub s : table.substituentsRootedAt(z == null ? 0 : z)) {
+        for (CompiledTable.Sub s : table.substituentsRootedAt(target.atomicNumber(atom))) {
             Set<Set<Integer>> seen = new HashSet<>();
             List<Hit> found = hits;
             s.pattern().forEach(target, atom, m -> {

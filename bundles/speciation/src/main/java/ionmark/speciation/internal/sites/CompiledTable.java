@@ -34,10 +34,9 @@ public final class CompiledTable {
     private final AcidityTable table;
     private final List<Group> groups;
     private final List<Sub> substituents;
-    private final Map<Integer, List<Group>> groupsByElement;
-    private final List<Group> groupsAnyElement;
-    private final Map<Integer, List<Sub>> subsByElement;
-    private final List<Sub> subsAnyElement;
+    /** Indexed by atomic number; elements no root names share the list of unconfined roots. */
+    private final List<List<Group>> groupsByElement;
+    private final List<List<Sub>> subsByElement;
 
     public CompiledTable(AcidityTable table) {
         this.table = table;
@@ -80,10 +79,10 @@ public final class CompiledTable {
         }
         s.sort(Comparator.comparingInt((Sub x) -> -x.size()).thenComparingInt(Sub::order));
         this.substituents = List.copyOf(s);
-        this.groupsByElement = byRootElement(this.groups, Group::pattern);
-        this.groupsAnyElement = anyRootElement(this.groups, Group::pattern);
-        this.subsByElement = byRootElement(this.substituents, Sub::pattern);
-        this.subsAnyElement = anyRootElement(this.substituents, Sub::pattern);
+        this.groupsByElement = byAtomicNumber(byRootElement(this.groups, Group::pattern),
+                anyRootElement(this.groups, Group::pattern));
+        this.subsByElement = byAtomicNumber(byRootElement(this.substituents, Sub::pattern),
+                anyRootElement(this.substituents, Sub::pattern));
     }
 
     /**
@@ -123,14 +122,24 @@ public final class CompiledTable {
         return List.copyOf(l);
     }
 
+    private static final int ELEMENTS = 119;
+
+    private static <T> List<List<T>> byAtomicNumber(Map<Integer, List<T>> named, List<T> any) {
+        List<List<T>> out = new ArrayList<>(ELEMENTS);
+        for (int z = 0; z < ELEMENTS; z++) {
+            out.add(named.getOrDefault(z, any));
+        }
+        return List.copyOf(out);
+    }
+
     /** The classes whose site can be an atom of this element, most specific first. */
     public List<Group> groupsRootedAt(int atomicNumber) {
-        return groupsByElement.getOrDefault(atomicNumber, groupsAnyElement);
+        return groupsByElement.get(atomicNumber >= 0 && atomicNumber < ELEMENTS ? atomicNumber : 0);
     }
 
     /** The substituents whose attachment atom can be of this element, most specific first. */
     public List<Sub> substituentsRootedAt(int atomicNumber) {
-        return subsByElement.getOrDefault(atomicNumber, subsAnyElement);
+        return subsByElement.get(atomicNumber >= 0 && atomicNumber < ELEMENTS ? atomicNumber : 0);
     }
 
     public AcidityTable table() {

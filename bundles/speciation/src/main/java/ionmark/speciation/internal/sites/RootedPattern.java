@@ -14,7 +14,7 @@ import org.openscience.cdk.isomorphism.matchers.Expr;
 import org.openscience.cdk.isomorphism.matchers.IQueryAtom;
 import org.openscience.cdk.isomorphism.matchers.IQueryBond;
 import org.openscience.cdk.isomorphism.matchers.QueryAtom;
-import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
+import org.openscience.cdk.isomorphism.matchers.QueryBond;
 import org.openscience.cdk.smarts.Smarts;
 
 /**
@@ -28,9 +28,10 @@ import org.openscience.cdk.smarts.Smarts;
  * root, in breadth-first order over the query.
  *
  * <p>Every SMARTS primitive is evaluated by CDK ({@link Expr#matches}), so it means what it means
- * in CDK's matcher; only the and/or/not logic above the primitives is walked here, so that a
- * recursive SMARTS shared by several patterns is matched once per molecule atom (a memo in
- * {@link Target}). The molecule must have been prepared once ({@code SmartsPattern.prepare});
+ * in CDK's matcher; only the and/or/not logic above the primitives is walked here. A recursive
+ * SMARTS is compiled into a rooted pattern of its own (CDK's meaning: a mapping with the
+ * subquery's first atom on the atom) and, shared by several patterns, matched once per molecule
+ * atom (a memo in {@link Target}). The molecule must have been prepared once ({@code SmartsPattern.prepare});
  * nothing is prepared here. The pattern is immutable and thread-safe; a {@link Target} belongs to
  * one thread.
  */
@@ -51,10 +52,13 @@ public final class RootedPattern {
     private final int[][] closeTo;
     private final IQueryBond[][] closeBond;
     private final Set<Integer> rootElements;
-    /** Per query atom: its expression with recursive parts numbered for the per-molecule memo, or null. */
-    private final Node[] trees;
+    /** Per query atom: its compiled expression, or null when CDK matches the atom. */
+    private final Expression[] trees;
+    /** Compiled {@link #parentBond} and {@link #closeBond} expressions, or null where CDK matches. */
+    private final Expression[] parentTest;
+    private final Expression[][] closeTest;
 
-    public RootedPattern(QueryAtomContainer q, int root) {
+    public RootedPattern(IAtomContainer q, int root) {
         this(q, root, new Recursions());
     }
 
@@ -62,7 +66,7 @@ public final class RootedPattern {
      * {@code recursions} is shared by every pattern of one table, so that a recursive SMARTS written
      * in several classes (say "not an amide nitrogen") is evaluated once per molecule atom.
      */
-    public RootedPattern(QueryAtomContainer q, int root, Recursions recursions) {
+    public RootedPattern(IAtomContainer q, int root, Recursions recursions) {
         int n = q.getAtomCount();
         if (root < 0 || root >= n) {
             throw new IllegalArgumentException("root " + root + " is not a query atom");
@@ -122,10 +126,21 @@ public final class RootedPattern {
             closeBond[i] = tb;
         }
         rootElements = atoms[root] instanceof QueryAtom qa ? elements(qa.getExpression()) : null;
-        trees = new Node[n];
+        trees = new Expression[n];
+        parentTest = new Expression[n];
+        closeTest = new Expression[n][];
         for (int i = 0; i < n; i++) {
-            trees[i] = atoms[i] instanceof QueryAtom qa ? Node.of(qa.getExpression(), recursions) : null;
+            trees[i] = atoms[i] instanceof QueryAtom qa ? Expression.atom(qa.getExpression(), recursions) : null;
+            parentTest[i] = bondTest(parentBond[i]);
+            closeTest[i] = new Expression[closeBond[i].length];
+            for (int c = 0; c < closeBond[i].length; c++) {
+                closeTest[i][c] = bondTest(closeBond[i][c]);
+            }
         }
+    }
+
+    private static Expression bondTest(IQueryBond b) {
+        return b instanceof QueryBond qb ? Expression.bond(qb.getExpression()) : null;
     }
 
     /**
@@ -138,12 +153,13 @@ public final class RootedPattern {
 
     /** The first mapping with the root on {@code atom}, or null. */
     public int[] first(Target t, int atom) {
-        int[][] found = new int[1][];
-        forEach(t, atom, m -> {
-            found[0] = m.clone();
-            return false;
-        });
-        return found[0];
+        if (!atomMatches(order[0], t, atom)) {
+            return null;
+        }
+        int[] map = new int[atoms.length];
+        map[order[0]] = atom;
+        // the search stops at the first whole mapping and leaves it in map
+        return order.length == 1 || !extend(t, 1, map, STOP) ? map : null;
     }
 
     /** Every mapping with the root on {@code atom}, in search order, until the visitor says stop. */
@@ -152,45 +168,70 @@ public final class RootedPattern {
             return;
         }
         int[] map = new int[atoms.length];
-        boolean[] used = new boolean[t.atoms.length];
         map[order[0]] = atom;
-        used[atom] = true;
-        extend(t, 1, map, used, v);
+        extend(t, 1, map, v);
+    }
+
+    private static final Visitor STOP = m -> false;
+
+    /** Whether some mapping puts the root on {@code atom}. */
+    public boolean matchesAt(Target t, int atom) {
+        if (!atomMatches(order[0], t, atom)) {
+            return false;
+        }
+        if (order.length == 1) {
+            return true;
+        }
+        int[] map = new int[atoms.length];
+        map[order[0]] = atom;
+        return !extend(t, 1, map, STOP);
     }
 
     /** Returns false when the visitor asked to stop. */
-    private boolean extend(Target t, int i, int[] map, boolean[] used, Visitor v) {
+    private boolean extend(Target t, int i, int[] map, Visitor v) {
         if (i == order.length) {
             return v.visit(map);
         }
         int qa = order[i];
         int from = map[parent[i]];
         int[] nbrs = t.adj[from];
-        IBond[] bonds = t.bonds[from];
+        int[] bonds = t.bondIndex[from];
         for (int k = 0; k < nbrs.length; k++) {
             int x = nbrs[k];
-            if (used[x] || !parentBond[i].matches(bonds[k]) || !atomMatches(qa, t, x) || !closes(t, i, map, x)) {
+            if (placed(map, i, x) || !bondMatches(parentTest[i], parentBond[i], t, bonds[k]) || !atomMatches(qa, t, x)
+                    || !closes(t, i, map, x)) {
                 continue;
             }
             map[qa] = x;
-            used[x] = true;
-            boolean go = extend(t, i + 1, map, used, v);
-            used[x] = false;
-            if (!go) {
+            if (!extend(t, i + 1, map, v)) {
                 return false;
             }
         }
         return true;
     }
 
+    /** Whether molecule atom {@code x} already holds one of the first {@code i} query atoms. */
+    private boolean placed(int[] map, int i, int x) {
+        for (int j = 0; j < i; j++) {
+            if (map[order[j]] == x) {
+                return true;
+            }
+        }
+        return false;
+    }
+
     private boolean atomMatches(int q, Target t, int atom) {
-        return trees[q] != null ? trees[q].matches(t, atom) : atoms[q].matches(t.atoms[atom]);
+        return trees[q] != null ? trees[q].matchesAtom(t, atom) : atoms[q].matches(t.atoms[atom]);
+    }
+
+    private static boolean bondMatches(Expression test, IQueryBond query, Target t, int bond) {
+        return test != null ? test.matchesBond(t, bond) : query.matches(t.bondObjects[bond]);
     }
 
     private boolean closes(Target t, int i, int[] map, int x) {
         for (int c = 0; c < closeTo[i].length; c++) {
-            IBond b = t.bond(x, map[closeTo[i][c]]);
-            if (b == null || !closeBond[i][c].matches(b)) {
+            int b = t.bond(x, map[closeTo[i][c]]);
+            if (b < 0 || !bondMatches(closeTest[i][c], closeBond[i][c], t, b)) {
                 return false;
             }
         }
@@ -246,9 +287,13 @@ public final class RootedPattern {
         return b;
     }
 
-    /** Numbers recursive SMARTS by their text, so equal ones share one memo slot per molecule. */
+    /**
+     * Numbers recursive SMARTS by their text, so equal ones share one memo slot per molecule, and
+     * holds each one compiled as a pattern rooted at its first atom.
+     */
     public static final class Recursions {
         private final Map<String, Integer> ids = new HashMap<>();
+        private final Map<Integer, RootedPattern> compiled = new HashMap<>();
 
         synchronized int id(Expr recursive) {
             String text;
@@ -257,100 +302,139 @@ public final class RootedPattern {
             } catch (RuntimeException e) {
                 text = "#" + System.identityHashCode(recursive);
             }
-            return ids.computeIfAbsent(text, k -> ids.size());
+            Integer known = ids.get(text);
+            if (known != null) {
+                return known;
+            }
+            int id = ids.size();
+            ids.put(text, id);
+            return id;
+        }
+
+        /**
+         * {@code $(...)} holds on an atom when its query has a mapping with the query's first atom on
+         * that atom: CDK's meaning, found here by the same rooted search. Null when the subquery cannot
+         * be compiled (not connected); then CDK matches it.
+         */
+        synchronized RootedPattern pattern(int id, Expr recursive) {
+            if (!compiled.containsKey(id)) {
+                RootedPattern p;
+                try {
+                    p = recursive.subquery() == null || recursive.subquery().getAtomCount() == 0 ? null
+                            : new RootedPattern(recursive.subquery(), 0, this);
+                } catch (IllegalArgumentException e) {
+                    p = null;
+                }
+                compiled.put(id, p);
+            }
+            return compiled.get(id);
         }
     }
 
     /**
-     * An atom expression as a tree whose logic is evaluated here and whose leaves are CDK's: a
-     * recursive leaf is looked up in the molecule's memo before it is matched.
+     * A prepared molecule as arrays: atoms, neighbour lists, the bond to each neighbour, and the atom and
+     * bond invariants that compiled expressions read.
      */
-    private record Node(Expr.Type op, Expr leaf, Node left, Node right, int recursion) {
-        static Node of(Expr e, Recursions r) {
-            if (e == null || !plain(e)) {
-                return null;
-            }
-            return build(e, r);
-        }
-
-        private static Node build(Expr e, Recursions r) {
-            switch (e.type()) {
-                case AND:
-                case OR:
-                    return new Node(e.type(), null, build(e.left(), r), build(e.right(), r), -1);
-                case NOT:
-                    return new Node(e.type(), null, build(e.left(), r), null, -1);
-                case RECURSIVE:
-                    return new Node(e.type(), e, null, null, r.id(e));
-                default:
-                    return new Node(e.type(), e, null, null, -1);
-            }
-        }
-
-        /** No stereo primitives: CDK's NOT has a special case for them that this tree does not copy. */
-        private static boolean plain(Expr e) {
-            if (e == null) {
-                return true;
-            }
-            if (e.type() == Expr.Type.STEREOCHEMISTRY) {
-                return false;
-            }
-            return e.type() == Expr.Type.RECURSIVE || plain(e.left()) && plain(e.right());
-        }
-
-        boolean matches(Target t, int atom) {
-            switch (op) {
-                case AND:
-                    return left.matches(t, atom) && right.matches(t, atom);
-                case OR:
-                    return left.matches(t, atom) || right.matches(t, atom);
-                case NOT:
-                    return !left.matches(t, atom);
-                case RECURSIVE:
-                    return t.recursive(recursion, atom, leaf);
-                default:
-                    return leaf.matches(t.atoms[atom]);
-            }
-        }
-    }
-
-    /** A prepared molecule as arrays: atoms, neighbour lists and the bond to each neighbour. */
     public static final class Target {
         final IAtom[] atoms;
         final int[][] adj;
-        final IBond[][] bonds;
+        /** For adj[u][k]: the index of that bond. */
+        final int[][] bondIndex;
+        final IBond[] bondObjects;
+        /** Atomic number, -1 when unset. */
+        final int[] z;
+        final boolean[] aromatic;
+        final boolean[] inRing;
+        /** Implicit hydrogens, -1 when unset. */
+        final int[] implicitH;
+        /** Implicit plus explicit hydrogens. */
+        final int[] totalH;
+        /** Formal charge, {@link Integer#MIN_VALUE} when unset. */
+        final int[] charge;
+        /** Implicit hydrogens plus the bond orders. */
+        final int[] valence;
+        final int[] ringBonds;
+        final int[] doubleBonds;
+        final int[] heteroNeighbours;
+        /** Bond order as a number, 0 when unset. */
+        final int[] order;
+        final boolean[] bondAromatic;
+        final boolean[] bondInRing;
         /** Outcomes of recursive SMARTS by recursion number and atom: 0 not yet known, 1 no, 2 yes. */
         private byte[][] memo = new byte[16][];
 
         public Target(IAtomContainer mol) {
             int n = mol.getAtomCount();
+            int nb = mol.getBondCount();
             atoms = new IAtom[n];
+            z = new int[n];
+            aromatic = new boolean[n];
+            inRing = new boolean[n];
+            implicitH = new int[n];
+            totalH = new int[n];
+            charge = new int[n];
+            valence = new int[n];
+            ringBonds = new int[n];
+            doubleBonds = new int[n];
+            heteroNeighbours = new int[n];
             int[] deg = new int[n];
             for (int i = 0; i < n; i++) {
-                atoms[i] = mol.getAtom(i);
+                IAtom a = mol.getAtom(i);
+                atoms[i] = a;
+                Integer zi = a.getAtomicNumber();
+                z[i] = zi == null ? -1 : zi;
+                aromatic[i] = a.isAromatic();
+                inRing[i] = a.isInRing();
+                Integer h = a.getImplicitHydrogenCount();
+                implicitH[i] = h == null ? -1 : h;
+                totalH[i] = h == null ? 0 : h;
+                valence[i] = h == null ? 0 : h;
+                Integer q = a.getFormalCharge();
+                charge[i] = q == null ? Integer.MIN_VALUE : q;
             }
-            for (IBond b : mol.bonds()) {
-                deg[b.getBegin().getIndex()]++;
-                deg[b.getEnd().getIndex()]++;
+            bondObjects = new IBond[nb];
+            order = new int[nb];
+            bondAromatic = new boolean[nb];
+            bondInRing = new boolean[nb];
+            for (int j = 0; j < nb; j++) {
+                IBond b = mol.getBond(j);
+                bondObjects[j] = b;
+                order[j] = b.getOrder() == null ? 0 : b.getOrder().numeric();
+                bondAromatic[j] = b.isAromatic();
+                bondInRing[j] = b.isInRing();
+                int u = b.getBegin().getIndex();
+                int w = b.getEnd().getIndex();
+                deg[u]++;
+                deg[w]++;
+                for (int end : new int[] {u, w}) {
+                    int other = end == u ? w : u;
+                    valence[end] += order[j];
+                    ringBonds[end] += bondInRing[j] ? 1 : 0;
+                    doubleBonds[end] += b.getOrder() == IBond.Order.DOUBLE ? 1 : 0;
+                    totalH[end] += z[other] == 1 ? 1 : 0;
+                    heteroNeighbours[end] += z[other] != 6 && z[other] != 1 ? 1 : 0;
+                }
             }
             adj = new int[n][];
-            bonds = new IBond[n][];
+            bondIndex = new int[n][];
             for (int i = 0; i < n; i++) {
                 adj[i] = new int[deg[i]];
-                bonds[i] = new IBond[deg[i]];
+                bondIndex[i] = new int[deg[i]];
                 deg[i] = 0;
             }
-            for (IBond b : mol.bonds()) {
+            for (int j = 0; j < nb; j++) {
+                IBond b = bondObjects[j];
                 int u = b.getBegin().getIndex();
                 int w = b.getEnd().getIndex();
                 adj[u][deg[u]] = w;
-                bonds[u][deg[u]++] = b;
+                bondIndex[u][deg[u]++] = j;
                 adj[w][deg[w]] = u;
-                bonds[w][deg[w]++] = b;
+                bondIndex[w][deg[w]++] = j;
             }
         }
 
-        boolean recursive(int id, int atom, Expr e) {
+        boolean recursive(Expression e, int atom) {
+            int id = e.recursion;
             if (id >= memo.length) {
                 memo = Arrays.copyOf(memo, Math.max(id + 1, memo.length * 2));
             }
@@ -359,7 +443,8 @@ public final class RootedPattern {
                 m = memo[id] = new byte[atoms.length];
             }
             if (m[atom] == 0) {
-                m[atom] = (byte) (e.matches(atoms[atom]) ? 2 : 1);
+                boolean hit = e.sub != null ? e.sub.matchesAt(this, atom) : e.cdk.matches(atoms[atom]);
+                m[atom] = (byte) (hit ? 2 : 1);
             }
             return m[atom] == 2;
         }
@@ -368,18 +453,24 @@ public final class RootedPattern {
             return atoms[i];
         }
 
+        /** Atomic number of atom {@code i}, 0 when unset. */
+        public int atomicNumber(int i) {
+            return Math.max(0, z[i]);
+        }
+
         public int atomCount() {
             return atoms.length;
         }
 
-        IBond bond(int u, int w) {
+        /** The index of the bond between {@code u} and {@code w}, or -1. */
+        int bond(int u, int w) {
             int[] nb = adj[u];
             for (int k = 0; k < nb.length; k++) {
                 if (nb[k] == w) {
-                    return bonds[u][k];
+                    return bondIndex[u][k];
                 }
             }
-            return null;
+            return -1;
         }
     }
 }

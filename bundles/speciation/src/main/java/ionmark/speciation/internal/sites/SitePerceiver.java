@@ -2,6 +2,7 @@ package ionmark.speciation.internal.sites;
 
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -29,8 +30,9 @@ public final class SitePerceiver {
     public static List<PerceivedSite> perceive(CompiledTable table, RootedPattern.Target target) {
         List<PerceivedSite> out = new ArrayList<>();
         for (int atom = 0; atom < target.atomCount(); atom++) {
-            Integer z = target.atom(atom).getAtomicNumber();
-            for (CompiledTable.Group g : table.groupsRootedAt(z == null ? 0 : z)) {
+            List<CompiledTable.Group> candidates = table.groupsRootedAt(target.atomicNumber(atom));
+            for (int c = 0; c < candidates.size(); c++) {
+                CompiledTable.Group g = candidates.get(c);
                 int[] m = g.pattern().first(target, atom);
                 if (m == null) {
                     continue;
@@ -41,7 +43,7 @@ public final class SitePerceiver {
                 }
                 int[] centres = g.centres().length == 0 ? new int[] {atom}
                         : Arrays.stream(g.centres()).map(k -> m[k]).distinct().toArray();
-                out.add(new PerceivedSite(atom, g.group(), Set.copyOf(core), centres));
+                out.add(new PerceivedSite(atom, g.group(), Collections.unmodifiableSet(core), centres));
                 break;
             }
         }
