@@ -8,7 +8,8 @@ import java.util.Map;
  * {@link #error()} and empty lists; it never throws.
  *
  * @param input          the text as given
- * @param smiles         the parent structure analysed, in its reference protonation
+ * @param smiles         the parent structure analysed, in its reference protonation; in a brief analysis,
+ *                       the input SMILES itself when it already was that parent unchanged
  * @param stripped       components removed from a mixture or salt
  * @param sites          titratable and permanent sites
  * @param macroPka       macroscopic pKa values, ascending

@@ -279,9 +279,9 @@ public final class Engine {
                 out.add(s);
                 continue;
             }
-            out.add(s.shifted(shift[idx], new Term(String.format(Locale.ROOT,
-                    "measured compound %s: macroscopic pKa %s at %.0f °C (%s); site value set to reproduce it",
-                    m.name(), m.pka(), m.temperature(), m.method()), shift[idx], table.table().citation(m.source())),
+            out.add(s.shifted(shift[idx], new Term("measured compound " + m.name() + ": macroscopic pKa "
+                    + m.pka() + " at " + Math.round(m.temperature()) + " °C (" + m.method()
+                    + "); site value set to reproduce it", shift[idx], table.table().citation(m.source())),
                     "measured", 0.05));
         }
         return out;
@@ -522,7 +522,7 @@ public final class Engine {
             windows(p, neutralWindows, chargedWindows);
         }
         warnings.add(CAUTION);
-        return new Analysis(input, p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
+        return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
                 chargeStates, species, brief ? null : isoelectricPoint(p), logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
                 null);
     }

@@ -56,9 +56,12 @@ public final class LferEstimator {
     public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, RootedPattern.Target target,
             List<PerceivedSite> sites) {
         SubstituentMap subs = new SubstituentMap(table, target);
-        int[][] rings = Cycles.sssr(mol).paths();
+        int[][] rings = null; // found when the first Hammett site asks
         List<EstimatedSite> out = new ArrayList<>();
         for (PerceivedSite s : sites) {
+            if (rings == null && s.group().relation() == Relation.HAMMETT) {
+                rings = Cycles.sssr(mol).paths();
+            }
             out.add(estimate(table.table(), mol, subs, rings, s));
         }
         return out;

@@ -37,15 +37,59 @@ public final class StructureReader {
         this.maxHeavyAtoms = maxHeavyAtoms;
     }
 
-    /** A parent structure ready for perception. */
-    public record Prepared(IAtomContainer molecule, String smiles, List<String> stripped, List<String> notes) {
+    /**
+     * A parent structure ready for perception. Its SMILES is written only when asked for: the brief
+     * analysis does without it when the input SMILES already is the parent, unchanged.
+     */
+    public static final class Prepared {
+        private final IAtomContainer molecule;
+        private final String asRead;
+        private final List<String> stripped;
+        private final List<String> notes;
+        private String smiles;
+
+        Prepared(IAtomContainer molecule, String asRead, List<String> stripped, List<String> notes) {
+            this.molecule = molecule;
+            this.asRead = asRead;
+            this.stripped = List.copyOf(stripped);
+            this.notes = List.copyOf(notes);
+        }
+
+        public IAtomContainer molecule() {
+            return molecule;
+        }
+
+        /** The parent as SMILES, written by CDK from the prepared molecule (aromatic symbols, stereo). */
+        public String smiles() {
+            if (smiles == null) {
+                smiles = StructureReader.smiles(molecule);
+            }
+            return smiles;
+        }
+
+        /**
+         * The input SMILES itself when it was read as SMILES, had one component and needed no
+         * normalisation (so it denotes the parent exactly); otherwise {@link #smiles()}.
+         */
+        public String smilesAsRead() {
+            return asRead != null ? asRead : smiles();
+        }
+
+        public List<String> stripped() {
+            return stripped;
+        }
+
+        public List<String> notes() {
+            return notes;
+        }
     }
 
     public Prepared read(String text) throws StructureException {
         if (text == null || text.isBlank()) {
             throw new StructureException("empty input: give a SMILES, a molfile or an SDF record");
         }
-        IAtomContainer mol = looksLikeMolfile(text) ? readMolfile(text) : readSmiles(text.strip());
+        boolean molfile = looksLikeMolfile(text);
+        IAtomContainer mol = molfile ? readMolfile(text) : readSmiles(text.strip());
         List<String> notes = new ArrayList<>();
         AtomContainerManipulator.suppressHydrogens(mol);
         for (IAtom a : mol.atoms()) {
@@ -62,7 +106,8 @@ public final class StructureReader {
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
-        return new Prepared(mol, smiles(mol), stripped, notes);
+        String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
+        return new Prepared(mol, asRead, stripped, notes);
     }
 
     static boolean looksLikeMolfile(String text) {
@@ -73,10 +118,14 @@ public final class StructureReader {
     private static final ThreadLocal<SmilesParser> PARSER = ThreadLocal
             .withInitial(() -> new SmilesParser(SilentChemObjectBuilder.getInstance()));
 
-    private static IAtomContainer readSmiles(String smi) throws StructureException {
+    private static String firstToken(String smi) {
         String first = smi.lines().findFirst().orElse("").strip();
         int ws = indexOfWhitespace(first);
-        String s = ws < 0 ? first : first.substring(0, ws);
+        return ws < 0 ? first : first.substring(0, ws);
+    }
+
+    private static IAtomContainer readSmiles(String smi) throws StructureException {
+        String s = firstToken(smi);
         try {
             return PARSER.get().parseSmiles(s);
         } catch (InvalidSmilesException e) {
