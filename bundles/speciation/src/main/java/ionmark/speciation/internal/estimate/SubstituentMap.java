@@ -42,7 +42,7 @@ final class SubstituentMap {
             return hits;
         }
         hits = new ArrayList<>();
-        for (CompiledTable.Sub s : table.substituentsRootedAt(target.atomicNumber(atom))) {
+        for (CompiledTable.Sub s : table.substituentsAt(target, atom)) {
             Set<Set<Integer>> seen = new HashSet<>();
             List<Hit> found = hits;
             s.pattern().forEach(target, atom, m -> {

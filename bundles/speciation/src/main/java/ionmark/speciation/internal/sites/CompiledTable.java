@@ -132,6 +132,45 @@ public final class CompiledTable {
         return List.copyOf(out);
     }
 
+    /** Candidate lists by atom signature; atoms of one signature pass the same root screens. */
+    private final Map<Long, List<Group>> groupsBySignature = new java.util.concurrent.ConcurrentHashMap<>();
+    private final Map<Long, List<Sub>> subsBySignature = new java.util.concurrent.ConcurrentHashMap<>();
+    /** Distinct signatures are few in practice; past this many, lists are filtered per atom instead. */
+    private static final int MAX_SIGNATURES = 20_000;
+
+    /**
+     * The classes whose site may be atom {@code atom}, most specific first: those rooted at its
+     * element whose root passes the screen on the atom's own invariants. Kept per signature.
+     */
+    public List<Group> groupsAt(RootedPattern.Target t, int atom) {
+        return screened(groupsBySignature, groupsRootedAt(t.atomicNumber(atom)), Group::pattern, t, atom);
+    }
+
+    /** The substituents that may attach by atom {@code atom}, most specific first; as {@link #groupsAt}. */
+    public List<Sub> substituentsAt(RootedPattern.Target t, int atom) {
+        return screened(subsBySignature, substituentsRootedAt(t.atomicNumber(atom)), Sub::pattern, t, atom);
+    }
+
+    private static <T> List<T> screened(Map<Long, List<T>> cache, List<T> all, Function<T, RootedPattern> p,
+            RootedPattern.Target t, int atom) {
+        long key = Expression.signature(t, atom);
+        List<T> known = key < 0 ? null : cache.get(key);
+        if (known != null) {
+            return known;
+        }
+        List<T> out = new ArrayList<>();
+        for (T x : all) {
+            if (p.apply(x).rootMayMatch(t, atom)) {
+                out.add(x);
+            }
+        }
+        out = List.copyOf(out);
+        if (key >= 0 && cache.size() < MAX_SIGNATURES) {
+            cache.put(key, out);
+        }
+        return out;
+    }
+
     /** The classes whose site can be an atom of this element, most specific first. */
     public List<Group> groupsRootedAt(int atomicNumber) {
         return groupsByElement.get(atomicNumber >= 0 && atomicNumber < ELEMENTS ? atomicNumber : 0);

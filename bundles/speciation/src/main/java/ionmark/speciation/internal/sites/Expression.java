@@ -154,6 +154,78 @@ final class Expression {
         }
     }
 
+    /**
+     * A necessary condition for this atom expression that reads only the atom's own invariants (the
+     * ones {@link #signature} packs), or null when nothing is necessary beyond "any atom". Recursive
+     * and CDK-evaluated leaves are dropped from conjunctions; a disjunction or negation that needs one
+     * of them gives no condition.
+     */
+    Expression screen() {
+        switch (op) {
+            case AND: {
+                Expression l = left.screen();
+                Expression r = right.screen();
+                return l == null ? r : r == null ? l : new Expression(AND, 0, l, r, null, -1, null);
+            }
+            case OR: {
+                Expression l = left.screen();
+                Expression r = right.screen();
+                return l == null || r == null ? null : new Expression(OR, 0, l, r, null, -1, null);
+            }
+            case NOT:
+                return left.local() ? this : null;
+            case RECURSIVE:
+            case OTHER:
+                return null;
+            default:
+                return this;
+        }
+    }
+
+    /** Whether the whole expression reads only the atom's own invariants. */
+    private boolean local() {
+        switch (op) {
+            case AND:
+            case OR:
+                return left.local() && right.local();
+            case NOT:
+                return left.local();
+            case RECURSIVE:
+            case OTHER:
+                return false;
+            default:
+                return true;
+        }
+    }
+
+    /**
+     * The invariants of atom {@code a} that {@link #screen() screens} read, packed into one number, or
+     * -1 when one of them is outside the packed range: two atoms with the same signature pass the same
+     * screens.
+     */
+    static long signature(RootedPattern.Target t, int a) {
+        long key = 0;
+        key = pack(key, t.z[a] + 1, 8);
+        key = pack(key, t.aromatic[a] ? 1 : 0, 1);
+        key = pack(key, t.inRing[a] ? 1 : 0, 1);
+        key = pack(key, t.implicitH[a] + 1, 4);
+        key = pack(key, t.totalH[a], 4);
+        key = pack(key, t.adj[a].length, 4);
+        key = pack(key, t.charge[a] == Integer.MIN_VALUE ? 15 : t.charge[a] + 7, 4);
+        key = pack(key, t.valence[a], 5);
+        key = pack(key, t.ringBonds[a], 4);
+        key = pack(key, t.doubleBonds[a], 3);
+        key = pack(key, t.heteroNeighbours[a], 4);
+        return key;
+    }
+
+    private static long pack(long key, int v, int bits) {
+        if (key < 0 || v < 0 || v >= (1 << bits)) {
+            return -1;
+        }
+        return key << bits | v;
+    }
+
     /** Whether molecule atom {@code a} of {@code t} matches. */
     boolean matchesAtom(RootedPattern.Target t, int a) {
         switch (op) {

@@ -57,6 +57,8 @@ public final class RootedPattern {
     /** Compiled {@link #parentBond} and {@link #closeBond} expressions, or null where CDK matches. */
     private final Expression[] parentTest;
     private final Expression[][] closeTest;
+    /** {@link Expression#screen()} of the root's expression; null when any atom may be the root. */
+    private final Expression rootScreen;
 
     public RootedPattern(IAtomContainer q, int root) {
         this(q, root, new Recursions());
@@ -137,6 +139,16 @@ public final class RootedPattern {
                 closeTest[i][c] = bondTest(closeBond[i][c]);
             }
         }
+        rootScreen = trees[root] == null ? null : trees[root].screen();
+    }
+
+    /**
+     * A necessary condition on the root atom that reads only that atom's own invariants: atoms with
+     * the same {@link Expression#signature} get the same answer. False means no mapping can put the
+     * root there; true means there may be one.
+     */
+    boolean rootMayMatch(Target t, int atom) {
+        return rootScreen == null || rootScreen.matchesAtom(t, atom);
     }
 
     private static Expression bondTest(IQueryBond b) {

@@ -175,4 +175,33 @@ class RootedPatternTest {
         }
         assertTrue(hits > 10_000, "matches compared: " + hits);
     }
+
+    /**
+     * The per-signature candidate lists may leave a class or substituent out only where it cannot
+     * match: every rooted match on the reference set must come from a candidate.
+     */
+    @Test
+    void candidateListsKeepEveryPatternThatMatches() throws Exception {
+        int checked = 0;
+        for (IAtomContainer mol : referenceMolecules()) {
+            RootedPattern.Target t = new RootedPattern.Target(mol);
+            for (int a = 0; a < mol.getAtomCount(); a++) {
+                List<CompiledTable.Group> groups = TABLE.groupsAt(t, a);
+                for (CompiledTable.Group g : TABLE.groupsRootedAt(t.atomicNumber(a))) {
+                    if (g.pattern().first(t, a) != null) {
+                        assertTrue(groups.contains(g), g.group().id() + " on " + mol.getTitle() + " atom " + a);
+                        checked++;
+                    }
+                }
+                List<CompiledTable.Sub> subs = TABLE.substituentsAt(t, a);
+                for (CompiledTable.Sub s : TABLE.substituentsRootedAt(t.atomicNumber(a))) {
+                    if (s.pattern().first(t, a) != null) {
+                        assertTrue(subs.contains(s), s.substituent().id() + " on " + mol.getTitle() + " atom " + a);
+                        checked++;
+                    }
+                }
+            }
+        }
+        assertTrue(checked > 1000, "matches checked: " + checked);
+    }
 }
