@@ -10,7 +10,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 
-import org.openscience.cdk.graph.GraphUtil;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.qsar.descriptors.molecular.JPlogPDescriptor;
@@ -106,12 +105,13 @@ public final class Engine {
         StructureReader.Prepared prep = reader.read(input);
         IAtomContainer mol = prep.molecule();
         RootedPattern.Target target = new RootedPattern.Target(mol);
+        int[][] adj = target.adjacency();
         List<PerceivedSite> perceived = SitePerceiver.perceive(table, target);
         List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(mol);
         if (measured.isPresent()) {
-            est = fitToMeasured(mol, est, measured.get());
+            est = fitToMeasured(mol, adj, est, measured.get());
         } else {
             // the fingerprint only when some site's class has a measured analog to compare with
             if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
@@ -120,10 +120,10 @@ public final class Engine {
             }
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
-        SiteModel model = model(mol, est, c);
+        SiteModel model = model(adj, est, c);
         double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
         final List<EstimatedSite> sitesNow = est;
-        List<Double> measuredHere = measured.map(m -> atConditions(m, mol, sitesNow, poly)).orElse(List.of());
+        List<Double> measuredHere = measured.map(m -> atConditions(m, adj, sitesNow, poly)).orElse(List.of());
         return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
     }
 
@@ -132,9 +132,9 @@ public final class Engine {
      * the matching constant between 25 °C, I = 0 and the stated temperature and ionic strength
      * (van 't Hoff per class enthalpy, Davies). Exact at standard conditions.
      */
-    private List<Double> atConditions(MeasuredCompound m, IAtomContainer mol, List<EstimatedSite> est, double[] poly) {
+    private List<Double> atConditions(MeasuredCompound m, int[][] adj, List<EstimatedSite> est, double[] poly) {
         List<Double> here = MacroConstants.of(poly);
-        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(mol, est, Conditions.noPh()),
+        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(adj, est, Conditions.noPh()),
                 table.table().interaction().cutoff()));
         if (here.size() != std.size() || here.size() < m.pka().size()) {
             return m.pka();
@@ -197,7 +197,8 @@ public final class Engine {
      * ones. The k measured values are given to the k sites (in pKa order) whose estimates lie
      * closest to them; the shifts are found by damped Gauss–Newton on the macroscopic constants.
      */
-    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, List<EstimatedSite> est, MeasuredCompound m) {
+    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, int[][] adj, List<EstimatedSite> est,
+            MeasuredCompound m) {
         List<EstimatedSite> titr = new ArrayList<>(est.stream().filter(s -> !s.site().group().permanent()).toList());
         int k = m.pka().size();
         if (titr.size() < k || k == 0) {
@@ -218,7 +219,7 @@ public final class Engine {
         }
         List<EstimatedSite> fitted = titr.subList(bestStart, bestStart + k);
         // topologically equivalent sites share one shift (phosphoric acid's three O-H stay equal)
-        long[] sym = org.openscience.cdk.graph.invariant.Canon.symmetry(mol, GraphUtil.toAdjList(mol));
+        long[] sym = org.openscience.cdk.graph.invariant.Canon.symmetry(mol, adj);
         List<Long> classes = new ArrayList<>();
         int[] classOf = new int[k];
         for (int i = 0; i < k; i++) {
@@ -241,7 +242,7 @@ public final class Engine {
             shift[i] = param[classOf[i]];
         }
         for (int iter = 0; iter < 40; iter++) {
-            double[] r = residual(mol, est, titr, fitted, shift, m);
+            double[] r = residual(adj, est, titr, fitted, shift, m);
             double worst = Arrays.stream(r).map(Math::abs).max().orElse(0);
             if (worst < 1e-6) {
                 break;
@@ -254,7 +255,7 @@ public final class Engine {
                         trial[i] += 1e-4;
                     }
                 }
-                double[] rj = residual(mol, est, titr, fitted, trial, m);
+                double[] rj = residual(adj, est, titr, fitted, trial, m);
                 for (int i = 0; i < k; i++) {
                     jac[i][j] = (rj[i] - r[i]) / 1e-4;
                 }
@@ -287,14 +288,14 @@ public final class Engine {
         return out;
     }
 
-    private double[] residual(IAtomContainer mol, List<EstimatedSite> all, List<EstimatedSite> titr,
+    private double[] residual(int[][] adj, List<EstimatedSite> all, List<EstimatedSite> titr,
             List<EstimatedSite> fitted, double[] shift, MeasuredCompound m) {
         List<EstimatedSite> trial = new ArrayList<>();
         for (EstimatedSite s : all) {
             int idx = fitted.indexOf(s);
             trial.add(idx < 0 ? s : s.shifted(shift[idx], new Term("", 0, ""), "measured", 0));
         }
-        List<Double> macro = MacroConstants.of(model(mol, trial, Conditions.noPh()), table.table().interaction()
+        List<Double> macro = MacroConstants.of(model(adj, trial, Conditions.noPh()), table.table().interaction()
                 .cutoff());
         // compare the measured values with the macroscopic constants nearest in order
         int k = m.pka().size();
@@ -376,7 +377,7 @@ public final class Engine {
     }
 
     /** The numeric model at the conditions: corrected site pKa values and interactions from bond distances. */
-    private SiteModel model(IAtomContainer mol, List<EstimatedSite> est, Conditions c) {
+    private SiteModel model(int[][] adj, List<EstimatedSite> est, Conditions c) {
         List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
         List<EstimatedSite> perm = est.stream().filter(s -> s.site().group().permanent()).toList();
         int n = titr.size();
@@ -390,7 +391,7 @@ public final class Engine {
         }
         double[][] w = new double[n][n];
         double[] bg = new double[n];
-        int[][] dist = distances(mol, est);
+        int[][] dist = distances(adj, est);
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
                 if (i != j) {
@@ -412,28 +413,39 @@ public final class Engine {
     }
 
     /** Bond distances between site atoms: titratable sites first, then permanent ones. */
-    private static int[][] distances(IAtomContainer mol, List<EstimatedSite> est) {
-        List<Integer> atoms = new ArrayList<>();
-        est.stream().filter(s -> !s.site().group().permanent()).forEach(s -> atoms.add(s.site().atom()));
-        est.stream().filter(s -> s.site().group().permanent()).forEach(s -> atoms.add(s.site().atom()));
-        int[][] adj = GraphUtil.toAdjList(mol);
-        int[][] out = new int[atoms.size()][atoms.size()];
-        for (int i = 0; i < atoms.size(); i++) {
-            int[] d = new int[mol.getAtomCount()];
+    /** Bond distances between the sites' atoms: titratable sites first, then permanent ones. */
+    private static int[][] distances(int[][] adj, List<EstimatedSite> est) {
+        int k = est.size();
+        int[] atoms = new int[k];
+        int a = 0;
+        for (EstimatedSite s : est) {
+            if (!s.site().group().permanent()) {
+                atoms[a++] = s.site().atom();
+            }
+        }
+        for (EstimatedSite s : est) {
+            if (s.site().group().permanent()) {
+                atoms[a++] = s.site().atom();
+            }
+        }
+        int[][] out = new int[k][k];
+        int[] d = new int[adj.length];
+        int[] queue = new int[adj.length];
+        for (int i = 0; i < k; i++) {
             Arrays.fill(d, -1);
-            d[atoms.get(i)] = 0;
-            java.util.ArrayDeque<Integer> q = new java.util.ArrayDeque<>(List.of(atoms.get(i)));
-            while (!q.isEmpty()) {
-                int u = q.poll();
+            d[atoms[i]] = 0;
+            queue[0] = atoms[i];
+            for (int head = 0, tail = 1; head < tail; head++) {
+                int u = queue[head];
                 for (int v : adj[u]) {
                     if (d[v] < 0) {
                         d[v] = d[u] + 1;
-                        q.add(v);
+                        queue[tail++] = v;
                     }
                 }
             }
-            for (int j = 0; j < atoms.size(); j++) {
-                out[i][j] = d[atoms.get(j)];
+            for (int j = 0; j < k; j++) {
+                out[i][j] = d[atoms[j]];
             }
         }
         return out;

@@ -59,7 +59,7 @@ public final class LferEstimator {
         int[][] rings = null; // found when the first Hammett site asks
         List<EstimatedSite> out = new ArrayList<>();
         for (PerceivedSite s : sites) {
-            if (rings == null && s.group().relation() == Relation.HAMMETT) {
+            if (rings == null && s.group().relation() == Relation.HAMMETT && mol.getAtom(s.centres()[0]).isInRing()) {
                 rings = Cycles.sssr(mol).paths();
             }
             out.add(estimate(table.table(), mol, subs, rings, s));
@@ -88,7 +88,7 @@ public final class LferEstimator {
             PerceivedSite s, List<Term> terms) {
         GroupClass g = s.group();
         int centre = s.centres()[0];
-        int[] ring = ringOf(rings, centre);
+        int[] ring = rings == null ? null : ringOf(rings, centre); // null: the centre is in no ring
         if (ring == null) {
             return 0;
         }
@@ -194,6 +194,7 @@ public final class LferEstimator {
         }
         double sum = 0;
         List<String> parts = new ArrayList<>();
+        Set<Integer> forbidden = new HashSet<>(s.core());
         for (int c : s.centres()) {
             int[] dist = new int[mol.getAtomCount()];
             Arrays.fill(dist, -1);
@@ -218,9 +219,12 @@ public final class LferEstimator {
                         queue.add(x);
                         continue;
                     }
-                    Set<Integer> forbidden = new HashSet<>(s.core());
-                    forbidden.add(u);
+                    // the substituent may not run back through the skeleton atom it hangs on
+                    boolean added = forbidden.add(u);
                     SubstituentMap.Hit h = subs.at(x, forbidden);
+                    if (added) {
+                        forbidden.remove(u);
+                    }
                     if (h == null || Double.isNaN(h.sub().substituent().sigmaI())) {
                         continue;
                     }

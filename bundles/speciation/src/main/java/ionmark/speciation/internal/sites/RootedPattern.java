@@ -465,6 +465,11 @@ public final class RootedPattern {
             return atoms[i];
         }
 
+        /** Neighbour lists by atom index; shared, not to be changed. */
+        public int[][] adjacency() {
+            return adj;
+        }
+
         /** Atomic number of atom {@code i}, 0 when unset. */
         public int atomicNumber(int i) {
             return Math.max(0, z[i]);

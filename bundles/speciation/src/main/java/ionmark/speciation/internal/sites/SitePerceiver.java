@@ -37,17 +37,36 @@ public final class SitePerceiver {
                 if (m == null) {
                     continue;
                 }
-                Set<Integer> core = new HashSet<>();
+                Set<Integer> core = new HashSet<>(2 * m.length);
                 for (int a : m) {
                     core.add(a);
                 }
-                int[] centres = g.centres().length == 0 ? new int[] {atom}
-                        : Arrays.stream(g.centres()).map(k -> m[k]).distinct().toArray();
+                int[] centres = centres(g.centres(), m, atom);
                 out.add(new PerceivedSite(atom, g.group(), Collections.unmodifiableSet(core), centres));
                 break;
             }
         }
         return out;
+    }
+
+    /** The molecule atoms of the class's centres, first occurrence kept; the site atom when none. */
+    private static int[] centres(int[] queryCentres, int[] mapping, int atom) {
+        if (queryCentres.length == 0) {
+            return new int[] {atom};
+        }
+        int[] out = new int[queryCentres.length];
+        int n = 0;
+        next:
+        for (int q : queryCentres) {
+            int a = mapping[q];
+            for (int i = 0; i < n; i++) {
+                if (out[i] == a) {
+                    continue next;
+                }
+            }
+            out[n++] = a;
+        }
+        return n == out.length ? out : Arrays.copyOf(out, n);
     }
 
     /**
