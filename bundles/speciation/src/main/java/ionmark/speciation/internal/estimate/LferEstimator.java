@@ -8,7 +8,6 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Set;
 
-import org.openscience.cdk.graph.Cycles;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 
@@ -60,7 +59,7 @@ public final class LferEstimator {
         List<EstimatedSite> out = new ArrayList<>();
         for (PerceivedSite s : sites) {
             if (rings == null && s.group().relation() == Relation.HAMMETT && mol.getAtom(s.centres()[0]).isInRing()) {
-                rings = Cycles.sssr(mol).paths();
+                rings = target.rings();
             }
             out.add(estimate(table.table(), mol, subs, rings, s));
         }

@@ -50,6 +50,8 @@ final class Expression {
     static final int SINGLE_OR_AROMATIC = 28;
     static final int DOUBLE_OR_AROMATIC = 29;
     static final int SINGLE_OR_DOUBLE = 30;
+    // atom primitive over the molecule's rings, not the atom alone
+    static final int RING_COUNT = 31;
 
     final int op;
     final int value;
@@ -133,6 +135,7 @@ final class Expression {
             case RING_BOND_COUNT: return RING_BOND_COUNT;
             case HETERO_SUBSTITUENT_COUNT: return HETERO_SUBSTITUENT_COUNT;
             case INSATURATION: return INSATURATION;
+            case RING_COUNT: return RING_COUNT;
             default: return OTHER;
         }
     }
@@ -176,6 +179,7 @@ final class Expression {
                 return left.local() ? this : null;
             case RECURSIVE:
             case OTHER:
+            case RING_COUNT:
                 return null;
             default:
                 return this;
@@ -192,6 +196,7 @@ final class Expression {
                 return left.local();
             case RECURSIVE:
             case OTHER:
+            case RING_COUNT:
                 return false;
             default:
                 return true;
@@ -254,6 +259,7 @@ final class Expression {
             case RING_BOND_COUNT: return t.inRing[a] && t.ringBonds[a] == value;
             case HETERO_SUBSTITUENT_COUNT: return t.heteroNeighbours[a] == value;
             case INSATURATION: return t.doubleBonds[a] == value;
+            case RING_COUNT: return t.inRing[a] && t.ringCount(a) == value;
             default: return cdk.matches(t.atoms[a]);
         }
     }

@@ -7,6 +7,7 @@ import java.util.HashSet;
 import java.util.Map;
 import java.util.Set;
 
+import org.openscience.cdk.graph.Cycles;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
@@ -374,8 +375,13 @@ public final class RootedPattern {
         final boolean[] bondInRing;
         /** Outcomes of recursive SMARTS by recursion number and atom: 0 not yet known, 1 no, 2 yes. */
         private byte[][] memo = new byte[16][];
+        private final IAtomContainer mol;
+        /** The smallest set of smallest rings (CDK's minimum cycle basis) and ring counts, when first asked. */
+        private int[][] rings;
+        private int[] ringCounts;
 
         public Target(IAtomContainer mol) {
+            this.mol = mol;
             int n = mol.getAtomCount();
             int nb = mol.getBondCount();
             atoms = new IAtom[n];
@@ -418,14 +424,9 @@ public final class RootedPattern {
                 int w = b.getEnd().getIndex();
                 deg[u]++;
                 deg[w]++;
-                for (int end : new int[] {u, w}) {
-                    int other = end == u ? w : u;
-                    valence[end] += order[j];
-                    ringBonds[end] += bondInRing[j] ? 1 : 0;
-                    doubleBonds[end] += b.getOrder() == IBond.Order.DOUBLE ? 1 : 0;
-                    totalH[end] += z[other] == 1 ? 1 : 0;
-                    heteroNeighbours[end] += z[other] != 6 && z[other] != 1 ? 1 : 0;
-                }
+                boolean dbl = b.getOrder() == IBond.Order.DOUBLE;
+                tally(u, w, order[j], bondInRing[j], dbl);
+                tally(w, u, order[j], bondInRing[j], dbl);
             }
             adj = new int[n][];
             bondIndex = new int[n][];
@@ -443,6 +444,39 @@ public final class RootedPattern {
                 adj[w][deg[w]] = u;
                 bondIndex[w][deg[w]++] = j;
             }
+        }
+
+        private void tally(int end, int other, int bondOrder, boolean ringBond, boolean dbl) {
+            valence[end] += bondOrder;
+            ringBonds[end] += ringBond ? 1 : 0;
+            doubleBonds[end] += dbl ? 1 : 0;
+            totalH[end] += z[other] == 1 ? 1 : 0;
+            heteroNeighbours[end] += z[other] != 6 && z[other] != 1 ? 1 : 0;
+        }
+
+        /**
+         * The smallest set of smallest rings as closed atom paths ({@code Cycles.sssr}), found once;
+         * SMARTS ring counts ({@code R<n>}) and the Hammett step share it.
+         */
+        public int[][] rings() {
+            if (rings == null) {
+                rings = Cycles.sssr(mol).paths();
+            }
+            return rings;
+        }
+
+        /** Number of rings of {@link #rings()} through atom {@code a}: what CDK's {@code R<n>} counts. */
+        int ringCount(int a) {
+            if (ringCounts == null) {
+                int[] counts = new int[atoms.length];
+                for (int[] path : rings()) {
+                    for (int i = 1; i < path.length; i++) {
+                        counts[path[i]]++;
+                    }
+                }
+                ringCounts = counts;
+            }
+            return ringCounts[a];
         }
 
         boolean recursive(Expression e, int atom) {

@@ -119,7 +119,8 @@ public final class StructureReader {
             .withInitial(() -> new SmilesParser(SilentChemObjectBuilder.getInstance()));
 
     private static String firstToken(String smi) {
-        String first = smi.lines().findFirst().orElse("").strip();
+        int eol = smi.indexOf('\n');
+        String first = (eol < 0 ? smi : smi.substring(0, eol)).strip();
         int ws = indexOfWhitespace(first);
         return ws < 0 ? first : first.substring(0, ws);
     }
