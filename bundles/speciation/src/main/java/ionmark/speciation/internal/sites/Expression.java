@@ -108,11 +108,12 @@ final class Expression {
                 return new Expression(RECURSIVE, 0, null, null, e, id, r.pattern(id, e));
             }
             default:
-                return new Expression(atom ? atomCode(e.type()) : bondCode(e.type()), e.value(), null, null, e, -1, null);
+                return new Expression(code(e.type(), atom), e.value(), null, null, e, -1, null);
         }
     }
 
-    private static int atomCode(Expr.Type t) {
+    /** The code of a primitive; the predicates at the top mean the same for atoms and bonds. */
+    private static int code(Expr.Type t, boolean atom) {
         switch (t) {
             case TRUE: return TRUE;
             case FALSE: return FALSE;
@@ -120,6 +121,12 @@ final class Expression {
             case IS_ALIPHATIC: return IS_ALIPHATIC;
             case IS_IN_RING: return IS_IN_RING;
             case IS_IN_CHAIN: return IS_IN_CHAIN;
+            default: return atom ? atomCode(t) : bondCode(t);
+        }
+    }
+
+    private static int atomCode(Expr.Type t) {
+        switch (t) {
             case IS_HETERO: return IS_HETERO;
             case HAS_IMPLICIT_HYDROGEN: return HAS_IMPLICIT_HYDROGEN;
             case UNSATURATED: return UNSATURATED;
@@ -142,12 +149,6 @@ final class Expression {
 
     private static int bondCode(Expr.Type t) {
         switch (t) {
-            case TRUE: return TRUE;
-            case FALSE: return FALSE;
-            case IS_AROMATIC: return IS_AROMATIC;
-            case IS_ALIPHATIC: return IS_ALIPHATIC;
-            case IS_IN_RING: return IS_IN_RING;
-            case IS_IN_CHAIN: return IS_IN_CHAIN;
             case ORDER: return ORDER;
             case ALIPHATIC_ORDER: return ALIPHATIC_ORDER;
             case SINGLE_OR_AROMATIC: return SINGLE_OR_AROMATIC;
