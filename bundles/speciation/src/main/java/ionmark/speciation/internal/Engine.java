@@ -2,7 +2,6 @@ package ionmark.speciation.internal;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.BitSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -115,7 +114,7 @@ public final class Engine {
         } else {
             // the fingerprint only when some site's class has a measured analog to compare with
             if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
-                BitSet fp = Overrides.fingerprint(mol);
+                long[] fp = Overrides.fingerprint(mol);
                 est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
             }
         }
@@ -241,8 +240,15 @@ public final class Engine {
         for (int i = 0; i < k; i++) {
             shift[i] = param[classOf[i]];
         }
+        // the model at standard conditions is built once; a shift moves only its site values
+        SiteModel standard = model(adj, est, Conditions.noPh());
+        List<EstimatedSite> order = est.stream().filter(s -> !s.site().group().permanent()).toList();
+        int[] at = new int[k];
+        for (int i = 0; i < k; i++) {
+            at[i] = order.indexOf(fitted.get(i));
+        }
         for (int iter = 0; iter < 40; iter++) {
-            double[] r = residual(adj, est, titr, fitted, shift, m);
+            double[] r = residual(standard, at, shift, m);
             double worst = Arrays.stream(r).map(Math::abs).max().orElse(0);
             if (worst < 1e-6) {
                 break;
@@ -255,7 +261,7 @@ public final class Engine {
                         trial[i] += 1e-4;
                     }
                 }
-                double[] rj = residual(adj, est, titr, fitted, trial, m);
+                double[] rj = residual(standard, at, trial, m);
                 for (int i = 0; i < k; i++) {
                     jac[i][j] = (rj[i] - r[i]) / 1e-4;
                 }
@@ -288,15 +294,14 @@ public final class Engine {
         return out;
     }
 
-    private double[] residual(int[][] adj, List<EstimatedSite> all, List<EstimatedSite> titr,
-            List<EstimatedSite> fitted, double[] shift, MeasuredCompound m) {
-        List<EstimatedSite> trial = new ArrayList<>();
-        for (EstimatedSite s : all) {
-            int idx = fitted.indexOf(s);
-            trial.add(idx < 0 ? s : s.shifted(shift[idx], new Term("", 0, ""), "measured", 0));
+    /** Model constants minus measured ones, with site {@code at[i]} of the standard model moved by {@code shift[i]}. */
+    private double[] residual(SiteModel standard, int[] at, double[] shift, MeasuredCompound m) {
+        double[] pka = standard.pka().clone();
+        for (int i = 0; i < at.length; i++) {
+            pka[at[i]] += shift[i];
         }
-        List<Double> macro = MacroConstants.of(model(adj, trial, Conditions.noPh()), table.table().interaction()
-                .cutoff());
+        List<Double> macro = MacroConstants.of(new SiteModel(pka, standard.base(), standard.w(), standard.background()),
+                table.table().interaction().cutoff());
         // compare the measured values with the macroscopic constants nearest in order
         int k = m.pka().size();
         int start = 0;

@@ -1,14 +1,10 @@
 package ionmark.speciation.internal.estimate;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
-import java.util.Set;
 
-import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 
 import ionmark.acidity.api.AcidityTable;
@@ -61,12 +57,12 @@ public final class LferEstimator {
             if (rings == null && s.group().relation() == Relation.HAMMETT && mol.getAtom(s.centres()[0]).isInRing()) {
                 rings = target.rings();
             }
-            out.add(estimate(table.table(), mol, subs, rings, s));
+            out.add(estimate(table.table(), target, subs, rings, s));
         }
         return out;
     }
 
-    private static EstimatedSite estimate(AcidityTable t, IAtomContainer mol, SubstituentMap subs, int[][] rings,
+    private static EstimatedSite estimate(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, int[][] rings,
             PerceivedSite s) {
         GroupClass g = s.group();
         List<Term> terms = new ArrayList<>();
@@ -83,7 +79,7 @@ public final class LferEstimator {
 
     // ------------------------------------------------------------------ Hammett
 
-    private static double hammett(AcidityTable t, IAtomContainer mol, SubstituentMap subs, int[][] rings,
+    private static double hammett(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, int[][] rings,
             PerceivedSite s, List<Term> terms) {
         GroupClass g = s.group();
         int centre = s.centres()[0];
@@ -91,16 +87,18 @@ public final class LferEstimator {
         if (ring == null) {
             return 0;
         }
-        Set<Integer> ringSet = new HashSet<>();
-        for (int i = 0; i < ring.length - 1; i++) {
-            ringSet.add(ring[i]);
+        int size = ring.length - 1; // a closed path: the first atom again at the end
+        boolean[] inRing = new boolean[mol.atomCount()];
+        for (int i = 0; i < size; i++) {
+            inRing[ring[i]] = true;
         }
-        int size = ringSet.size();
         int centreIdx = indexIn(ring, centre);
         double f = Double.isNaN(g.attenuation()) ? 0.5 : g.attenuation();
         double total = 0;
-        Set<Integer> forbidden = new HashSet<>(ringSet);
-        forbidden.addAll(s.core());
+        boolean[] forbidden = inRing.clone();
+        for (int a : s.core()) {
+            forbidden[a] = true;
+        }
         for (int i = 0; i < size; i++) {
             int r = ring[i];
             if (r == centre) {
@@ -108,10 +106,8 @@ public final class LferEstimator {
             }
             int d = Math.abs(i - centreIdx);
             d = Math.min(d, size - d);
-            IAtom ra = mol.getAtom(r);
-            for (IAtom nb : mol.getConnectedAtomsList(ra)) {
-                int x = mol.indexOf(nb);
-                if (ringSet.contains(x) || s.core().contains(x) || nb.isAromatic() && isFusedNeighbour(rings, ringSet, r, x)) {
+            for (int x : mol.adjacency()[r]) {
+                if (inRing[x] || s.inCore(x) || mol.aromatic(x) && isFusedNeighbour(rings, r, x)) {
                     continue;
                 }
                 SubstituentMap.Hit h = subs.at(x, forbidden);
@@ -147,7 +143,7 @@ public final class LferEstimator {
         return total;
     }
 
-    private static boolean isFusedNeighbour(int[][] rings, Set<Integer> ringSet, int r, int x) {
+    private static boolean isFusedNeighbour(int[][] rings, int r, int x) {
         for (int[] ring : rings) {
             boolean hasR = false;
             boolean hasX = false;
@@ -183,47 +179,50 @@ public final class LferEstimator {
 
     // ------------------------------------------------------------------ Taft / inductive
 
-    private static double taft(AcidityTable t, IAtomContainer mol, SubstituentMap subs, PerceivedSite s,
+    private static double taft(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, PerceivedSite s,
             List<Term> terms) {
         GroupClass g = s.group();
         double a = Double.isNaN(g.attenuation()) ? 0.45 : g.attenuation();
-        Set<Integer> blocked = new HashSet<>(s.core());
+        int n = mol.atomCount();
+        // paths leave the site group only from its centres; a substituent may not run into the group
+        boolean[] forbidden = new boolean[n];
+        for (int c : s.core()) {
+            forbidden[c] = true;
+        }
+        boolean[] blocked = forbidden.clone();
         for (int c : s.centres()) {
-            blocked.remove(c);
+            blocked[c] = false;
         }
         double sum = 0;
         List<String> parts = new ArrayList<>();
-        Set<Integer> forbidden = new HashSet<>(s.core());
+        int[] dist = new int[n];
+        int[] queue = new int[n];
         for (int c : s.centres()) {
-            int[] dist = new int[mol.getAtomCount()];
             Arrays.fill(dist, -1);
             dist[c] = 0;
-            ArrayDeque<Integer> queue = new ArrayDeque<>();
-            queue.add(c);
+            queue[0] = c;
             // substituents found per attachment skeleton atom, for the saturation rule
             java.util.Map<Integer, List<double[]>> onAtom = new java.util.TreeMap<>();
             java.util.Map<Integer, List<String>> names = new java.util.TreeMap<>();
-            while (!queue.isEmpty()) {
-                int u = queue.poll();
-                for (IAtom nb : mol.getConnectedAtomsList(mol.getAtom(u))) {
-                    int x = mol.indexOf(nb);
-                    if (dist[x] >= 0 || blocked.contains(x)) {
+            for (int head = 0, tail = 1; head < tail; head++) {
+                int u = queue[head];
+                for (int x : mol.adjacency()[u]) {
+                    if (dist[x] >= 0 || blocked[x]) {
                         continue;
                     }
                     dist[x] = dist[u] + 1;
                     if (dist[x] > MAX_PATH) {
                         continue;
                     }
-                    if (isSaturatedCarbon(nb)) {
-                        queue.add(x);
+                    if (mol.saturatedCarbon(x)) {
+                        queue[tail++] = x;
                         continue;
                     }
                     // the substituent may not run back through the skeleton atom it hangs on
-                    boolean added = forbidden.add(u);
+                    boolean was = forbidden[u];
+                    forbidden[u] = true;
                     SubstituentMap.Hit h = subs.at(x, forbidden);
-                    if (added) {
-                        forbidden.remove(u);
-                    }
+                    forbidden[u] = was;
                     if (h == null || Double.isNaN(h.sub().substituent().sigmaI())) {
                         continue;
                     }
@@ -250,18 +249,6 @@ public final class LferEstimator {
                 + String.join(", ", parts), delta, "σI: " + t.citation("charton1981") + "; ρ: "
                         + t.citation(g.source("rho"))));
         return delta;
-    }
-
-    private static boolean isSaturatedCarbon(IAtom a) {
-        if (a.getAtomicNumber() != 6 || a.isAromatic()) {
-            return false;
-        }
-        for (var b : a.bonds()) {
-            if (b.getOrder() != org.openscience.cdk.interfaces.IBond.Order.SINGLE) {
-                return false;
-            }
-        }
-        return true;
     }
 
     private static String fmt(double v) {

@@ -1,7 +1,5 @@
 package ionmark.speciation.internal.estimate;
 
-import java.util.Arrays;
-import java.util.BitSet;
 
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -26,7 +24,8 @@ final class Morgan {
     private Morgan() {
     }
 
-    static BitSet of(IAtomContainer mol) {
+    /** The fingerprint as {@link #BITS}/64 words, bit b in word b/64 at position b mod 64. */
+    static long[] of(IAtomContainer mol) {
         int n = mol.getAtomCount();
         int[][] nbr = new int[n][];
         int[][] bnd = new int[n][];
@@ -49,7 +48,7 @@ final class Morgan {
             nbr[w][deg[w]] = u;
             bnd[w][deg[w]++] = code;
         }
-        BitSet fp = new BitSet(BITS);
+        long[] fp = new long[BITS / 64];
         int[] id = new int[n];
         for (int i = 0; i < n; i++) {
             IAtom a = mol.getAtom(i);
@@ -59,7 +58,7 @@ final class Morgan {
             int x = mix(mix(mix(mix(mix(mix(0x9747b28c, z), nbr[i].length), h), q + 8), a.isAromatic() ? 1 : 0),
                     a.isInRing() ? 1 : 0);
             id[i] = x;
-            fp.set(Math.floorMod(x, BITS));
+            set(fp, x);
         }
         long[] pairs = new long[8];
         for (int round = 1; round <= RADIUS; round++) {
@@ -72,17 +71,36 @@ final class Morgan {
                 for (int k = 0; k < d; k++) {
                     pairs[k] = ((long) bnd[i][k] << 32) | (id[nbr[i][k]] & 0xffffffffL);
                 }
-                Arrays.sort(pairs, 0, d);
+                sort(pairs, d);
                 int x = mix(mix(0x5bd1e995, round), id[i]);
                 for (int k = 0; k < d; k++) {
                     x = mix(mix(x, (int) (pairs[k] >>> 32)), (int) pairs[k]);
                 }
                 next[i] = x;
-                fp.set(Math.floorMod(x, BITS));
+                set(fp, x);
             }
             id = next;
         }
         return fp;
+    }
+
+    /** Insertion sort of the first {@code d} values: an atom has a handful of neighbours. */
+    private static void sort(long[] v, int d) {
+        for (int i = 1; i < d; i++) {
+            long x = v[i];
+            int j = i - 1;
+            while (j >= 0 && v[j] > x) {
+                v[j + 1] = v[j];
+                j--;
+            }
+            v[j + 1] = x;
+        }
+    }
+
+    /** Folds a 32-bit identifier into the fingerprint ({@link #BITS} is a power of two). */
+    private static void set(long[] fp, int x) {
+        int bit = x & (BITS - 1);
+        fp[bit >>> 6] |= 1L << bit;
     }
 
     /** One step of a 32-bit multiplicative hash (MurmurHash3's mixing constants). */

@@ -1,7 +1,6 @@
 package ionmark.speciation.internal.estimate;
 
 import java.util.ArrayList;
-import java.util.BitSet;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
@@ -33,14 +32,14 @@ import ionmark.speciation.internal.structure.StructureReader;
 public final class Overrides {
     public static final double MIN_SIMILARITY = 0.55;
 
-    record Analog(MeasuredCompound compound, String group, double shift, BitSet fp) {
+    record Analog(MeasuredCompound compound, String group, double shift, long[] fp) {
     }
 
     private final Map<String, MeasuredCompound> exact = new HashMap<>();
     /** Formulas of the measured compounds: a canonical SMILES is made only when the formula is one of these. */
     private final Set<String> formulas = new HashSet<>();
-    private final List<Analog> analogs = new ArrayList<>();
-    private final Set<String> analogGroups = new HashSet<>();
+    /** Single-site measured compounds by the class of their site. */
+    private final Map<String, List<Analog>> analogs = new HashMap<>();
 
     public Overrides(CompiledTable table) {
         StructureReader reader = new StructureReader(1000);
@@ -53,8 +52,9 @@ public final class Overrides {
                         .filter(s -> !s.group().permanent()).toList();
                 if (sites.size() == 1 && m.pka().size() == 1) {
                     EstimatedSite e = LferEstimator.estimate(table, mol, sites).get(0);
-                    analogs.add(new Analog(m, sites.get(0).group().id(), m.pka().get(0) - e.pka(), fingerprint(mol)));
-                    analogGroups.add(sites.get(0).group().id());
+                    String group = sites.get(0).group().id();
+                    analogs.computeIfAbsent(group, g -> new ArrayList<>())
+                            .add(new Analog(m, group, m.pka().get(0) - e.pka(), fingerprint(mol)));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has parsed every measured structure; nothing to do for one that fails here
@@ -71,7 +71,7 @@ public final class Overrides {
 
     /** Whether any measured single-site compound of this class can serve as an analog. */
     public boolean hasAnalogs(String groupId) {
-        return analogGroups.contains(groupId);
+        return analogs.containsKey(groupId);
     }
 
     /**
@@ -99,13 +99,10 @@ public final class Overrides {
     }
 
     /** The query site shifted by its nearest analog, or unchanged. */
-    public EstimatedSite analog(IAtomContainer mol, BitSet fp, EstimatedSite site) {
+    public EstimatedSite analog(IAtomContainer mol, long[] fp, EstimatedSite site) {
         Analog best = null;
         double bestSim = 0;
-        for (Analog a : analogs) {
-            if (!a.group().equals(site.site().group().id())) {
-                continue;
-            }
+        for (Analog a : analogs.getOrDefault(site.site().group().id(), List.of())) {
             double sim = tanimoto(fp, a.fp());
             if (sim > bestSim) {
                 bestSim = sim;
@@ -124,16 +121,18 @@ public final class Overrides {
         return site.shifted(delta, t, "analog", sd);
     }
 
-    public static BitSet fingerprint(IAtomContainer mol) {
+    public static long[] fingerprint(IAtomContainer mol) {
         return Morgan.of(mol);
     }
 
-    static double tanimoto(BitSet a, BitSet b) {
-        BitSet and = (BitSet) a.clone();
-        and.and(b);
-        BitSet or = (BitSet) a.clone();
-        or.or(b);
-        return or.isEmpty() ? 0 : (double) and.cardinality() / or.cardinality();
+    static double tanimoto(long[] a, long[] b) {
+        int and = 0;
+        int or = 0;
+        for (int i = 0; i < a.length; i++) {
+            and += Long.bitCount(a[i] & b[i]);
+            or += Long.bitCount(a[i] | b[i]);
+        }
+        return or == 0 ? 0 : (double) and / or;
     }
 
     public static String canonical(IAtomContainer mol) {

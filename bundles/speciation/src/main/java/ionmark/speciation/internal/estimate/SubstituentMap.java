@@ -2,10 +2,9 @@ package ionmark.speciation.internal.estimate;
 
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.HashSet;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
-import java.util.Set;
 
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.RootedPattern;
@@ -16,9 +15,9 @@ import ionmark.speciation.internal.sites.RootedPattern;
  */
 final class SubstituentMap {
     record Hit(CompiledTable.Sub sub, int[] atoms) {
-        boolean touches(java.util.Set<Integer> forbidden) {
+        boolean touches(boolean[] forbidden) {
             for (int a : atoms) {
-                if (forbidden.contains(a)) {
+                if (forbidden[a]) {
                     return true;
                 }
             }
@@ -43,16 +42,19 @@ final class SubstituentMap {
         }
         hits = new ArrayList<>();
         for (CompiledTable.Sub s : table.substituentsAt(target, atom)) {
-            Set<Set<Integer>> seen = new HashSet<>();
+            // one hit per set of atoms: symmetric patterns map the same atoms several ways
+            List<int[]> seen = new ArrayList<>();
             List<Hit> found = hits;
             s.pattern().forEach(target, atom, m -> {
-                Set<Integer> atoms = new HashSet<>();
-                for (int a : m) {
-                    atoms.add(a);
+                int[] atoms = m.clone();
+                Arrays.sort(atoms);
+                for (int[] other : seen) {
+                    if (Arrays.equals(other, atoms)) {
+                        return true;
+                    }
                 }
-                if (seen.add(atoms)) {
-                    found.add(new Hit(s, m.clone()));
-                }
+                seen.add(atoms);
+                found.add(new Hit(s, m.clone()));
                 return true;
             });
         }
@@ -61,7 +63,7 @@ final class SubstituentMap {
     }
 
     /** The most specific substituent attached by {@code atom} that stays clear of {@code forbidden}. */
-    Hit at(int atom, java.util.Set<Integer> forbidden) {
+    Hit at(int atom, boolean[] forbidden) {
         for (Hit h : hits(atom)) {
             if (!h.touches(forbidden)) {
                 return h;

@@ -1,7 +1,5 @@
 package ionmark.speciation.internal.sites;
 
-import java.util.Set;
-
 import ionmark.acidity.api.GroupClass;
 
 /**
@@ -9,8 +7,12 @@ import ionmark.acidity.api.GroupClass;
  *
  * @param atom    index of the ionizable atom
  * @param group   the winning (most specific) class
- * @param core    atoms of the class match (not substituents of this site)
+ * @param core    atoms of the class match (not substituents of this site), ascending, each once
  * @param centres atoms from which substituent distances are counted (the site atom when the class marks none)
  */
-public record PerceivedSite(int atom, GroupClass group, Set<Integer> core, int[] centres) {
+public record PerceivedSite(int atom, GroupClass group, int[] core, int[] centres) {
+    /** Whether {@code a} is an atom of the class match. */
+    public boolean inCore(int a) {
+        return java.util.Arrays.binarySearch(core, a) >= 0;
+    }
 }

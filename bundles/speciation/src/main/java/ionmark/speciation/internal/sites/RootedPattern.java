@@ -504,6 +504,24 @@ public final class RootedPattern {
             return adj;
         }
 
+        /** Whether atom {@code i} is aromatic. */
+        public boolean aromatic(int i) {
+            return aromatic[i];
+        }
+
+        /** A carbon that is not aromatic and has only single bonds: what an inductive path runs through. */
+        public boolean saturatedCarbon(int i) {
+            if (z[i] != 6 || aromatic[i]) {
+                return false;
+            }
+            for (int b : bondIndex[i]) {
+                if (order[b] != 1) {
+                    return false;
+                }
+            }
+            return true;
+        }
+
         /** Atomic number of atom {@code i}, 0 when unset. */
         public int atomicNumber(int i) {
             return Math.max(0, z[i]);

@@ -2,7 +2,6 @@ package ionmark.speciation.internal.sites;
 
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.Collections;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -37,12 +36,16 @@ public final class SitePerceiver {
                 if (m == null) {
                     continue;
                 }
-                Set<Integer> core = new HashSet<>(2 * m.length);
-                for (int a : m) {
-                    core.add(a);
+                int[] core = m.clone();
+                Arrays.sort(core);
+                int distinct = 0;
+                for (int i = 0; i < core.length; i++) {
+                    if (i == 0 || core[i] != core[i - 1]) {
+                        core[distinct++] = core[i];
+                    }
                 }
                 int[] centres = centres(g.centres(), m, atom);
-                out.add(new PerceivedSite(atom, g.group(), Collections.unmodifiableSet(core), centres));
+                out.add(new PerceivedSite(atom, g.group(), Arrays.copyOf(core, distinct), centres));
                 break;
             }
         }
