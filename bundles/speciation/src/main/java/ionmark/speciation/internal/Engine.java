@@ -108,7 +108,7 @@ public final class Engine {
         List<PerceivedSite> perceived = SitePerceiver.perceive(table, target);
         List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
         List<String> notes = new ArrayList<>(prep.notes());
-        Optional<MeasuredCompound> measured = overrides.exact(mol);
+        Optional<MeasuredCompound> measured = overrides.exact(target);
         if (measured.isPresent()) {
             est = fitToMeasured(mol, adj, est, measured.get());
         } else {
@@ -383,8 +383,11 @@ public final class Engine {
 
     /** The numeric model at the conditions: corrected site pKa values and interactions from bond distances. */
     private SiteModel model(int[][] adj, List<EstimatedSite> est, Conditions c) {
-        List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
-        List<EstimatedSite> perm = est.stream().filter(s -> s.site().group().permanent()).toList();
+        List<EstimatedSite> titr = new ArrayList<>(est.size());
+        List<EstimatedSite> perm = new ArrayList<>(0);
+        for (EstimatedSite s : est) {
+            (s.site().group().permanent() ? perm : titr).add(s);
+        }
         int n = titr.size();
         double[] pka = new double[n];
         boolean[] base = new boolean[n];

@@ -36,6 +36,8 @@ import ionmark.speciation.internal.sites.PerceivedSite;
  */
 public final class LferEstimator {
     static final int MAX_PATH = 5;
+    /** How a substituent's path length is written in a derivation, by bonds from the centre. */
+    private static final String[] PATH = {" (n=0)", " (n=1)", " (n=2)", " (n=3)", " (n=4)", " (n=5)"};
     private static final double[] SATURATION = {1.0, 0.75, 0.55, 0.45};
     /** Added in quadrature per unit |correction|: a large correction is less certain (common practice). */
     static final double SD_PER_UNIT_CORRECTION = 0.12;
@@ -228,8 +230,7 @@ public final class LferEstimator {
                     }
                     double w = Math.pow(a, dist[x] - 1);
                     onAtom.computeIfAbsent(u, k -> new ArrayList<>()).add(new double[] {h.sub().substituent().sigmaI(), w});
-                    names.computeIfAbsent(u, k -> new ArrayList<>()).add(h.sub().substituent().name() + " (n=" + dist[x]
-                            + ")");
+                    names.computeIfAbsent(u, k -> new ArrayList<>()).add(h.sub().substituent().name() + PATH[dist[x]]);
                 }
             }
             for (var e : onAtom.entrySet()) {

@@ -10,7 +10,6 @@ import java.util.HashSet;
 import java.util.Set;
 
 import org.openscience.cdk.exception.CDKException;
-import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.smiles.SmiFlavor;
 import org.openscience.cdk.smiles.SmilesGenerator;
@@ -19,6 +18,7 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.PerceivedSite;
+import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
@@ -36,8 +36,8 @@ public final class Overrides {
     }
 
     private final Map<String, MeasuredCompound> exact = new HashMap<>();
-    /** Formulas of the measured compounds: a canonical SMILES is made only when the formula is one of these. */
-    private final Set<String> formulas = new HashSet<>();
+    /** Formula keys of the measured compounds: a canonical SMILES is made only when the key is one of these. */
+    private final Set<Long> formulas = new HashSet<>();
     /** Single-site measured compounds by the class of their site. */
     private final Map<String, List<Analog>> analogs = new HashMap<>();
 
@@ -47,7 +47,7 @@ public final class Overrides {
             try {
                 IAtomContainer mol = reader.read(m.smiles()).molecule();
                 exact.putIfAbsent(canonical(mol), m);
-                formulas.add(formula(mol));
+                formulas.add(formula(new RootedPattern.Target(mol)));
                 List<PerceivedSite> sites = SitePerceiver.perceive(table, mol).stream()
                         .filter(s -> !s.group().permanent()).toList();
                 if (sites.size() == 1 && m.pka().size() == 1) {
@@ -62,11 +62,12 @@ public final class Overrides {
         }
     }
 
-    public Optional<MeasuredCompound> exact(IAtomContainer mol) {
+    /** The measured compound that is this structure, if the table has it. */
+    public Optional<MeasuredCompound> exact(RootedPattern.Target mol) {
         if (!formulas.contains(formula(mol))) {
             return Optional.empty();
         }
-        return Optional.ofNullable(exact.get(canonical(mol)));
+        return Optional.ofNullable(exact.get(canonical(mol.molecule())));
     }
 
     /** Whether any measured single-site compound of this class can serve as an analog. */
@@ -75,27 +76,26 @@ public final class Overrides {
     }
 
     /**
-     * Element counts (with implicit hydrogens) and total formal charge; equal canonical SMILES imply
-     * equal formulas, so this is a safe screen before the costlier canonical form.
+     * A hash of the element counts (with implicit hydrogens) and the total formal charge. Equal
+     * canonical SMILES imply equal formulas and so equal keys, which makes this a safe screen before
+     * the costlier canonical form; a collision only costs that canonical form.
      */
-    static String formula(IAtomContainer mol) {
+    static long formula(RootedPattern.Target mol) {
         int[] count = new int[120];
         int charge = 0;
-        for (IAtom a : mol.atoms()) {
-            Integer z = a.getAtomicNumber();
-            count[z == null || z < 0 || z >= count.length ? 0 : z]++;
-            Integer h = a.getImplicitHydrogenCount();
-            count[1] += h == null ? 0 : h;
-            Integer q = a.getFormalCharge();
-            charge += q == null ? 0 : q;
+        for (int i = 0; i < mol.atomCount(); i++) {
+            int z = mol.atomicNumber(i);
+            count[z < count.length ? z : 0]++;
+            count[1] += mol.implicitHydrogens(i);
+            charge += mol.formalCharge(i);
         }
-        StringBuilder sb = new StringBuilder();
+        long key = charge;
         for (int z = 0; z < count.length; z++) {
             if (count[z] > 0) {
-                sb.append(z).append(':').append(count[z]).append(' ');
+                key = key * 0x9E3779B97F4A7C15L + ((long) z << 20 | count[z]);
             }
         }
-        return sb.append('q').append(charge).toString();
+        return key;
     }
 
     /** The query site shifted by its nearest analog, or unchanged. */

@@ -131,14 +131,32 @@ public final class MicrostateSolver {
                 }
             }
         }
-        Map<Integer, List<Integer>> groups = new TreeMap<>();
+        // one cluster per root, in ascending order of root index
+        int[] size = new int[n];
         for (int i = 0; i < n; i++) {
             if (!isFixed[i]) {
-                groups.computeIfAbsent(find(parent, i), k -> new ArrayList<>()).add(i);
+                size[find(parent, i)]++;
+            }
+        }
+        int[][] byRoot = new int[n][];
+        for (int r = 0; r < n; r++) {
+            if (size[r] > 0) {
+                byRoot[r] = new int[size[r]];
+                size[r] = 0;
+            }
+        }
+        for (int i = 0; i < n; i++) {
+            if (!isFixed[i]) {
+                int r = find(parent, i);
+                byRoot[r][size[r]++] = i;
             }
         }
         List<int[]> out = new ArrayList<>();
-        groups.values().forEach(l -> out.add(l.stream().mapToInt(Integer::intValue).toArray()));
+        for (int[] c : byRoot) {
+            if (c != null) {
+                out.add(c);
+            }
+        }
         return out;
     }
 

@@ -374,7 +374,7 @@ public final class RootedPattern {
         final boolean[] bondAromatic;
         final boolean[] bondInRing;
         /** Outcomes of recursive SMARTS by recursion number and atom: 0 not yet known, 1 no, 2 yes. */
-        private byte[][] memo = new byte[16][];
+        private byte[][] memo = new byte[128][];
         private final IAtomContainer mol;
         /** The smallest set of smallest rings (CDK's minimum cycle basis) and ring counts, when first asked. */
         private int[][] rings;
@@ -502,6 +502,21 @@ public final class RootedPattern {
         /** Neighbour lists by atom index; shared, not to be changed. */
         public int[][] adjacency() {
             return adj;
+        }
+
+        /** The molecule these arrays describe. */
+        public IAtomContainer molecule() {
+            return mol;
+        }
+
+        /** Implicit hydrogens on atom {@code i}, 0 when unset. */
+        public int implicitHydrogens(int i) {
+            return Math.max(0, implicitH[i]);
+        }
+
+        /** Formal charge of atom {@code i}, 0 when unset. */
+        public int formalCharge(int i) {
+            return charge[i] == Integer.MIN_VALUE ? 0 : charge[i];
         }
 
         /** Whether atom {@code i} is aromatic. */

@@ -7,9 +7,9 @@ import java.util.List;
 
 import org.openscience.cdk.exception.CDKException;
 import org.openscience.cdk.exception.InvalidSmilesException;
-import org.openscience.cdk.graph.ConnectivityChecker;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IBond;
 import org.openscience.cdk.interfaces.IAtomContainerSet;
 import org.openscience.cdk.io.MDLV2000Reader;
 import org.openscience.cdk.io.MDLV3000Reader;
@@ -194,10 +194,10 @@ public final class StructureReader {
         if (mol.getAtomCount() == 0) {
             throw new StructureException("the structure has no atoms");
         }
-        if (ConnectivityChecker.isConnected(mol)) {
+        if (connected(mol)) {
             return mol;
         }
-        IAtomContainerSet parts = ConnectivityChecker.partitionIntoMolecules(mol);
+        IAtomContainerSet parts = org.openscience.cdk.graph.ConnectivityChecker.partitionIntoMolecules(mol);
         List<IAtomContainer> all = new ArrayList<>();
         parts.atomContainers().forEach(all::add);
         IAtomContainer best = all.stream()
@@ -210,6 +210,33 @@ public final class StructureReader {
             }
         }
         return best;
+    }
+
+    /** Whether the bonds join every atom into one component (union–find over the bond list). */
+    static boolean connected(IAtomContainer mol) {
+        int n = mol.getAtomCount();
+        int[] parent = new int[n];
+        for (int i = 0; i < n; i++) {
+            parent[i] = i;
+        }
+        int components = n;
+        for (IBond b : mol.bonds()) {
+            int u = root(parent, b.getBegin().getIndex());
+            int w = root(parent, b.getEnd().getIndex());
+            if (u != w) {
+                parent[u] = w;
+                components--;
+            }
+        }
+        return components == 1;
+    }
+
+    private static int root(int[] parent, int i) {
+        while (parent[i] != i) {
+            parent[i] = parent[parent[i]];
+            i = parent[i];
+        }
+        return i;
     }
 
     private static boolean hasCarbon(IAtomContainer c) {
