@@ -27,6 +27,8 @@ import java.util.TreeMap;
 public final class MicrostateSolver {
     public static final double FIX_MARGIN = 10.0;
     public static final int EXACT_LIMIT = 20;
+    /** pKa units; weaker couplings are not sampled (see {@link #sample}). */
+    static final double NEGLIGIBLE_COUPLING = 1e-5;
     static final int TOP = 12;
     private static final double LN10 = Math.log(10);
 
@@ -310,6 +312,11 @@ public final class MicrostateSolver {
      * Metropolis sampling with single-site flips. Site fractions use the Rao–Blackwell estimator (the
      * mean over samples of each site's protonation probability given the others), which has far
      * less variance than counting states; standard error from 20 batch means.
+     *
+     * <p>Couplings weaker than {@link #NEGLIGIBLE_COUPLING} are left out of the sampled energy. The
+     * field they would add at a site is at most the sum of their sizes, which moves that site's
+     * protonated fraction by at most ln10/4 times that sum; the largest such bound is added to the
+     * reported standard error.
      */
     ClusterResult sample(SiteModel m, int[] c, double[] phi, double ph) {
         int k = c.length;
@@ -323,23 +330,32 @@ public final class MicrostateSolver {
         double[] field = new double[k];
         int[][] nb = new int[k][];
         double[][] nw = new double[k][];
+        double leftOut = 0; // largest summed size of the couplings left out at one site
         for (int a = 0; a < k; a++) {
             double f = phi[c[a]];
             int cnt = 0;
+            double dropped = 0;
             for (int b = 0; b < k; b++) {
                 if (a != b) {
-                    f += m.w()[c[a]][c[b]] * q[b];
-                    cnt += m.w()[c[a]][c[b]] != 0 ? 1 : 0;
+                    double wab = m.w()[c[a]][c[b]];
+                    if (Math.abs(wab) >= NEGLIGIBLE_COUPLING) {
+                        f += wab * q[b];
+                        cnt++;
+                    } else {
+                        dropped += Math.abs(wab);
+                    }
                 }
             }
+            leftOut = Math.max(leftOut, dropped);
             field[a] = f;
             nb[a] = new int[cnt];
             nw[a] = new double[cnt];
             int j = 0;
             for (int b = 0; b < k; b++) {
-                if (a != b && m.w()[c[a]][c[b]] != 0) {
+                double wab = m.w()[c[a]][c[b]];
+                if (a != b && Math.abs(wab) >= NEGLIGIBLE_COUPLING) {
                     nb[a][j] = b;
-                    nw[a][j++] = m.w()[c[a]][c[b]];
+                    nw[a][j++] = wab;
                 }
             }
         }
@@ -362,8 +378,10 @@ public final class MicrostateSolver {
         int batches = 20;
         int perBatch = Math.max(1, sweeps / batches);
         double[][] batchProt = new double[batches][k];
-        Map<Integer, Double> charge = new HashMap<>();
-        Map<String, double[]> seen = new HashMap<>();
+        // net charge of the cluster lies in −k…k: histogram offset by k
+        double[] chargeCount = new double[2 * k + 1];
+        int words = (k + 63) / 64;
+        Map<StateKey, double[]> seen = new HashMap<>();
         long samples = 0;
         for (int sweep = 0; sweep < burn + batches * perBatch; sweep++) {
             for (int step = 0; step < k; step++) {
@@ -396,9 +414,9 @@ public final class MicrostateSolver {
                     }
                     z += (int) q[a];
                 }
-                charge.merge(z, 1.0, Double::sum);
+                chargeCount[z + k]++;
                 if (sweep % 10 == 0) {
-                    seen.computeIfAbsent(Arrays.toString(dep), x -> new double[1])[0] += 10;
+                    seen.computeIfAbsent(StateKey.of(dep, words), x -> new double[1])[0] += 10;
                 }
                 samples++;
             }
@@ -417,19 +435,49 @@ public final class MicrostateSolver {
             prot[a] = mean;
             se = Math.max(se, Math.sqrt(var / batches));
         }
+        se += Math.log(10) / 4 * leftOut;
         final double total = samples;
-        charge.replaceAll((z, w) -> w / total);
+        Map<Integer, Double> charge = new HashMap<>();
+        for (int z = 0; z < chargeCount.length; z++) {
+            if (chargeCount[z] > 0) {
+                charge.put(z - k, chargeCount[z] / total);
+            }
+        }
         List<Populations.Microstate> top = new ArrayList<>();
         seen.entrySet().stream().sorted((x, y) -> Double.compare(y.getValue()[0], x.getValue()[0])).limit(TOP)
-                .forEach(e -> {
-                    String[] parts = e.getKey().substring(1, e.getKey().length() - 1).split(", ");
-                    boolean[] d = new boolean[k];
-                    for (int a = 0; a < k; a++) {
-                        d[a] = Boolean.parseBoolean(parts[a]);
-                    }
-                    top.add(new Populations.Microstate(d, e.getValue()[0] / total));
-                });
+                .forEach(e -> top.add(new Populations.Microstate(e.getKey().states(k), e.getValue()[0] / total)));
         return new ClusterResult(prot, charge, top, true, se);
+    }
+
+    /** A sampled microstate as bit words (bit a set: site a deprotonated), for counting visits. */
+    private record StateKey(long[] bits) {
+        static StateKey of(boolean[] dep, int words) {
+            long[] b = new long[words];
+            for (int a = 0; a < dep.length; a++) {
+                if (dep[a]) {
+                    b[a >>> 6] |= 1L << a;
+                }
+            }
+            return new StateKey(b);
+        }
+
+        boolean[] states(int k) {
+            boolean[] d = new boolean[k];
+            for (int a = 0; a < k; a++) {
+                d[a] = (bits[a >>> 6] & (1L << a)) != 0;
+            }
+            return d;
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof StateKey other && Arrays.equals(bits, other.bits);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(bits);
+        }
     }
 
     /** log10 weight change of flipping site {@code bit}: deprotonation lowers its charge by one. */
