@@ -94,6 +94,22 @@ class EngineTest {
     }
 
     @Test
+    void lactimInputIsAnalysedAsItsLactam() {
+        // barbital drawn once as the imide and once with one ring C=O as an imidic acid (HO-C=N): one
+        // compound, so the same sites and values; an aromatic hydroxy-azine is left as written
+        Analysis lactam = at("CCC1(CC)C(=O)NC(=O)NC1=O", 7);
+        Analysis lactim = at("CCC1(CC)C(=O)NC(=O)N=C1O", 7);
+        assertEquals(lactam.sites().size(), lactim.sites().size());
+        for (int i = 0; i < lactam.sites().size(); i++) {
+            assertEquals(lactam.sites().get(i).group(), lactim.sites().get(i).group());
+            assertEquals(lactam.sites().get(i).pka(), lactim.sites().get(i).pka(), 1e-9);
+        }
+        assertTrue(lactim.warnings().stream().anyMatch(w -> w.contains("lactim")), lactim.warnings().toString());
+        Analysis hydroxypyridine = at("Oc1ccccn1", 7);
+        assertTrue(hydroxypyridine.warnings().stream().noneMatch(w -> w.contains("lactim")));
+    }
+
+    @Test
     void permanentChargeIsCountedButNotTitrated() {
         Analysis a = at("C[N+](C)(C)CC(=O)O", 7);
         assertTrue(a.sites().stream().anyMatch(s -> s.permanent()));
