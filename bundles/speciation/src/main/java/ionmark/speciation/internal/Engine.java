@@ -114,7 +114,7 @@ public final class Engine {
         } else {
             // the fingerprint only when some site's class has a measured analog to compare with
             if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
-                long[] fp = Overrides.fingerprint(mol);
+                long[] fp = Overrides.fingerprint(target);
                 est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
             }
         }

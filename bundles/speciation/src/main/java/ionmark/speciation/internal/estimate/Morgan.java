@@ -1,9 +1,7 @@
 package ionmark.speciation.internal.estimate;
 
 
-import org.openscience.cdk.interfaces.IAtom;
-import org.openscience.cdk.interfaces.IAtomContainer;
-import org.openscience.cdk.interfaces.IBond;
+import ionmark.speciation.internal.sites.RootedPattern;
 
 /**
  * Circular (Morgan) fingerprint of radius 2, in the manner of extended-connectivity fingerprints
@@ -25,38 +23,14 @@ final class Morgan {
     }
 
     /** The fingerprint as {@link #BITS}/64 words, bit b in word b/64 at position b mod 64. */
-    static long[] of(IAtomContainer mol) {
-        int n = mol.getAtomCount();
-        int[][] nbr = new int[n][];
-        int[][] bnd = new int[n][];
-        int[] deg = new int[n];
-        for (IBond b : mol.bonds()) {
-            deg[b.getBegin().getIndex()]++;
-            deg[b.getEnd().getIndex()]++;
-        }
-        for (int i = 0; i < n; i++) {
-            nbr[i] = new int[deg[i]];
-            bnd[i] = new int[deg[i]];
-            deg[i] = 0;
-        }
-        for (IBond b : mol.bonds()) {
-            int u = b.getBegin().getIndex();
-            int w = b.getEnd().getIndex();
-            int code = b.isAromatic() ? 4 : b.getOrder() == null ? 0 : b.getOrder().numeric();
-            nbr[u][deg[u]] = w;
-            bnd[u][deg[u]++] = code;
-            nbr[w][deg[w]] = u;
-            bnd[w][deg[w]++] = code;
-        }
+    static long[] of(RootedPattern.Target mol) {
+        int n = mol.atomCount();
+        int[][] nbr = mol.adjacency();
         long[] fp = new long[BITS / 64];
         int[] id = new int[n];
         for (int i = 0; i < n; i++) {
-            IAtom a = mol.getAtom(i);
-            int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
-            int q = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
-            int z = a.getAtomicNumber() == null ? 0 : a.getAtomicNumber();
-            int x = mix(mix(mix(mix(mix(mix(0x9747b28c, z), nbr[i].length), h), q + 8), a.isAromatic() ? 1 : 0),
-                    a.isInRing() ? 1 : 0);
+            int x = mix(mix(mix(mix(mix(mix(0x9747b28c, mol.atomicNumber(i)), nbr[i].length), mol.implicitHydrogens(i)),
+                    mol.formalCharge(i) + 8), mol.aromatic(i) ? 1 : 0), mol.inRing(i) ? 1 : 0);
             id[i] = x;
             set(fp, x);
         }
@@ -69,7 +43,7 @@ final class Morgan {
                     pairs = new long[d];
                 }
                 for (int k = 0; k < d; k++) {
-                    pairs[k] = ((long) bnd[i][k] << 32) | (id[nbr[i][k]] & 0xffffffffL);
+                    pairs[k] = ((long) mol.bondCode(i, k) << 32) | (id[nbr[i][k]] & 0xffffffffL);
                 }
                 sort(pairs, d);
                 int x = mix(mix(0x5bd1e995, round), id[i]);

@@ -54,7 +54,7 @@ public final class Overrides {
                     EstimatedSite e = LferEstimator.estimate(table, mol, sites).get(0);
                     String group = sites.get(0).group().id();
                     analogs.computeIfAbsent(group, g -> new ArrayList<>())
-                            .add(new Analog(m, group, m.pka().get(0) - e.pka(), fingerprint(mol)));
+                            .add(new Analog(m, group, m.pka().get(0) - e.pka(), fingerprint(new RootedPattern.Target(mol))));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has parsed every measured structure; nothing to do for one that fails here
@@ -121,7 +121,7 @@ public final class Overrides {
         return site.shifted(delta, t, "analog", sd);
     }
 
-    public static long[] fingerprint(IAtomContainer mol) {
+    public static long[] fingerprint(RootedPattern.Target mol) {
         return Morgan.of(mol);
     }
 

@@ -519,6 +519,17 @@ public final class RootedPattern {
             return charge[i] == Integer.MIN_VALUE ? 0 : charge[i];
         }
 
+        /** Whether atom {@code i} is in a ring. */
+        public boolean inRing(int i) {
+            return inRing[i];
+        }
+
+        /** The bond to the k-th neighbour of {@code u} as a code: its order, or 4 when aromatic. */
+        public int bondCode(int u, int k) {
+            int b = bondIndex[u][k];
+            return bondAromatic[b] ? 4 : order[b];
+        }
+
         /** Whether atom {@code i} is aromatic. */
         public boolean aromatic(int i) {
             return aromatic[i];
