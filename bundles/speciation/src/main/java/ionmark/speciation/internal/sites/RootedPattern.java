@@ -414,6 +414,8 @@ public final class RootedPattern {
             order = new int[nb];
             bondAromatic = new boolean[nb];
             bondInRing = new boolean[nb];
+            int[] begin = new int[nb];
+            int[] end = new int[nb];
             for (int j = 0; j < nb; j++) {
                 IBond b = mol.getBond(j);
                 bondObjects[j] = b;
@@ -422,6 +424,8 @@ public final class RootedPattern {
                 bondInRing[j] = b.isInRing();
                 int u = b.getBegin().getIndex();
                 int w = b.getEnd().getIndex();
+                begin[j] = u;
+                end[j] = w;
                 deg[u]++;
                 deg[w]++;
                 boolean dbl = b.getOrder() == IBond.Order.DOUBLE;
@@ -436,9 +440,8 @@ public final class RootedPattern {
                 deg[i] = 0;
             }
             for (int j = 0; j < nb; j++) {
-                IBond b = bondObjects[j];
-                int u = b.getBegin().getIndex();
-                int w = b.getEnd().getIndex();
+                int u = begin[j];
+                int w = end[j];
                 adj[u][deg[u]] = w;
                 bondIndex[u][deg[u]++] = j;
                 adj[w][deg[w]] = u;

@@ -10,20 +10,24 @@ final class Valences {
     }
 
     static void check(IAtomContainer mol) throws StructureException {
-        for (IAtom a : mol.atoms()) {
+        // bond orders summed per atom in one pass over the bonds (an unset order counts 1)
+        int[] bonded = new int[mol.getAtomCount()];
+        for (IBond b : mol.bonds()) {
+            int o = b.getOrder() == null || b.getOrder() == IBond.Order.UNSET ? 1 : b.getOrder().numeric();
+            bonded[b.getBegin().getIndex()] += o;
+            bonded[b.getEnd().getIndex()] += o;
+        }
+        for (int i = 0; i < bonded.length; i++) {
+            IAtom a = mol.getAtom(i);
             int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
             if (h < 0) {
-                throw new StructureException("impossible valence at atom " + (mol.indexOf(a) + 1) + " (" + a.getSymbol()
-                        + ")");
+                throw new StructureException("impossible valence at atom " + (i + 1) + " (" + a.getSymbol() + ")");
             }
-            int order = h;
-            for (IBond b : mol.getConnectedBondsList(a)) {
-                order += b.getOrder() == null || b.getOrder() == IBond.Order.UNSET ? 1 : b.getOrder().numeric();
-            }
+            int order = h + bonded[i];
             int charge = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
             int max = maxValence(a.getAtomicNumber(), charge);
             if (max > 0 && order > max) {
-                throw new StructureException("impossible valence at atom " + (mol.indexOf(a) + 1) + " (" + a.getSymbol()
+                throw new StructureException("impossible valence at atom " + (i + 1) + " (" + a.getSymbol()
                         + (charge != 0 ? String.format("%+d", charge) : "") + " with " + order + " bonds)");
             }
         }
