@@ -30,7 +30,7 @@ public final class AlternatingRatio {
             Cycles.or(Cycles.all(), Cycles.all(6)));
     private final Conditions ph74 = Conditions.atPh(7.4);
     /** Keeps results reachable so that the work cannot be dropped. */
-    private Object sink;
+    static volatile Object sink;
 
     /** Molecules per second over about {@code seconds} of the floor or of brief end to end. */
     double rate(boolean floor, double seconds) throws CDKException {
@@ -70,9 +70,6 @@ public final class AlternatingRatio {
         }
         System.out.printf(Locale.ROOT, "brief/floor median %.3f (quartiles %.3f-%.3f); floor %.0f, brief %.0f molecules/s%n",
                 median(ratio), quantile(ratio, 0.25), quantile(ratio, 0.75), median(floor), median(brief));
-        if (r.sink == null) {
-            System.out.println();
-        }
     }
 
     private static double median(double[] v) {
