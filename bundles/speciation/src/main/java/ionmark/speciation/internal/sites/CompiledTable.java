@@ -1,12 +1,14 @@
 package ionmark.speciation.internal.sites;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
 
 import org.openscience.cdk.CDKConstants;
@@ -132,28 +134,41 @@ public final class CompiledTable {
         return List.copyOf(out);
     }
 
-    /** Candidate lists by atom signature; atoms of one signature pass the same root screens. */
-    private final Map<Long, List<Group>> groupsBySignature = new java.util.concurrent.ConcurrentHashMap<>();
-    private final Map<Long, List<Sub>> subsBySignature = new java.util.concurrent.ConcurrentHashMap<>();
-    /** Distinct signatures are few in practice; past this many, lists are filtered per atom instead. */
+    /**
+     * Candidate lists in two steps. By atom signature: the patterns whose root screen the atom passes.
+     * Then by the atom's neighbourhood (its signature with each bond and neighbour signature): those of
+     * the first list whose root neighbours can find partners there. Both screens are necessary
+     * conditions that read only what the keys hold, so a cached list is exact for every atom with the
+     * same key.
+     */
+    private final Map<Long, List<Group>> groupsBySignature = new ConcurrentHashMap<>();
+    private final Map<Long, List<Sub>> subsBySignature = new ConcurrentHashMap<>();
+    private final Map<Neighbourhood, List<Group>> groupsByNeighbourhood = new ConcurrentHashMap<>();
+    private final Map<Neighbourhood, List<Sub>> subsByNeighbourhood = new ConcurrentHashMap<>();
+    /** Distinct keys are few in practice; past this many, lists are filtered per atom instead. */
     private static final int MAX_SIGNATURES = 20_000;
+    private static final int MAX_NEIGHBOURHOODS = 50_000;
 
     /**
      * The classes whose site may be atom {@code atom}, most specific first: those rooted at its
-     * element whose root passes the screen on the atom's own invariants. Kept per signature.
+     * element whose root and root neighbours pass the screens on the atom and its neighbourhood.
      */
     public List<Group> groupsAt(RootedPattern.Target t, int atom) {
-        return screened(groupsBySignature, groupsRootedAt(t.atomicNumber(atom)), Group::pattern, t, atom);
+        List<Group> bySignature = screened(groupsBySignature, groupsRootedAt(t.atomicNumber(atom)), Group::pattern, t,
+                atom);
+        return nearby(groupsByNeighbourhood, bySignature, Group::pattern, t, atom);
     }
 
     /** The substituents that may attach by atom {@code atom}, most specific first; as {@link #groupsAt}. */
     public List<Sub> substituentsAt(RootedPattern.Target t, int atom) {
-        return screened(subsBySignature, substituentsRootedAt(t.atomicNumber(atom)), Sub::pattern, t, atom);
+        List<Sub> bySignature = screened(subsBySignature, substituentsRootedAt(t.atomicNumber(atom)), Sub::pattern, t,
+                atom);
+        return nearby(subsByNeighbourhood, bySignature, Sub::pattern, t, atom);
     }
 
     private static <T> List<T> screened(Map<Long, List<T>> cache, List<T> all, Function<T, RootedPattern> p,
             RootedPattern.Target t, int atom) {
-        long key = Expression.signature(t, atom);
+        long key = t.signature(atom);
         List<T> known = key < 0 ? null : cache.get(key);
         if (known != null) {
             return known;
@@ -169,6 +184,70 @@ public final class CompiledTable {
             cache.put(key, out);
         }
         return out;
+    }
+
+    private static <T> List<T> nearby(Map<Neighbourhood, List<T>> cache, List<T> candidates,
+            Function<T, RootedPattern> p, RootedPattern.Target t, int atom) {
+        if (candidates.isEmpty()) {
+            return candidates;
+        }
+        Neighbourhood key = Neighbourhood.of(t, atom);
+        List<T> known = key == null ? null : cache.get(key);
+        if (known != null) {
+            return known;
+        }
+        List<T> out = new ArrayList<>();
+        for (T x : candidates) {
+            if (p.apply(x).neighboursMayMatch(t, atom)) {
+                out.add(x);
+            }
+        }
+        out = out.size() == candidates.size() ? candidates : List.copyOf(out);
+        if (key != null && cache.size() < MAX_NEIGHBOURHOODS) {
+            cache.put(key, out);
+        }
+        return out;
+    }
+
+    /**
+     * An atom's signature followed by its neighbours' signatures, each with the bond's order,
+     * aromaticity and ring membership, sorted: what {@link RootedPattern#neighboursMayMatch} reads.
+     */
+    private record Neighbourhood(long[] words) {
+        static Neighbourhood of(RootedPattern.Target t, int atom) {
+            long own = t.signature(atom);
+            if (own < 0) {
+                return null;
+            }
+            int[] nbrs = t.adjacency()[atom];
+            long[] w = new long[nbrs.length + 1];
+            w[0] = own;
+            for (int k = 0; k < nbrs.length; k++) {
+                long s = t.signature(nbrs[k]);
+                int bond = t.bondInvariants(atom, k);
+                if (s < 0 || bond < 0) {
+                    return null;
+                }
+                long x = (long) bond << 48 | s;
+                int j = k; // insertion sort: a handful of neighbours
+                while (j > 0 && w[j] > x) {
+                    w[j + 1] = w[j];
+                    j--;
+                }
+                w[j + 1] = x;
+            }
+            return new Neighbourhood(w);
+        }
+
+        @Override
+        public boolean equals(Object o) {
+            return o instanceof Neighbourhood n && Arrays.equals(words, n.words);
+        }
+
+        @Override
+        public int hashCode() {
+            return Arrays.hashCode(words);
+        }
     }
 
     /** The classes whose site can be an atom of this element, most specific first. */

@@ -7,6 +7,8 @@ import java.util.HashSet;
 import java.util.Map;
 import java.util.Set;
 
+import org.openscience.cdk.exception.Intractable;
+import org.openscience.cdk.graph.CycleFinder;
 import org.openscience.cdk.graph.Cycles;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
@@ -60,6 +62,12 @@ public final class RootedPattern {
     private final Expression[][] closeTest;
     /** {@link Expression#screen()} of the root's expression; null when any atom may be the root. */
     private final Expression rootScreen;
+    /**
+     * For each query atom bonded to the root: the {@link Expression#screen()} of its atom expression and
+     * of the bond to the root (null where anything passes).
+     */
+    private final Expression[] neighbourScreen;
+    private final Expression[] neighbourBondScreen;
 
     public RootedPattern(IAtomContainer q, int root) {
         this(q, root, new Recursions());
@@ -141,6 +149,20 @@ public final class RootedPattern {
             }
         }
         rootScreen = trees[root] == null ? null : trees[root].screen();
+        // every query atom bonded to the root is reached from it: the root has the lowest rank
+        int k = 0;
+        for (int i = 1; i < n; i++) {
+            k += parent[i] == root ? 1 : 0;
+        }
+        neighbourScreen = new Expression[k];
+        neighbourBondScreen = new Expression[k];
+        k = 0;
+        for (int i = 1; i < n; i++) {
+            if (parent[i] == root) {
+                neighbourScreen[k] = trees[order[i]] == null ? null : trees[order[i]].screen();
+                neighbourBondScreen[k++] = parentTest[i] == null ? null : parentTest[i].screen();
+            }
+        }
     }
 
     /**
@@ -150,6 +172,30 @@ public final class RootedPattern {
      */
     boolean rootMayMatch(Target t, int atom) {
         return rootScreen == null || rootScreen.matchesAtom(t, atom);
+    }
+
+    /**
+     * A necessary condition over the root's neighbourhood: every query atom bonded to the root finds
+     * some neighbour of {@code atom} that passes its screen, across a bond that passes the bond's. It
+     * reads only the atom's and its neighbours' signatures ({@link Expression#signature}) and the
+     * order, aromaticity and ring membership of the bonds between them, so atoms alike in all of those
+     * get the same answer.
+     */
+    boolean neighboursMayMatch(Target t, int atom) {
+        int[] nbrs = t.adj[atom];
+        int[] bonds = t.bondIndex[atom];
+        for (int j = 0; j < neighbourScreen.length; j++) {
+            Expression a = neighbourScreen[j];
+            Expression b = neighbourBondScreen[j];
+            boolean found = false;
+            for (int k = 0; k < nbrs.length && !found; k++) {
+                found = (b == null || b.matchesBond(t, bonds[k])) && (a == null || a.matchesAtom(t, nbrs[k]));
+            }
+            if (!found) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static Expression bondTest(IQueryBond b) {
@@ -378,7 +424,11 @@ public final class RootedPattern {
         private final IAtomContainer mol;
         /** The smallest set of smallest rings (CDK's minimum cycle basis) and ring counts, when first asked. */
         private int[][] rings;
+        private static final CycleFinder SSSR = Cycles.mcb();
         private int[] ringCounts;
+        /** Signatures by atom, {@link #UNKNOWN} until asked for; -1 stays -1 (does not fit). */
+        private long[] signatures;
+        private static final long UNKNOWN = Long.MIN_VALUE;
 
         public Target(IAtomContainer mol) {
             this.mol = mol;
@@ -463,7 +513,13 @@ public final class RootedPattern {
          */
         public int[][] rings() {
             if (rings == null) {
-                rings = Cycles.sssr(mol).paths();
+                // on the neighbour lists already built: Cycles.sssr(mol) would build them again with a
+                // bond map, which costs more than the basis itself
+                try {
+                    rings = SSSR.find(mol, adj, atoms.length).paths();
+                } catch (Intractable e) {
+                    rings = Cycles.sssr(mol).paths(); // not reached: a minimum cycle basis is polynomial
+                }
             }
             return rings;
         }
@@ -558,6 +614,31 @@ public final class RootedPattern {
 
         public int atomCount() {
             return atoms.length;
+        }
+
+        /** {@link Expression#signature} of atom {@code i}, worked out once per atom. */
+        long signature(int i) {
+            if (signatures == null) {
+                signatures = new long[atoms.length];
+                Arrays.fill(signatures, UNKNOWN);
+            }
+            long s = signatures[i];
+            if (s == UNKNOWN) {
+                s = signatures[i] = Expression.signature(this, i);
+            }
+            return s;
+        }
+
+        /**
+         * The bond to the k-th neighbour of {@code u} as what bond screens read: order (0 when unset),
+         * aromaticity and ring membership in five bits; -1 when the order does not fit.
+         */
+        int bondInvariants(int u, int k) {
+            int b = bondIndex[u][k];
+            if (order[b] < 0 || order[b] > 7) {
+                return -1;
+            }
+            return order[b] | (bondAromatic[b] ? 8 : 0) | (bondInRing[b] ? 16 : 0);
         }
 
         /** The index of the bond between {@code u} and {@code w}, or -1. */

@@ -177,8 +177,10 @@ class RootedPatternTest {
     }
 
     /**
-     * The per-signature candidate lists may leave a class or substituent out only where it cannot
-     * match: every rooted match on the reference set must come from a candidate.
+     * The candidate lists (by signature, then by neighbourhood) may leave a class or substituent out
+     * only where it cannot match: every rooted match on the reference set must come from a candidate.
+     * The lists are cached by key across molecules, so this also checks that the keys hold everything
+     * the screens read.
      */
     @Test
     void candidateListsKeepEveryPatternThatMatches() throws Exception {
@@ -203,5 +205,20 @@ class RootedPatternTest {
             }
         }
         assertTrue(checked > 1000, "matches checked: " + checked);
+    }
+
+    /** The neighbourhood screen drops a class whose root neighbour is not there, and keeps it where it is. */
+    @Test
+    void neighbourhoodScreenNeedsThePartnersOfTheRoot() throws Exception {
+        StructureReader reader = new StructureReader(300);
+        RootedPattern.Target toluene = new RootedPattern.Target(reader.read("Cc1ccccc1").molecule());
+        RootedPattern.Target nitromethane = new RootedPattern.Target(reader.read("C[N+](=O)[O-]").molecule());
+        CompiledTable.Group nitro = TABLE.groups().stream().filter(g -> g.group().id().equals("nitroalkane"))
+                .findFirst().orElseThrow();
+        assertTrue(TABLE.groupsRootedAt(6).contains(nitro));
+        assertTrue(nitro.pattern().rootMayMatch(toluene, 0), "the methyl carbon passes the root screen");
+        assertTrue(!nitro.pattern().neighboursMayMatch(toluene, 0) && !TABLE.groupsAt(toluene, 0).contains(nitro),
+                "no N+ next to the methyl of toluene");
+        assertTrue(nitro.pattern().neighboursMayMatch(nitromethane, 0) && TABLE.groupsAt(nitromethane, 0).contains(nitro));
     }
 }
