@@ -109,8 +109,10 @@ public final class Engine {
         List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(target);
+        // the sites keep their order from here on: one distance matrix serves every model below
+        int[][] dist = distances(adj, est);
         if (measured.isPresent()) {
-            est = fitToMeasured(mol, adj, est, measured.get());
+            est = fitToMeasured(mol, adj, dist, est, measured.get());
         } else {
             // the fingerprint only when some site's class has a measured analog to compare with
             if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
@@ -119,10 +121,10 @@ public final class Engine {
             }
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
-        SiteModel model = model(adj, est, c);
+        SiteModel model = model(dist, est, c);
         double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
         final List<EstimatedSite> sitesNow = est;
-        List<Double> measuredHere = measured.map(m -> atConditions(m, adj, sitesNow, poly)).orElse(List.of());
+        List<Double> measuredHere = measured.map(m -> atConditions(m, dist, sitesNow, poly)).orElse(List.of());
         return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
     }
 
@@ -131,9 +133,9 @@ public final class Engine {
      * the matching constant between 25 °C, I = 0 and the stated temperature and ionic strength
      * (van 't Hoff per class enthalpy, Davies). Exact at standard conditions.
      */
-    private List<Double> atConditions(MeasuredCompound m, int[][] adj, List<EstimatedSite> est, double[] poly) {
+    private List<Double> atConditions(MeasuredCompound m, int[][] dist, List<EstimatedSite> est, double[] poly) {
         List<Double> here = MacroConstants.of(poly);
-        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(adj, est, Conditions.noPh()),
+        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(dist, est, Conditions.noPh()),
                 table.table().interaction().cutoff()));
         if (here.size() != std.size() || here.size() < m.pka().size()) {
             return m.pka();
@@ -196,7 +198,7 @@ public final class Engine {
      * ones. The k measured values are given to the k sites (in pKa order) whose estimates lie
      * closest to them; the shifts are found by damped Gauss–Newton on the macroscopic constants.
      */
-    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, int[][] adj, List<EstimatedSite> est,
+    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, int[][] adj, int[][] dist, List<EstimatedSite> est,
             MeasuredCompound m) {
         List<EstimatedSite> titr = new ArrayList<>(est.stream().filter(s -> !s.site().group().permanent()).toList());
         int k = m.pka().size();
@@ -241,11 +243,11 @@ public final class Engine {
             shift[i] = param[classOf[i]];
         }
         // the model at standard conditions is built once; a shift moves only its site values
-        SiteModel standard = model(adj, est, Conditions.noPh());
+        SiteModel standard = model(dist, est, Conditions.noPh());
         List<EstimatedSite> order = est.stream().filter(s -> !s.site().group().permanent()).toList();
         int[] at = new int[k];
         for (int i = 0; i < k; i++) {
-            at[i] = order.indexOf(fitted.get(i));
+            at[i] = indexOf(order, fitted.get(i));
         }
         for (int iter = 0; iter < 40; iter++) {
             double[] r = residual(standard, at, shift, m);
@@ -281,7 +283,7 @@ public final class Engine {
         }
         List<EstimatedSite> out = new ArrayList<>();
         for (EstimatedSite s : est) {
-            int idx = fitted.indexOf(s);
+            int idx = indexOf(fitted, s);
             if (idx < 0) {
                 out.add(s);
                 continue;
@@ -382,7 +384,21 @@ public final class Engine {
     }
 
     /** The numeric model at the conditions: corrected site pKa values and interactions from bond distances. */
-    private SiteModel model(int[][] adj, List<EstimatedSite> est, Conditions c) {
+    /**
+     * Position of {@code s} itself in {@code l}. Records compare by value, which walks every derivation
+     * term; the same object is what is meant here.
+     */
+    private static int indexOf(List<EstimatedSite> l, EstimatedSite s) {
+        for (int i = 0; i < l.size(); i++) {
+            if (l.get(i) == s) {
+                return i;
+            }
+        }
+        return -1;
+    }
+
+    /** {@code dist}: {@link #distances} of these sites. */
+    private SiteModel model(int[][] dist, List<EstimatedSite> est, Conditions c) {
         List<EstimatedSite> titr = new ArrayList<>(est.size());
         List<EstimatedSite> perm = new ArrayList<>(0);
         for (EstimatedSite s : est) {
@@ -399,7 +415,6 @@ public final class Engine {
         }
         double[][] w = new double[n][n];
         double[] bg = new double[n];
-        int[][] dist = distances(adj, est);
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
                 if (i != j) {
@@ -420,7 +435,6 @@ public final class Engine {
         return out;
     }
 
-    /** Bond distances between site atoms: titratable sites first, then permanent ones. */
     /** Bond distances between the sites' atoms: titratable sites first, then permanent ones. */
     private static int[][] distances(int[][] adj, List<EstimatedSite> est) {
         int k = est.size();

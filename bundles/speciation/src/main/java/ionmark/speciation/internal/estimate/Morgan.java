@@ -7,7 +7,7 @@ import ionmark.speciation.internal.sites.RootedPattern;
  * Circular (Morgan) fingerprint of radius 2, in the manner of extended-connectivity fingerprints
  * (Rogers, D.; Hahn, M. J. Chem. Inf. Model. 2010, 50, 742–754): every atom starts from a hash of
  * its own invariants (element, heavy-atom degree, hydrogens, formal charge, aromaticity, ring
- * membership); each round hashes the atom's identifier with the sorted (bond, neighbour identifier)
+ * membership, packed into one word); each round hashes the atom's identifier with the sorted (bond, neighbour identifier)
  * pairs around it. Identifiers of rounds 0, 1 and 2 are folded into {@link #BITS} bits. Only used to
  * rank measured analogs by Tanimoto similarity, so the exact hash function is an internal matter;
  * it is the same for the query and the measured compounds.
@@ -29,14 +29,18 @@ final class Morgan {
         long[] fp = new long[BITS / 64];
         int[] id = new int[n];
         for (int i = 0; i < n; i++) {
-            int x = mix(mix(mix(mix(mix(mix(0x9747b28c, mol.atomicNumber(i)), nbr[i].length), mol.implicitHydrogens(i)),
-                    mol.formalCharge(i) + 8), mol.aromatic(i) ? 1 : 0), mol.inRing(i) ? 1 : 0);
+            // the invariants packed into one word (each clipped to its field), then hashed once
+            int packed = Math.min(mol.atomicNumber(i), 255) | Math.min(nbr[i].length, 15) << 8
+                    | Math.min(mol.implicitHydrogens(i), 15) << 12 | (Math.max(-8, Math.min(mol.formalCharge(i), 7)) + 8) << 16
+                    | (mol.aromatic(i) ? 1 : 0) << 20 | (mol.inRing(i) ? 1 : 0) << 21;
+            int x = mix(0x9747b28c, packed);
             id[i] = x;
             set(fp, x);
         }
         long[] pairs = new long[8];
         for (int round = 1; round <= RADIUS; round++) {
             int[] next = new int[n];
+            int seed = mix(0x5bd1e995, round);
             for (int i = 0; i < n; i++) {
                 int d = nbr[i].length;
                 if (pairs.length < d) {
@@ -46,9 +50,10 @@ final class Morgan {
                     pairs[k] = ((long) mol.bondCode(i, k) << 32) | (id[nbr[i][k]] & 0xffffffffL);
                 }
                 sort(pairs, d);
-                int x = mix(mix(0x5bd1e995, round), id[i]);
+                int x = mix(seed, id[i]);
                 for (int k = 0; k < d; k++) {
-                    x = mix(mix(x, (int) (pairs[k] >>> 32)), (int) pairs[k]);
+                    // bond code (0-4) and neighbour identifier in one step
+                    x = mix(x, (int) pairs[k] ^ (int) (pairs[k] >>> 32) * 0x9E3779B1);
                 }
                 next[i] = x;
                 set(fp, x);
