@@ -10,6 +10,7 @@ import java.util.Set;
 import java.util.TreeSet;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.function.Function;
+import java.util.function.Predicate;
 
 import org.openscience.cdk.CDKConstants;
 import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
@@ -169,21 +170,7 @@ public final class CompiledTable {
     private static <T> List<T> screened(Map<Long, List<T>> cache, List<T> all, Function<T, RootedPattern> p,
             RootedPattern.Target t, int atom) {
         long key = t.signature(atom);
-        List<T> known = key < 0 ? null : cache.get(key);
-        if (known != null) {
-            return known;
-        }
-        List<T> out = new ArrayList<>();
-        for (T x : all) {
-            if (p.apply(x).rootMayMatch(t, atom)) {
-                out.add(x);
-            }
-        }
-        out = List.copyOf(out);
-        if (key >= 0 && cache.size() < MAX_SIGNATURES) {
-            cache.put(key, out);
-        }
-        return out;
+        return filtered(cache, key < 0 ? null : key, MAX_SIGNATURES, all, x -> p.apply(x).rootMayMatch(t, atom));
     }
 
     private static <T> List<T> nearby(Map<Neighbourhood, List<T>> cache, List<T> candidates,
@@ -191,19 +178,27 @@ public final class CompiledTable {
         if (candidates.isEmpty()) {
             return candidates;
         }
-        Neighbourhood key = Neighbourhood.of(t, atom);
+        return filtered(cache, Neighbourhood.of(t, atom), MAX_NEIGHBOURHOODS, candidates,
+                x -> p.apply(x).neighboursMayMatch(t, atom));
+    }
+
+    /**
+     * The entries of {@code from} that {@code keep} accepts, kept under {@code key} (null: not cached)
+     * while the cache holds fewer than {@code max} lists.
+     */
+    private static <K, T> List<T> filtered(Map<K, List<T>> cache, K key, int max, List<T> from, Predicate<T> keep) {
         List<T> known = key == null ? null : cache.get(key);
         if (known != null) {
             return known;
         }
         List<T> out = new ArrayList<>();
-        for (T x : candidates) {
-            if (p.apply(x).neighboursMayMatch(t, atom)) {
+        for (T x : from) {
+            if (keep.test(x)) {
                 out.add(x);
             }
         }
-        out = out.size() == candidates.size() ? candidates : List.copyOf(out);
-        if (key != null && cache.size() < MAX_NEIGHBOURHOODS) {
+        out = out.size() == from.size() ? from : List.copyOf(out);
+        if (key != null && cache.size() < max) {
             cache.put(key, out);
         }
         return out;
