@@ -383,7 +383,6 @@ public final class Engine {
         return q;
     }
 
-    /** The numeric model at the conditions: corrected site pKa values and interactions from bond distances. */
     /**
      * Position of {@code s} itself in {@code l}. Records compare by value, which walks every derivation
      * term; the same object is what is meant here.
@@ -397,7 +396,10 @@ public final class Engine {
         return -1;
     }
 
-    /** {@code dist}: {@link #distances} of these sites. */
+    /**
+     * The numeric model at the conditions: corrected site pKa values and interactions from bond distances
+     * ({@code dist}, the {@link #distances} of these sites).
+     */
     private SiteModel model(int[][] dist, List<EstimatedSite> est, Conditions c) {
         List<EstimatedSite> titr = new ArrayList<>(est.size());
         List<EstimatedSite> perm = new ArrayList<>(0);

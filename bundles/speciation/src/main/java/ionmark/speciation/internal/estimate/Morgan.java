@@ -7,8 +7,8 @@ import ionmark.speciation.internal.sites.RootedPattern;
  * Circular (Morgan) fingerprint of radius 2, in the manner of extended-connectivity fingerprints
  * (Rogers, D.; Hahn, M. J. Chem. Inf. Model. 2010, 50, 742–754): every atom starts from a hash of
  * its own invariants (element, heavy-atom degree, hydrogens, formal charge, aromaticity, ring
- * membership, packed into one word); each round hashes the atom's identifier with the sorted (bond, neighbour identifier)
- * pairs around it. Identifiers of rounds 0, 1 and 2 are folded into {@link #BITS} bits. Only used to
+ * membership, packed into one word); each round hashes the atom's identifier with the sorted
+ * (bond, neighbour identifier) pairs around it. Identifiers of rounds 0, 1 and 2 are folded into {@link #BITS} bits. Only used to
  * rank measured analogs by Tanimoto similarity, so the exact hash function is an internal matter;
  * it is the same for the query and the measured compounds.
  *

@@ -424,11 +424,12 @@ public final class RootedPattern {
         private final IAtomContainer mol;
         /** The smallest set of smallest rings (CDK's minimum cycle basis) and ring counts, when first asked. */
         private int[][] rings;
-        private static final CycleFinder SSSR = Cycles.mcb();
         private int[] ringCounts;
         /** Signatures by atom, {@link #UNKNOWN} until asked for; -1 stays -1 (does not fit). */
         private long[] signatures;
         private static final long UNKNOWN = Long.MIN_VALUE;
+        /** CDK's minimum cycle basis, the same rings as {@code Cycles.sssr}. */
+        private static final CycleFinder SSSR = Cycles.mcb();
 
         public Target(IAtomContainer mol) {
             this.mol = mol;
