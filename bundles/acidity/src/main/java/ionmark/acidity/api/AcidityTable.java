@@ -17,17 +17,26 @@ public final class AcidityTable {
     private final List<Substituent> substituents;
     private final List<MeasuredCompound> measured;
     private final SiteInteraction interaction;
+    private final List<PairRule> pairs;
     private final Map<String, Reference> referenceIndex;
     private final Map<String, GroupClass> groupIndex;
 
     public AcidityTable(TableVersion version, List<Reference> references, List<GroupClass> groups,
             List<Substituent> substituents, List<MeasuredCompound> measured, SiteInteraction interaction) {
+        this(version, references, groups, substituents, measured, interaction, List.of());
+    }
+
+    /** A table with hydrogen-bonded pair rules on top of the charge-distance interaction. */
+    public AcidityTable(TableVersion version, List<Reference> references, List<GroupClass> groups,
+            List<Substituent> substituents, List<MeasuredCompound> measured, SiteInteraction interaction,
+            List<PairRule> pairs) {
         this.version = Objects.requireNonNull(version, "version");
         this.references = List.copyOf(references);
         this.groups = List.copyOf(groups);
         this.substituents = List.copyOf(substituents);
         this.measured = List.copyOf(measured);
         this.interaction = Objects.requireNonNull(interaction, "interaction");
+        this.pairs = List.copyOf(pairs);
         var r = new LinkedHashMap<String, Reference>();
         this.references.forEach(x -> r.putIfAbsent(x.id(), x));
         this.referenceIndex = Map.copyOf(r);
@@ -42,6 +51,8 @@ public final class AcidityTable {
     public List<Substituent> substituents() { return substituents; }
     public List<MeasuredCompound> measured() { return measured; }
     public SiteInteraction interaction() { return interaction; }
+    /** Hydrogen-bonded pairs whose singly charged state the distance rule underrates. */
+    public List<PairRule> pairs() { return pairs; }
 
     public Optional<GroupClass> group(String id) {
         return Optional.ofNullable(groupIndex.get(id));
@@ -55,16 +66,21 @@ public final class AcidityTable {
 
     /** A copy with other version metadata (content unchanged). */
     public AcidityTable withVersion(TableVersion v) {
-        return new AcidityTable(v, references, groups, substituents, measured, interaction);
+        return new AcidityTable(v, references, groups, substituents, measured, interaction, pairs);
     }
 
     /** A copy with other group classes (used by calibration and by admin drafts). */
     public AcidityTable withGroups(List<GroupClass> g) {
-        return new AcidityTable(version, references, g, substituents, measured, interaction);
+        return new AcidityTable(version, references, g, substituents, measured, interaction, pairs);
+    }
+
+    /** A copy with other pair rules (used by calibration). */
+    public AcidityTable withPairs(List<PairRule> p) {
+        return new AcidityTable(version, references, groups, substituents, measured, interaction, p);
     }
 
     /** A copy with other references. */
     public AcidityTable withReferences(List<Reference> r) {
-        return new AcidityTable(version, r, groups, substituents, measured, interaction);
+        return new AcidityTable(version, r, groups, substituents, measured, interaction, pairs);
     }
 }

@@ -54,6 +54,20 @@ final class Patterns {
         return new Compiled(p, site, q.getAtomCount(), null);
     }
 
+    /** How many atoms of a SMARTS that compiles carry atom map {@code map}. */
+    static int mapped(String smarts, int map) {
+        QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
+        if (!Smarts.parse(q, smarts)) {
+            return 0;
+        }
+        int n = 0;
+        for (IAtom a : q.atoms()) {
+            Integer m = a.getProperty(CDKConstants.ATOM_ATOM_MAPPING);
+            n += m != null && m == map ? 1 : 0;
+        }
+        return n;
+    }
+
     static IAtomContainer parseSmiles(String smiles) throws InvalidSmilesException {
         return new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
     }

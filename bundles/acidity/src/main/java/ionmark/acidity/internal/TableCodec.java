@@ -21,6 +21,7 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.acidity.api.Problem;
 import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.Relation;
+import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.SiteInteraction;
 import ionmark.acidity.api.SiteType;
 import ionmark.acidity.api.Substituent;
@@ -97,8 +98,12 @@ final class TableCodec {
         each(root, "substituents", f, (n, p) -> subs.add(readSubstituent(n, p, f)));
         List<MeasuredCompound> measured = new ArrayList<>();
         each(root, "measured", f, (n, p) -> measured.add(readMeasured(n, p, f)));
+        List<PairRule> pairs = new ArrayList<>();
+        if (root.has("pairs")) { // optional: tables before pair rules have none
+            each(root, "pairs", f, (n, p) -> pairs.add(readPair(n, p, f)));
+        }
         SiteInteraction interaction = readInteraction(root.path("interaction"), "$.interaction", f);
-        AcidityTable table = new AcidityTable(version, refs, groups, subs, measured, interaction);
+        AcidityTable table = new AcidityTable(version, refs, groups, subs, measured, interaction, pairs);
         return new Read(table, root, problems);
     }
 
@@ -175,6 +180,12 @@ final class TableCodec {
         return new MeasuredCompound(f.text(n, p, "id"), n.path("name").asText(""), f.text(n, p, "smiles"), pka,
                 n.path("temperature").asDouble(25.0), n.path("ionicStrength").asDouble(0.0),
                 n.path("method").asText(""), n.path("source").asText(""), f.strings(n, p, "groups"));
+    }
+
+    private static PairRule readPair(JsonNode n, String p, Fields f) {
+        return new PairRule(f.text(n, p, "id"), f.text(n, p, "name"), f.text(n, p, "smarts"),
+                f.number(n, p, "singly", true), f.number(n, p, "doubly", true), n.path("source").asText(""), n.path("note").asText(""),
+                f.strings(n, p, "matches"));
     }
 
     private static SiteInteraction readInteraction(JsonNode n, String p, Fields f) {
@@ -291,6 +302,9 @@ final class TableCodec {
         block(sb, "groups", t.groups().stream().map(TableCodec::groupNode).toList(), false);
         block(sb, "substituents", t.substituents().stream().map(TableCodec::substituentNode).toList(), false);
         block(sb, "measured", t.measured().stream().map(TableCodec::measuredNode).toList(), false);
+        if (!t.pairs().isEmpty()) { // absent when empty: older tables keep their content hash
+            block(sb, "pairs", t.pairs().stream().map(TableCodec::pairNode).toList(), false);
+        }
         SiteInteraction si = t.interaction();
         ObjectNode in = JSON.createObjectNode();
         ArrayNode sh = in.putArray("shifts");
@@ -370,6 +384,22 @@ final class TableCodec {
         o.put("source", m.source());
         ArrayNode g = o.putArray("groups");
         m.groups().forEach(g::add);
+        return o;
+    }
+
+    private static ObjectNode pairNode(PairRule r) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("id", r.id());
+        o.put("name", r.name());
+        o.put("smarts", r.smarts());
+        o.put("singly", r.singly());
+        o.put("doubly", r.doubly());
+        o.put("source", r.source());
+        if (!r.note().isEmpty()) {
+            o.put("note", r.note());
+        }
+        ArrayNode m = o.putArray("matches");
+        r.matches().forEach(m::add);
         return o;
     }
 

@@ -17,6 +17,7 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.acidity.api.Problem;
 import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.Relation;
+import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.SiteInteraction;
 import ionmark.acidity.api.Substituent;
 import ionmark.acidity.api.ValidationReport;
@@ -51,6 +52,7 @@ final class TableValidator {
         checkSubstituents(t, refIds, out);
         checkMeasured(t, refIds, compiled, out);
         checkInteraction(t.interaction(), refIds, out);
+        checkPairs(t, refIds, out);
         if (!t.version().hash().isEmpty() && !t.version().hash().equals(TableCodec.hash(t))) {
             out.add(warn("$.version.hash", "content hash does not match the content (edited by hand?); "
                     + "it is recomputed when the table is written"));
@@ -237,6 +239,45 @@ final class TableValidator {
             GroupClass g = t.groups().get(i);
             if (!exercised.contains(g.id()) && !g.id().isEmpty()) {
                 out.add(warn("$.groups[" + i + "]", "no measured compound exercises group class '" + g.id() + "'"));
+            }
+        }
+    }
+
+    /**
+     * Pair rules: unique ids, a pattern with exactly one atom mapped :1 and one mapped :2, a
+     * singly and doubly charged terms between 0 and 6 pKa units with their source, and examples the
+     * pattern matches.
+     */
+    private static void checkPairs(AcidityTable t, Set<String> refIds, List<Problem> out) {
+        Set<String> ids = new HashSet<>();
+        for (int i = 0; i < t.pairs().size(); i++) {
+            PairRule r = t.pairs().get(i);
+            String p = "$.pairs[" + i + "]";
+            if (!r.id().isEmpty() && !ids.add(r.id())) {
+                out.add(err(p + ".id", "duplicate pair rule id '" + r.id() + "'"));
+            }
+            Patterns.Compiled c = Patterns.compile(r.smarts(), true);
+            if (!c.ok()) {
+                if (!r.smarts().isBlank()) {
+                    out.add(err(p + ".smarts", c.error()));
+                }
+            } else if (Patterns.mapped(r.smarts(), 1) != 1 || Patterns.mapped(r.smarts(), 2) != 1) {
+                out.add(err(p + ".smarts", "a pair rule maps exactly one atom :1 and one atom :2 (the two sites)"));
+            } else {
+                for (int k = 0; k < r.matches().size(); k++) {
+                    Optional<IAtomContainer> mol = smiles(r.matches().get(k), p + ".matches[" + k + "]", out);
+                    if (mol.isPresent() && Patterns.siteAtoms(c, mol.get()).isEmpty()) {
+                        out.add(err(p + ".matches[" + k + "]", "the pattern does not match its own example '"
+                                + r.matches().get(k) + "'"));
+                    }
+                }
+            }
+            range(out, p + ".singly", r.singly(), 0, 6, "singly charged stabilisation (pKa units)");
+            range(out, p + ".doubly", r.doubly(), 0, 6, "doubly charged destabilisation (pKa units)");
+            if (r.source().isEmpty()) {
+                out.add(err(p + ".source", "the pair values need their source"));
+            } else if (!refIds.contains(r.source())) {
+                out.add(err(p + ".source", "unknown reference '" + r.source() + "'"));
             }
         }
     }

@@ -91,8 +91,9 @@ class ShippedTableTest {
 
     /**
      * The shipped table is the calibration base with fitted numbers: same classes in the same order
-     * with the same patterns, types and relations; same substituents, measured compounds and
-     * interaction parameters. A class rule changed in one file and not the other fails here.
+     * with the same patterns, types and relations; same substituents, measured compounds,
+     * interaction parameters and pair-rule patterns. A class or pair rule changed in one file and not
+     * the other fails here.
      */
     @Test
     void shippedTableIsTheCalibrationBaseWithFittedNumbers() throws IOException {
@@ -116,5 +117,7 @@ class ShippedTableTest {
         assertTrue(java.util.Arrays.deepEquals(base.interaction().shifts().toArray(), shipped.interaction().shifts().toArray()));
         assertEquals(base.interaction().decay(), shipped.interaction().decay());
         assertEquals(base.interaction().cutoff(), shipped.interaction().cutoff());
+        assertEquals(base.pairs().stream().map(p -> p.id() + " " + p.smarts()).toList(),
+                shipped.pairs().stream().map(p -> p.id() + " " + p.smarts()).toList());
     }
 }

@@ -393,6 +393,11 @@ public final class Cli {
         String citation = a.flags().getOrDefault("--citation", "Calibration data " + a.flags().get("--truth") + ".");
         TableCalibration.Result r = calibration.calibrate(tables.current(), data, ref, citation);
         for (var fit : r.fits()) {
+            if (fit.group().startsWith("pair ")) { // a pair rule: its two values, fitted on the whole model only
+                out.println(String.format(Locale.ROOT, "%-32s singly %.2f -> %.2f  doubly %.2f -> %.2f  (whole model on %d)",
+                        fit.group(), fit.pkaBefore(), fit.pkaAfter(), fit.rhoBefore(), fit.rhoAfter(), fit.wholeModelN()));
+                continue;
+            }
             out.println(String.format(Locale.ROOT, "%-32s n=%4d trimmed=%3d pKa %6.2f -> %6.2f  rho %6.2f -> %6.2f  "
                     + "RMSE %.2f%s", fit.group(), fit.n(), fit.trimmed(), fit.pkaBefore(), fit.pkaAfter(), fit.rhoBefore(),
                     fit.rhoAfter(), fit.rmse(), fit.rejected() ? "  REJECTED (moves too far; class unchanged)"

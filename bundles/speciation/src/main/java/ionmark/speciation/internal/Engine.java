@@ -109,10 +109,11 @@ public final class Engine {
         List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(target);
-        // the sites keep their order from here on: one distance matrix serves every model below
-        int[][] dist = distances(adj, est);
+        // the sites keep their order from here on: one interaction matrix serves every model below
+        double[][] inter = interactions(distances(adj, est));
+        est = heldPairs(target, est, inter, new java.util.HashSet<>());
         if (measured.isPresent()) {
-            est = fitToMeasured(mol, adj, dist, est, measured.get());
+            est = fitToMeasured(mol, adj, inter, est, measured.get());
         } else {
             // the fingerprint only when some site's class has a measured analog to compare with
             if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
@@ -121,10 +122,10 @@ public final class Engine {
             }
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
-        SiteModel model = model(dist, est, c);
+        SiteModel model = model(inter, est, c);
         double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
         final List<EstimatedSite> sitesNow = est;
-        List<Double> measuredHere = measured.map(m -> atConditions(m, dist, sitesNow, poly)).orElse(List.of());
+        List<Double> measuredHere = measured.map(m -> atConditions(m, inter, sitesNow, poly)).orElse(List.of());
         return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
     }
 
@@ -133,9 +134,9 @@ public final class Engine {
      * the matching constant between 25 °C, I = 0 and the stated temperature and ionic strength
      * (van 't Hoff per class enthalpy, Davies). Exact at standard conditions.
      */
-    private List<Double> atConditions(MeasuredCompound m, int[][] dist, List<EstimatedSite> est, double[] poly) {
+    private List<Double> atConditions(MeasuredCompound m, double[][] inter, List<EstimatedSite> est, double[] poly) {
         List<Double> here = MacroConstants.of(poly);
-        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(dist, est, Conditions.noPh()),
+        List<Double> std = MacroConstants.of(MacroConstants.polynomial(model(inter, est, Conditions.noPh()),
                 table.table().interaction().cutoff()));
         if (here.size() != std.size() || here.size() < m.pka().size()) {
             return m.pka();
@@ -158,6 +159,21 @@ public final class Engine {
             out.add(m.pka().get(i) + here.get(start + i) - std.get(start + i));
         }
         return out;
+    }
+
+    /** Ids of the table's pair rules that join two sites of this structure (none when it cannot be read). */
+    public java.util.Set<String> pairRules(String input) {
+        try {
+            StructureReader.Prepared prep = reader.read(input);
+            RootedPattern.Target target = new RootedPattern.Target(prep.molecule());
+            List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(), target,
+                    SitePerceiver.perceive(table, target));
+            java.util.Set<String> used = new java.util.TreeSet<>();
+            heldPairs(target, est, interactions(distances(target.adjacency(), est)), used);
+            return used;
+        } catch (StructureException | RuntimeException e) {
+            return java.util.Set.of();
+        }
     }
 
     /**
@@ -198,7 +214,7 @@ public final class Engine {
      * ones. The k measured values are given to the k sites (in pKa order) whose estimates lie
      * closest to them; the shifts are found by damped Gauss–Newton on the macroscopic constants.
      */
-    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, int[][] adj, int[][] dist, List<EstimatedSite> est,
+    private List<EstimatedSite> fitToMeasured(IAtomContainer mol, int[][] adj, double[][] inter, List<EstimatedSite> est,
             MeasuredCompound m) {
         List<EstimatedSite> titr = new ArrayList<>(est.stream().filter(s -> !s.site().group().permanent()).toList());
         int k = m.pka().size();
@@ -243,7 +259,7 @@ public final class Engine {
             shift[i] = param[classOf[i]];
         }
         // the model at standard conditions is built once; a shift moves only its site values
-        SiteModel standard = model(dist, est, Conditions.noPh());
+        SiteModel standard = model(inter, est, Conditions.noPh());
         List<EstimatedSite> order = est.stream().filter(s -> !s.site().group().permanent()).toList();
         int[] at = new int[k];
         for (int i = 0; i < k; i++) {
@@ -397,10 +413,10 @@ public final class Engine {
     }
 
     /**
-     * The numeric model at the conditions: corrected site pKa values and interactions from bond distances
-     * ({@code dist}, the {@link #distances} of these sites).
+     * The numeric model at the conditions: corrected site pKa values and the interactions
+     * ({@code inter}, from {@link #interactions} and {@link #heldPairs} for these sites).
      */
-    private SiteModel model(int[][] dist, List<EstimatedSite> est, Conditions c) {
+    private SiteModel model(double[][] inter, List<EstimatedSite> est, Conditions c) {
         List<EstimatedSite> titr = new ArrayList<>(est.size());
         List<EstimatedSite> perm = new ArrayList<>(0);
         for (EstimatedSite s : est) {
@@ -420,12 +436,12 @@ public final class Engine {
         for (int i = 0; i < n; i++) {
             for (int j = 0; j < n; j++) {
                 if (i != j) {
-                    w[i][j] = table.table().interaction().at(dist[i][j]);
+                    w[i][j] = inter[i][j];
                 }
             }
             for (int p = 0; p < perm.size(); p++) {
                 double q = perm.get(p).site().group().type() == SiteType.BASE ? 1 : -1;
-                bg[i] += table.table().interaction().at(dist[i][n + p]) * q;
+                bg[i] += inter[i][n + p] * q;
             }
         }
         return new SiteModel(pka, base, w, bg);
@@ -435,6 +451,80 @@ public final class Engine {
         List<EstimatedSite> out = new ArrayList<>(titratable);
         all.stream().filter(s -> s.site().group().permanent()).forEach(out::add);
         return out;
+    }
+
+    /** The charge-distance interaction for every pair of sites, indexed as {@link #distances}. */
+    private double[][] interactions(int[][] dist) {
+        int k = dist.length;
+        double[][] w = new double[k][k];
+        for (int i = 0; i < k; i++) {
+            for (int j = 0; j < k; j++) {
+                w[i][j] = i == j ? 0 : table.table().interaction().at(dist[i][j]);
+            }
+        }
+        return w;
+    }
+
+    /**
+     * The table's pair rules applied: for every two titratable sites of one kind that a rule joins
+     * (its :1 atom on one site, its :2 atom on the other; the first rule in table order wins), both
+     * values move by the rule's singly charged term (acids down, bases up, each with its derivation
+     * term) and {@link ionmark.acidity.api.PairRule#interaction()} is added to the pair's entry in
+     * {@code inter}; {@code used} collects the rule ids. A site in no pair is returned as it came.
+     */
+    private List<EstimatedSite> heldPairs(RootedPattern.Target target, List<EstimatedSite> est, double[][] inter,
+            java.util.Set<String> used) {
+        List<CompiledTable.Pair> rules = table.pairs();
+        if (rules.isEmpty()) {
+            return est;
+        }
+        List<EstimatedSite> titr = est.stream().filter(s -> !s.site().group().permanent()).toList();
+        if (titr.size() < 2) {
+            return est;
+        }
+        int[] siteAt = new int[target.atomCount()];
+        Arrays.fill(siteAt, -1);
+        for (int k = 0; k < titr.size(); k++) {
+            siteAt[titr.get(k).site().atom()] = k;
+        }
+        EstimatedSite[] now = titr.toArray(new EstimatedSite[0]);
+        boolean[][] joined = new boolean[titr.size()][titr.size()];
+        for (CompiledTable.Pair rule : rules) {
+            for (int i = 0; i < titr.size(); i++) {
+                final int a = i;
+                rule.pattern().forEach(target, titr.get(i).site().atom(), m -> {
+                    int b = siteAt[m[rule.partner()]];
+                    if (b < 0 || b == a || joined[a][b]
+                            || titr.get(a).site().group().type() != titr.get(b).site().group().type()) {
+                        return true;
+                    }
+                    joined[a][b] = true;
+                    joined[b][a] = true;
+                    used.add(rule.rule().id());
+                    inter[a][b] += rule.rule().interaction();
+                    inter[b][a] += rule.rule().interaction();
+                    now[a] = held(now[a], titr.get(b), rule.rule());
+                    now[b] = held(now[b], titr.get(a), rule.rule());
+                    return true;
+                });
+            }
+        }
+        List<EstimatedSite> out = new ArrayList<>(est.size());
+        for (EstimatedSite s : est) {
+            int k = indexOf(titr, s);
+            out.add(k < 0 ? s : now[k]);
+        }
+        return out;
+    }
+
+    private EstimatedSite held(EstimatedSite s, EstimatedSite partner, ionmark.acidity.api.PairRule rule) {
+        boolean base = s.site().group().type() == SiteType.BASE;
+        double d = base ? rule.singly() : -rule.singly();
+        String label = String.format(Locale.ROOT, "pair rule with the %s site on atom %d (%s): singly %s form held "
+                + "by %.2f, doubly %s form dearer by %.2f; the pair's interaction grows by %.2f",
+                partner.site().group().id(), partner.site().atom(), rule.name(), base ? "protonated" : "deprotonated",
+                rule.singly(), base ? "protonated" : "deprotonated", rule.doubly(), rule.interaction());
+        return s.shifted(d, new Term(label, d, table.table().citation(rule.source())), s.basis(), s.sd());
     }
 
     /** Bond distances between the sites' atoms: titratable sites first, then permanent ones. */

@@ -12,6 +12,7 @@ import java.util.TreeSet;
 
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.Relation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
@@ -122,6 +123,7 @@ final class ModelCalibration {
                 }
             }
         }
+        t = refinePairs(t, usable, refId);
         t = withHonestSd(t, usable, refId);
         List<Move> moves = new ArrayList<>();
         List<GroupClass> groups = new ArrayList<>();
@@ -153,7 +155,89 @@ final class ModelCalibration {
                     g.attenuation(), g.resonance(), g.enthalpy(), g.sd(), g.permanent(), g.sources(), note, g.matches(),
                     g.misses()));
         }
+        moves.addAll(pairMoves);
         return new Outcome(t.withGroups(groups), moves);
+    }
+
+    /** Pair-rule moves of the last {@link #refine}, reported with the class moves. */
+    private final List<Move> pairMoves = new ArrayList<>();
+
+    /**
+     * Each pair rule's two values refined like a class value, after the classes: the same loss over
+     * the compounds where the rule joins two sites, the same prior on the starting values, steps of
+     * {@link #STEPS} on one value at a time, at most {@link #MAX_SHIFT} from the start and never below
+     * 0. A rule with fewer than {@link #MIN_COMPOUNDS} compounds keeps its values.
+     */
+    AcidityTable refinePairs(AcidityTable start, List<Observation> usable, String refId) {
+        pairMoves.clear();
+        if (start.pairs().isEmpty()) {
+            return start;
+        }
+        Engine e0 = new Engine(start, maxHeavyAtoms);
+        Map<String, List<Observation>> byRule = new LinkedHashMap<>();
+        usable.parallelStream().map(o -> Map.entry(o, e0.pairRules(o.structure()))).toList().forEach(en ->
+                en.getValue().forEach(r -> byRule.computeIfAbsent(r, k -> new ArrayList<>()).add(en.getKey())));
+        AcidityTable t = start;
+        for (PairRule r0 : start.pairs()) {
+            List<Observation> obs = byRule.getOrDefault(r0.id(), List.of());
+            if (obs.size() < MIN_COMPOUNDS) {
+                continue;
+            }
+            java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(new Engine(x, maxHeavyAtoms), obs)
+                    + PRIOR_WEIGHT * (huber(pair(x, r0.id()).singly() - r0.singly())
+                            + huber(pair(x, r0.id()).doubly() - r0.doubly()));
+            double[] best = {objective.applyAsDouble(t)};
+            double lossBefore = best[0];
+            for (double step : STEPS) {
+                for (int pass = 0; pass < 4; pass++) {
+                    AcidityTable chosen = t;
+                    for (int which = 0; which < 2; which++) {
+                        PairRule now = pair(chosen, r0.id());
+                        AcidityTable round = chosen;
+                        for (double d : new double[] {-2 * step, -step, step, 2 * step}) {
+                            double s1 = which == 0 ? round(now.singly() + d) : now.singly();
+                            double s2 = which == 1 ? round(now.doubly() + d) : now.doubly();
+                            if (Math.min(s1, s2) < 0 || Math.max(s1, s2) > 6 || Math.abs(s1 - r0.singly()) > MAX_SHIFT
+                                    || Math.abs(s2 - r0.doubly()) > MAX_SHIFT) {
+                                continue;
+                            }
+                            AcidityTable trial = withPair(round, r0.id(), s1, s2, r0.source(), r0.note());
+                            double l = objective.applyAsDouble(trial);
+                            if (l < best[0] - 1e-9) {
+                                best[0] = l;
+                                chosen = trial;
+                            }
+                        }
+                    }
+                    if (chosen == t) {
+                        break;
+                    }
+                    t = chosen;
+                }
+            }
+            PairRule end = pair(t, r0.id());
+            if (Math.abs(end.singly() - r0.singly()) < 1e-9 && Math.abs(end.doubly() - r0.doubly()) < 1e-9) {
+                continue;
+            }
+            pairMoves.add(new Move("pair " + r0.id(), obs.size(), r0.singly(), end.singly(), r0.doubly(), end.doubly(),
+                    lossBefore, best[0]));
+            String how = (r0.note().isBlank() ? "" : r0.note() + "; ") + String.format(Locale.ROOT,
+                    "%s whole-model refinement: %d compounds where the rule joins two sites, singly %.2f -> %.2f, "
+                            + "doubly %.2f -> %.2f, objective %.1f -> %.1f", refId, obs.size(), r0.singly(),
+                    end.singly(), r0.doubly(), end.doubly(), lossBefore, best[0]);
+            t = withPair(t, r0.id(), end.singly(), end.doubly(), refId, how);
+        }
+        return t;
+    }
+
+    private static PairRule pair(AcidityTable t, String id) {
+        return t.pairs().stream().filter(r -> r.id().equals(id)).findFirst().orElseThrow();
+    }
+
+    private static AcidityTable withPair(AcidityTable t, String id, double singly, double doubly, String source,
+            String note) {
+        return t.withPairs(t.pairs().stream().map(r -> r.id().equals(id) ? r.withValues(singly, doubly, source, note)
+                : r).toList());
     }
 
     /**

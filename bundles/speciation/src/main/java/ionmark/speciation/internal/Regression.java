@@ -125,6 +125,16 @@ final class Regression {
         if (!head.interaction().asMap().equals(draft.interaction().asMap())) {
             out.add("site interactions");
         }
+        for (ionmark.acidity.api.PairRule r : draft.pairs()) {
+            if (!head.pairs().contains(r)) {
+                out.add("pair rule " + r.id());
+            }
+        }
+        for (ionmark.acidity.api.PairRule r : head.pairs()) {
+            if (draft.pairs().stream().noneMatch(x -> x.id().equals(r.id()))) {
+                out.add("pair rule " + r.id() + " (removed)");
+            }
+        }
         return new ArrayList<>(out);
     }
 }

@@ -14,7 +14,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 /** Differences between two table texts by record (id) and field, not by text line. */
 final class TableDiff {
     private static final ObjectMapper JSON = new ObjectMapper();
-    private static final List<String> SECTIONS = List.of("references", "groups", "substituents", "measured");
+    private static final List<String> SECTIONS = List.of("references", "groups", "substituents", "measured", "pairs");
 
     private TableDiff() {
     }

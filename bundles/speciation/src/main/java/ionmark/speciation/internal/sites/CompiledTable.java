@@ -19,6 +19,7 @@ import org.openscience.cdk.smarts.Smarts;
 
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.Substituent;
 
 /**
@@ -34,7 +35,12 @@ public final class CompiledTable {
     public record Sub(Substituent substituent, RootedPattern pattern, int size, int order) {
     }
 
+    /** A pair rule, its pattern rooted at the :1 site, and the query index of the :2 site. */
+    public record Pair(PairRule rule, RootedPattern pattern, int partner) {
+    }
+
     private final AcidityTable table;
+    private final List<Pair> pairs;
     private final List<Group> groups;
     private final List<Sub> substituents;
     /** Indexed by atomic number; elements no root names share the list of unconfined roots. */
@@ -82,6 +88,24 @@ public final class CompiledTable {
         }
         s.sort(Comparator.comparingInt((Sub x) -> -x.size()).thenComparingInt(Sub::order));
         this.substituents = List.copyOf(s);
+        List<Pair> pr = new ArrayList<>();
+        for (PairRule r : table.pairs()) {
+            QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
+            if (!Smarts.parse(q, r.smarts())) {
+                continue;
+            }
+            int one = -1;
+            int two = -1;
+            for (int k = 0; k < q.getAtomCount(); k++) {
+                Integer map = q.getAtom(k).getProperty(CDKConstants.ATOM_ATOM_MAPPING);
+                one = map != null && map == 1 ? k : one;
+                two = map != null && map == 2 ? k : two;
+            }
+            if (one >= 0 && two >= 0) {
+                pr.add(new Pair(r, new RootedPattern(q, one, recursions), two));
+            }
+        }
+        this.pairs = List.copyOf(pr);
         this.groupsByElement = byAtomicNumber(byRootElement(this.groups, Group::pattern),
                 anyRootElement(this.groups, Group::pattern));
         this.subsByElement = byAtomicNumber(byRootElement(this.substituents, Sub::pattern),
@@ -253,6 +277,11 @@ public final class CompiledTable {
     /** The substituents whose attachment atom can be of this element, most specific first. */
     public List<Sub> substituentsRootedAt(int atomicNumber) {
         return subsByElement.get(atomicNumber >= 0 && atomicNumber < ELEMENTS ? atomicNumber : 0);
+    }
+
+    /** The table's pair rules, compiled. */
+    public List<Pair> pairs() {
+        return pairs;
     }
 
     public AcidityTable table() {
