@@ -149,18 +149,23 @@ final class TableValidator {
     }
 
     private static void examples(GroupClass g, Patterns.Compiled c, String p, List<Problem> out) {
-        for (int k = 0; k < g.matches().size(); k++) {
-            Optional<IAtomContainer> mol = smiles(g.matches().get(k), p + ".matches[" + k + "]", out);
-            if (mol.isPresent() && Patterns.siteAtoms(c, mol.get()).isEmpty()) {
-                out.add(err(p + ".matches[" + k + "]", "the pattern does not match its own example '"
-                        + g.matches().get(k) + "'"));
-            }
-        }
+        mustMatch(g.matches(), c, p, out);
         for (int k = 0; k < g.misses().size(); k++) {
             Optional<IAtomContainer> mol = smiles(g.misses().get(k), p + ".misses[" + k + "]", out);
             if (mol.isPresent() && !Patterns.siteAtoms(c, mol.get()).isEmpty()) {
                 out.add(err(p + ".misses[" + k + "]", "the pattern matches '" + g.misses().get(k)
                         + "', listed as an example it must not match"));
+            }
+        }
+    }
+
+    /** Each example in {@code matches} (at {@code p}.matches) must be a SMILES the pattern matches. */
+    private static void mustMatch(List<String> matches, Patterns.Compiled c, String p, List<Problem> out) {
+        for (int k = 0; k < matches.size(); k++) {
+            Optional<IAtomContainer> mol = smiles(matches.get(k), p + ".matches[" + k + "]", out);
+            if (mol.isPresent() && Patterns.siteAtoms(c, mol.get()).isEmpty()) {
+                out.add(err(p + ".matches[" + k + "]", "the pattern does not match its own example '"
+                        + matches.get(k) + "'"));
             }
         }
     }
@@ -244,9 +249,9 @@ final class TableValidator {
     }
 
     /**
-     * Pair rules: unique ids, a pattern with exactly one atom mapped :1 and one mapped :2, a
-     * singly and doubly charged terms between 0 and 6 pKa units with their source, and examples the
-     * pattern matches.
+     * Pair rules: unique ids, a pattern with exactly one atom mapped :1 and one mapped :2, singly
+     * and doubly charged terms between 0 and 6 pKa units with their source, and examples the pattern
+     * matches.
      */
     private static void checkPairs(AcidityTable t, Set<String> refIds, List<Problem> out) {
         Set<String> ids = new HashSet<>();
@@ -264,13 +269,7 @@ final class TableValidator {
             } else if (Patterns.mapped(r.smarts(), 1) != 1 || Patterns.mapped(r.smarts(), 2) != 1) {
                 out.add(err(p + ".smarts", "a pair rule maps exactly one atom :1 and one atom :2 (the two sites)"));
             } else {
-                for (int k = 0; k < r.matches().size(); k++) {
-                    Optional<IAtomContainer> mol = smiles(r.matches().get(k), p + ".matches[" + k + "]", out);
-                    if (mol.isPresent() && Patterns.siteAtoms(c, mol.get()).isEmpty()) {
-                        out.add(err(p + ".matches[" + k + "]", "the pattern does not match its own example '"
-                                + r.matches().get(k) + "'"));
-                    }
-                }
+                mustMatch(r.matches(), c, p, out);
             }
             range(out, p + ".singly", r.singly(), 0, 6, "singly charged stabilisation (pKa units)");
             range(out, p + ".doubly", r.doubly(), 0, 6, "doubly charged destabilisation (pKa units)");
