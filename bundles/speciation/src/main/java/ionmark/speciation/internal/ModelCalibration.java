@@ -123,7 +123,8 @@ final class ModelCalibration {
                 }
             }
         }
-        t = refinePairs(t, usable, refId);
+        PairsRefined pairs = refinePairs(t, usable, refId);
+        t = pairs.table();
         t = withHonestSd(t, usable, refId);
         List<Move> moves = new ArrayList<>();
         List<GroupClass> groups = new ArrayList<>();
@@ -155,12 +156,13 @@ final class ModelCalibration {
                     g.attenuation(), g.resonance(), g.enthalpy(), g.sd(), g.permanent(), g.sources(), note, g.matches(),
                     g.misses()));
         }
-        moves.addAll(pairMoves);
+        moves.addAll(pairs.moves());
         return new Outcome(t.withGroups(groups), moves);
     }
 
-    /** Pair-rule moves of the last {@link #refine}, reported with the class moves. */
-    private final List<Move> pairMoves = new ArrayList<>();
+    /** The table with refined pair rules, and the rules that moved (reported with the class moves). */
+    record PairsRefined(AcidityTable table, List<Move> moves) {
+    }
 
     /**
      * Each pair rule's two values refined like a class value, after the classes: the same loss over
@@ -168,10 +170,10 @@ final class ModelCalibration {
      * {@link #STEPS} on one value at a time, at most {@link #MAX_SHIFT} from the start and never below
      * 0. A rule with fewer than {@link #MIN_COMPOUNDS} compounds keeps its values.
      */
-    AcidityTable refinePairs(AcidityTable start, List<Observation> usable, String refId) {
-        pairMoves.clear();
+    PairsRefined refinePairs(AcidityTable start, List<Observation> usable, String refId) {
+        List<Move> pairMoves = new ArrayList<>();
         if (start.pairs().isEmpty()) {
-            return start;
+            return new PairsRefined(start, pairMoves);
         }
         Engine e0 = new Engine(start, maxHeavyAtoms);
         Map<String, List<Observation>> byRule = new LinkedHashMap<>();
@@ -227,7 +229,7 @@ final class ModelCalibration {
                     end.singly(), r0.doubly(), end.doubly(), lossBefore, best[0]);
             t = withPair(t, r0.id(), end.singly(), end.doubly(), refId, how);
         }
-        return t;
+        return new PairsRefined(t, pairMoves);
     }
 
     private static PairRule pair(AcidityTable t, String id) {

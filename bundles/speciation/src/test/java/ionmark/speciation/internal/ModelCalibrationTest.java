@@ -76,4 +76,35 @@ class ModelCalibrationTest {
         assertEquals(0.5, ModelCalibration.huber(-1.0), 1e-12);
         assertEquals(2.5, ModelCalibration.huber(3.0), 1e-12);
     }
+
+    /**
+     * A pair rule displaced from the values that made the data is moved back toward them: six
+     * dialkylmalonic acids, observed with the shipped classes (no measured compounds, which would
+     * refit the sites) and rule values singly 1.7 / doubly 1.8, refined from the shipped values.
+     */
+    @Test
+    void aDisplacedPairRuleIsMovedBackTowardTheData() {
+        AcidityTable plain = new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(),
+                List.of(), TABLE.interaction(), TABLE.pairs());
+        ionmark.acidity.api.PairRule start = plain.pairs().stream().filter(r -> r.id().equals("malonic-dialkyl"))
+                .findFirst().orElseThrow();
+        AcidityTable truth = plain.withPairs(plain.pairs().stream()
+                .map(r -> r == start ? r.withValues(1.7, 1.8, r.source(), r.note()) : r).toList());
+        Engine e = new Engine(truth, 300);
+        List<Observation> data = new ArrayList<>();
+        for (String smiles : List.of("CCC(CC)(C(=O)O)C(=O)O", "CC(C)(C(=O)O)C(=O)O", "CCCC(CCC)(C(=O)O)C(=O)O",
+                "CCC(C)(C(=O)O)C(=O)O", "CC(C)C(C(=O)O)(C(=O)O)C(C)C", "CCC(C(=O)O)(C(=O)O)c1ccccc1")) {
+            data.add(new Observation("m" + data.size(), smiles, e.analyse(smiles, Conditions.noPh(), true).macroPka()));
+        }
+        ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
+        ionmark.acidity.api.PairRule found = r.table().pairs().stream().filter(x -> x.id().equals("malonic-dialkyl"))
+                .findFirst().orElseThrow();
+        // the prior (three compounds at the starting values) holds each value short of the truth
+        assertTrue(found.singly() > start.singly() + 0.5 * (1.7 - start.singly()) && found.singly() <= 1.9,
+                "singly " + start.singly() + " -> " + found.singly());
+        assertTrue(found.doubly() > start.doubly() + 0.5 * (1.8 - start.doubly()) && found.doubly() <= 2.0,
+                "doubly " + start.doubly() + " -> " + found.doubly());
+        assertEquals(1, r.moves().size());
+        assertTrue(found.note().contains("6 compounds where the rule joins two sites"), found.note());
+    }
 }
