@@ -40,6 +40,8 @@ import ionmark.speciation.api.Site;
 final class ModelCalibration {
     static final double HUBER = 1.0;
     static final int PRIOR_WEIGHT = 3;
+    /** Constants fitted per class (value, reaction constant, ortho factor or attenuation): the degrees of freedom the sd gives back. */
+    static final int FITTED_PER_CLASS = 3;
     static final int MIN_COMPOUNDS = 5;
     static final int MIN_COMPOUNDS_RHO = 15;
     static final double MIN_SD = 0.25;
@@ -245,7 +247,8 @@ final class ModelCalibration {
     /**
      * Class uncertainties from the refined model's own errors: for every paired value, the class of
      * the site whose estimate lies nearest the predicted constant takes the absolute error; a class's
-     * sd becomes the 68th percentile of its errors (what "within one sd" should cover), pooled with
+     * sd becomes the 68th percentile of its errors (what "within one sd" should cover), widened by
+     * √(n/(n−{@link #FITTED_PER_CLASS})) for the constants fitted to those same errors, pooled with
      * the current sd weighted as {@link #PRIOR_WEIGHT} values, between {@link #MIN_SD} and
      * {@link #MAX_SD}.
      */
@@ -264,6 +267,8 @@ final class ModelCalibration {
             }
             double q68 = err.stream().sorted().skip((long) Math.floor(0.68 * (err.size() - 1))).findFirst().orElseThrow();
             int n = err.size();
+            // the class's own fitted constants make its errors smaller than a new compound's will be
+            q68 *= Math.sqrt((double) n / Math.max(1, n - FITTED_PER_CLASS));
             double sd = Math.min(MAX_SD, Math.max(MIN_SD,
                     Math.sqrt((n * q68 * q68 + PRIOR_WEIGHT * g.sd() * g.sd()) / (n + PRIOR_WEIGHT))));
             gs.add(g.withSd(round(sd), refId));

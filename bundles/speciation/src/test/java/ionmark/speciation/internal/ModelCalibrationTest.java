@@ -107,4 +107,27 @@ class ModelCalibrationTest {
         assertEquals(1, r.moves().size());
         assertTrue(found.note().contains("6 compounds where the rule joins two sites"), found.note());
     }
+
+    /**
+     * A class sd covers its errors on data the class was not fitted to: six amines, each observed
+     * 0.5 above the model, give a 68th percentile of 0.5, widened by √(6/(6−3)) for the three
+     * constants a class fits, then pooled with the current sd counted as three values.
+     */
+    @Test
+    void classSdIsWidenedForTheConstantsFittedToTheSameErrors() {
+        AcidityTable plain = new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(),
+                List.of(), TABLE.interaction(), TABLE.pairs());
+        Engine e = new Engine(plain, 300);
+        List<Observation> data = new ArrayList<>();
+        for (String smiles : List.of("CCN", "CCCN", "CCCCN", "CC(C)CN", "CCCCCN", "NCC1CCCCC1")) {
+            double v = e.analyse(smiles, Conditions.noPh(), true).macroPka().get(0) + 0.5;
+            data.add(new Observation("a" + data.size(), smiles, List.of(v)));
+        }
+        GroupClass before = plain.groups().stream().filter(g -> g.id().equals("amine-primary")).findFirst().orElseThrow();
+        AcidityTable after = new ModelCalibration(300).withHonestSd(plain, data, "test-fit");
+        double widened = 0.5 * Math.sqrt(6.0 / 3.0);
+        double want = Math.sqrt((6 * widened * widened + 3 * before.sd() * before.sd()) / 9);
+        double got = after.groups().stream().filter(g -> g.id().equals("amine-primary")).findFirst().orElseThrow().sd();
+        assertEquals(want, got, 0.006, "sd " + before.sd() + " -> " + got); // sd is stored to two decimals
+    }
 }
