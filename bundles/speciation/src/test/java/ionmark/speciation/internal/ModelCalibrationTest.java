@@ -99,10 +99,11 @@ class ModelCalibrationTest {
         ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
         ionmark.acidity.api.PairRule found = r.table().pairs().stream().filter(x -> x.id().equals("malonic-dialkyl"))
                 .findFirst().orElseThrow();
-        // the prior (three compounds at the starting values) holds each value short of the truth
-        assertTrue(found.singly() > start.singly() + 0.5 * (1.7 - start.singly()) && found.singly() <= 1.9,
+        // the prior (three compounds at the starting values), the robust loss and the step grid hold each
+        // value short of the truth: at least 40 % of the way, never beyond it
+        assertTrue(found.singly() >= start.singly() + 0.4 * (1.7 - start.singly()) && found.singly() <= 1.9,
                 "singly " + start.singly() + " -> " + found.singly());
-        assertTrue(found.doubly() > start.doubly() + 0.5 * (1.8 - start.doubly()) && found.doubly() <= 2.0,
+        assertTrue(found.doubly() >= start.doubly() + 0.4 * (1.8 - start.doubly()) && found.doubly() <= 2.0,
                 "doubly " + start.doubly() + " -> " + found.doubly());
         assertEquals(1, r.moves().size());
         assertTrue(found.note().contains("6 compounds where the rule joins two sites"), found.note());
