@@ -190,4 +190,17 @@ class EngineTest {
             assertTrue(!full.species().isEmpty() && full.logD() != null, smi);
         }
     }
+
+    @Test
+    void theInductiveTermCitesTheSourceOfEachSigmaItUses() {
+        // chloro's sigma-I is a published constant; phosphoryloxy's is a working value by analogy
+        var chloro = at("OC(=O)CCCl", 7).sites().get(0).derivation().stream()
+                .filter(t -> t.label().startsWith("inductive")).findFirst().orElseThrow();
+        assertTrue(chloro.source().contains("Charton") && !chloro.source().contains("by analogy"), chloro.source());
+        var phosphate = at("CCOP(=O)(OCC)OCCN(C)C", 7).sites().stream().filter(x -> x.type().equals("base"))
+                .findFirst().orElseThrow().derivation().stream().filter(t -> t.label().startsWith("inductive"))
+                .findFirst().orElseThrow();
+        assertTrue(phosphate.label().contains("phosphoryloxy") && phosphate.source().contains("by analogy"),
+                phosphate.label() + " / " + phosphate.source());
+    }
 }

@@ -304,6 +304,7 @@ public final class LferEstimator {
         }
         double sum = 0;
         List<String> parts = new ArrayList<>();
+        java.util.Set<String> sigmaSources = new java.util.LinkedHashSet<>();
         int[] dist = new int[n];
         int[] queue = new int[n];
         for (int c : s.centres()) {
@@ -338,6 +339,7 @@ public final class LferEstimator {
                     double w = Math.pow(a, dist[x] - 1);
                     onAtom.computeIfAbsent(u, k -> new ArrayList<>()).add(new double[] {h.sub().substituent().sigmaI(), w});
                     names.computeIfAbsent(u, k -> new ArrayList<>()).add(h.sub().substituent().name() + PATH[dist[x]]);
+                    sigmaSources.add(h.sub().substituent().source("sigmaI"));
                 }
             }
             for (var e : onAtom.entrySet()) {
@@ -354,8 +356,8 @@ public final class LferEstimator {
         }
         double delta = -g.rho() * sum;
         terms.add(new Term("inductive Σ σI·" + fmt(a) + "^(n−1) = " + fixed(sum, 3) + " × ρ " + fmt(g.rho()) + " from "
-                + String.join(", ", parts), delta, "σI: " + t.citation("charton1981") + "; ρ: "
-                        + t.citation(g.source("rho"))));
+                + String.join(", ", parts), delta, "σI: " + sigmaSources.stream().map(t::citation)
+                        .collect(java.util.stream.Collectors.joining("; ")) + "; ρ: " + t.citation(g.source("rho"))));
         return delta;
     }
 
