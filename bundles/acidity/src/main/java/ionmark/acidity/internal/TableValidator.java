@@ -118,6 +118,11 @@ final class TableValidator {
      * same specificity: table order decides which wins, which a curator should know about.
      */
     private static void checkOverlaps(AcidityTable t, Map<String, Patterns.Compiled> compiled, List<Problem> out) {
+        // specificity parses the pattern: once per class, not once per class, example and rival
+        int[] specificity = new int[t.groups().size()];
+        for (int i = 0; i < specificity.length; i++) {
+            specificity[i] = compiled.containsKey(t.groups().get(i).id()) ? t.groups().get(i).specificity() : -1;
+        }
         for (int i = 0; i < t.groups().size(); i++) {
             GroupClass g = t.groups().get(i);
             Patterns.Compiled cg = compiled.get(g.id());
@@ -135,7 +140,7 @@ final class TableValidator {
                 for (int j = 0; j < t.groups().size(); j++) {
                     GroupClass o = t.groups().get(j);
                     Patterns.Compiled co = compiled.get(o.id());
-                    if (j == i || co == null || o.specificity() != g.specificity()) {
+                    if (j == i || co == null || specificity[j] != specificity[i]) {
                         continue;
                     }
                     List<Integer> theirs = Patterns.siteAtoms(co, mol);
