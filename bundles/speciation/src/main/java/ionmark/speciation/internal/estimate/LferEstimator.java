@@ -311,9 +311,8 @@ public final class LferEstimator {
             Arrays.fill(dist, -1);
             dist[c] = 0;
             queue[0] = c;
-            // substituents found per attachment skeleton atom, for the saturation rule
-            java.util.Map<Integer, List<double[]>> onAtom = new java.util.TreeMap<>();
-            java.util.Map<Integer, List<String>> names = new java.util.TreeMap<>();
+            // substituents found, with the skeleton atom each hangs on, for the saturation rule
+            List<Inductive> found = null;
             for (int head = 0, tail = 1; head < tail; head++) {
                 int u = queue[head];
                 for (int x : mol.adjacency()[u]) {
@@ -336,19 +335,33 @@ public final class LferEstimator {
                     if (h == null || Double.isNaN(h.sub().substituent().sigmaI())) {
                         continue;
                     }
-                    double w = Math.pow(a, dist[x] - 1);
-                    onAtom.computeIfAbsent(u, k -> new ArrayList<>()).add(new double[] {h.sub().substituent().sigmaI(), w});
-                    names.computeIfAbsent(u, k -> new ArrayList<>()).add(h.sub().substituent().name() + PATH[dist[x]]);
-                    sigmaSources.add(h.sub().substituent().source("sigmaI"));
+                    if (found == null) {
+                        found = new ArrayList<>(4);
+                    }
+                    found.add(new Inductive(u, h.sub().substituent(), Math.pow(a, dist[x] - 1), dist[x]));
                 }
             }
-            for (var e : onAtom.entrySet()) {
-                List<double[]> l = e.getValue();
-                l.sort((p, q) -> Double.compare(Math.abs(q[0]), Math.abs(p[0])));
-                for (int i = 0; i < l.size(); i++) {
-                    sum += l.get(i)[0] * l.get(i)[1] * SATURATION[Math.min(i, SATURATION.length - 1)];
+            if (found == null) {
+                continue;
+            }
+            for (Inductive f : found) {
+                sigmaSources.add(f.sub().source("sigmaI"));
+            }
+            // per skeleton atom, in atom order: the strongest first for the saturation rule, names as found
+            int[] on = found.stream().mapToInt(Inductive::on).distinct().sorted().toArray();
+            for (int atom : on) {
+                List<Inductive> here = new ArrayList<>(2);
+                for (Inductive f : found) {
+                    if (f.on() == atom) {
+                        here.add(f);
+                        parts.add(f.sub().name() + PATH[f.path()]);
+                    }
                 }
-                parts.addAll(names.get(e.getKey()));
+                here.sort((p, q) -> Double.compare(Math.abs(q.sub().sigmaI()), Math.abs(p.sub().sigmaI())));
+                for (int i = 0; i < here.size(); i++) {
+                    sum += here.get(i).sub().sigmaI() * here.get(i).weight()
+                            * SATURATION[Math.min(i, SATURATION.length - 1)];
+                }
             }
         }
         if (parts.isEmpty()) {
@@ -359,6 +372,10 @@ public final class LferEstimator {
                 + String.join(", ", parts), delta, "σI: " + sigmaSources.stream().map(t::citation)
                         .collect(java.util.stream.Collectors.joining("; ")) + "; ρ: " + t.citation(g.source("rho"))));
         return delta;
+    }
+
+    /** A substituent the inductive term found: the skeleton atom it hangs on, its weight and path length. */
+    private record Inductive(int on, Substituent sub, double weight, int path) {
     }
 
     private static String fmt(double v) {
