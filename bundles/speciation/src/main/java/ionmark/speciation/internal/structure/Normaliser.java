@@ -96,6 +96,132 @@ final class Normaliser {
         return moved;
     }
 
+    /**
+     * 2- and 4-hydroxypyridines to their pyridone tautomer: a hydroxy group on a carbon of a
+     * six-membered aromatic ring whose only ring nitrogen is pyridine-type (uncharged, two
+     * neighbours, no hydrogen) and sits ortho or para to it gives its hydrogen to that nitrogen, as
+     * 2-pyridone, 4-pyridone, 2-quinolone and 4-quinolone show in water. The double bonds move along
+     * an alternating path from the carbon to the nitrogen, so the structure stays a valid Kekulé
+     * form. 3-Hydroxypyridines, hydroxy groups on the benzo ring of a quinoline, and rings with two or
+     * more nitrogens (hydroxypyrimidines, hydroxypteridines) stay as drawn: see the contributor guide
+     * for what was measured. Needs rings and aromaticity perceived; the aromatic flags are stale
+     * afterwards. Returns how many groups moved.
+     */
+    static int toAromaticLactam(IAtomContainer mol) {
+        int moved = 0;
+        for (IAtom o : mol.atoms()) {
+            if (o.getAtomicNumber() != 8 || charge(o) != 0 || hydrogens(o) != 1 || mol.getConnectedBondsCount(o) != 1) {
+                continue;
+            }
+            IBond co = mol.getConnectedBondsList(o).get(0);
+            IAtom c = co.getOther(o);
+            if (co.getOrder() != IBond.Order.SINGLE || c.getAtomicNumber() != 6 || charge(c) != 0 || !c.isAromatic()) {
+                continue;
+            }
+            for (IAtom n : ringNitrogens(mol, c)) {
+                List<IBond> path = new java.util.ArrayList<>();
+                if (alternatingPath(mol, c, n, true, path, new java.util.HashSet<>(List.of(c)))) {
+                    for (IBond b : path) {
+                        b.setOrder(b.getOrder() == IBond.Order.DOUBLE ? IBond.Order.SINGLE : IBond.Order.DOUBLE);
+                        dropDoubleBondStereo(mol, b);
+                    }
+                    co.setOrder(IBond.Order.DOUBLE);
+                    o.setImplicitHydrogenCount(0);
+                    n.setImplicitHydrogenCount(1);
+                    moved++;
+                    break;
+                }
+            }
+        }
+        return moved;
+    }
+
+    /**
+     * Pyridine-type nitrogens ortho, then para, to {@code c} in six-membered aromatic rings through it
+     * that hold no other nitrogen.
+     */
+    private static List<IAtom> ringNitrogens(IAtomContainer mol, IAtom c) {
+        List<IAtom> ortho = new java.util.ArrayList<>();
+        List<IAtom> para = new java.util.ArrayList<>();
+        for (List<IAtom> ring : sixRings(mol, c)) {
+            if (ring.stream().filter(a -> a.getAtomicNumber() == 7).count() != 1) {
+                continue;
+            }
+            for (int i : new int[] {1, 5, 3}) {
+                IAtom n = ring.get(i);
+                if (n.getAtomicNumber() == 7 && charge(n) == 0 && hydrogens(n) == 0
+                        && mol.getConnectedBondsCount(n) == 2) {
+                    List<IAtom> into = i == 3 ? para : ortho;
+                    if (!into.contains(n)) {
+                        into.add(n);
+                    }
+                }
+            }
+        }
+        ortho.addAll(para);
+        return ortho;
+    }
+
+    /** The six-membered cycles of aromatic atoms through {@code c}, each listed from {@code c}. */
+    private static List<List<IAtom>> sixRings(IAtomContainer mol, IAtom c) {
+        List<List<IAtom>> out = new java.util.ArrayList<>();
+        List<IAtom> path = new java.util.ArrayList<>(List.of(c));
+        extendRing(mol, path, out);
+        return out;
+    }
+
+    private static void extendRing(IAtomContainer mol, List<IAtom> path, List<List<IAtom>> out) {
+        IAtom last = path.get(path.size() - 1);
+        for (IBond b : mol.getConnectedBondsList(last)) {
+            IAtom next = b.getOther(last);
+            if (!next.isAromatic() || !b.isAromatic()) {
+                continue;
+            }
+            if (path.size() == 6) {
+                if (next == path.get(0)) {
+                    out.add(List.copyOf(path));
+                }
+                continue;
+            }
+            if (!path.contains(next)) {
+                path.add(next);
+                extendRing(mol, path, out);
+                path.remove(path.size() - 1);
+            }
+        }
+    }
+
+    /**
+     * A path from {@code u} to {@code target} over bonds that alternate double and single, the first
+     * double when {@code wantDouble}, the last double; bonds collected in {@code path}.
+     */
+    private static boolean alternatingPath(IAtomContainer mol, IAtom u, IAtom target, boolean wantDouble,
+            List<IBond> path, java.util.Set<IAtom> seen) {
+        if (path.size() >= 12) {
+            return false;
+        }
+        for (IBond b : mol.getConnectedBondsList(u)) {
+            IAtom v = b.getOther(u);
+            IBond.Order want = wantDouble ? IBond.Order.DOUBLE : IBond.Order.SINGLE;
+            if (b.getOrder() != want || !v.isAromatic() || !b.isAromatic() || seen.contains(v)) {
+                continue;
+            }
+            path.add(b);
+            if (v == target && wantDouble) {
+                return true;
+            }
+            if (v != target) {
+                seen.add(v);
+                if (alternatingPath(mol, v, target, !wantDouble, path, seen)) {
+                    return true;
+                }
+                seen.remove(v);
+            }
+            path.remove(path.size() - 1);
+        }
+        return false;
+    }
+
     /** A C=N that became single can no longer carry E/Z configuration. */
     private static void dropDoubleBondStereo(IAtomContainer mol, IBond bond) {
         List<org.openscience.cdk.interfaces.IStereoElement> keep = new java.util.ArrayList<>();

@@ -106,6 +106,12 @@ public final class StructureReader {
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
+        int lactims = Normaliser.toAromaticLactam(mol);
+        if (lactims > 0) {
+            notes.add("input had " + lactims + " hydroxy group(s) ortho or para to the ring nitrogen of a pyridine ring "
+                    + "(2- or 4-hydroxypyridine type); analysed as the pyridone tautomer, the form that dominates in water");
+            SmartsPattern.prepare(mol);
+        }
         String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
         return new Prepared(mol, asRead, stripped, notes);
     }
