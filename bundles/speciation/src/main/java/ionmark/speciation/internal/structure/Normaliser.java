@@ -109,6 +109,7 @@ final class Normaliser {
      */
     static int toAromaticLactam(IAtomContainer mol) {
         int moved = 0;
+        int[][] sixRings = null; // found when the first candidate asks
         for (IAtom o : mol.atoms()) {
             if (o.getAtomicNumber() != 8 || charge(o) != 0 || hydrogens(o) != 1 || mol.getConnectedBondsCount(o) != 1) {
                 continue;
@@ -118,7 +119,10 @@ final class Normaliser {
             if (co.getOrder() != IBond.Order.SINGLE || c.getAtomicNumber() != 6 || charge(c) != 0 || !c.isAromatic()) {
                 continue;
             }
-            for (IAtom n : ringNitrogens(mol, c)) {
+            if (sixRings == null) {
+                sixRings = sixMemberedRings(mol);
+            }
+            for (IAtom n : ringNitrogens(mol, sixRings, mol.indexOf(c))) {
                 List<IBond> path = new java.util.ArrayList<>();
                 if (alternatingPath(mol, c, n, true, path, new java.util.HashSet<>(List.of(c)))) {
                     for (IBond b : path) {
@@ -136,22 +140,41 @@ final class Normaliser {
         return moved;
     }
 
+    /** The six-membered cycles of the molecule (CDK's cycle finder), as closed paths of atom indices. */
+    private static int[][] sixMemberedRings(IAtomContainer mol) {
+        try {
+            int[][] all = org.openscience.cdk.graph.Cycles.all(6).find(mol).paths();
+            return java.util.Arrays.stream(all).filter(p -> p.length == 7).toArray(int[][]::new);
+        } catch (org.openscience.cdk.exception.CDKException e) { // too many cycles to list: leave as drawn
+            return new int[0][];
+        }
+    }
+
     /**
-     * Pyridine-type nitrogens ortho, then para, to {@code c} in six-membered aromatic rings through it
-     * that hold no other nitrogen.
+     * Pyridine-type nitrogens ortho, then para, to atom {@code c} in the aromatic six-membered rings
+     * through it that hold no other nitrogen.
      */
-    private static List<IAtom> ringNitrogens(IAtomContainer mol, IAtom c) {
+    private static List<IAtom> ringNitrogens(IAtomContainer mol, int[][] rings, int c) {
         List<IAtom> ortho = new java.util.ArrayList<>();
         List<IAtom> para = new java.util.ArrayList<>();
-        for (List<IAtom> ring : sixRings(mol, c)) {
-            if (ring.stream().filter(a -> a.getAtomicNumber() == 7).count() != 1) {
+        for (int[] ring : rings) {
+            int at = -1;
+            int nitrogens = 0;
+            boolean aromatic = true;
+            for (int i = 0; i < 6; i++) {
+                IAtom a = mol.getAtom(ring[i]);
+                at = ring[i] == c ? i : at;
+                nitrogens += a.getAtomicNumber() == 7 ? 1 : 0;
+                aromatic &= a.isAromatic();
+            }
+            if (at < 0 || nitrogens != 1 || !aromatic) {
                 continue;
             }
-            for (int i : new int[] {1, 5, 3}) {
-                IAtom n = ring.get(i);
+            for (int step : new int[] {1, 5, 3}) {
+                IAtom n = mol.getAtom(ring[(at + step) % 6]);
                 if (n.getAtomicNumber() == 7 && charge(n) == 0 && hydrogens(n) == 0
                         && mol.getConnectedBondsCount(n) == 2) {
-                    List<IAtom> into = i == 3 ? para : ortho;
+                    List<IAtom> into = step == 3 ? para : ortho;
                     if (!into.contains(n)) {
                         into.add(n);
                     }
@@ -160,35 +183,6 @@ final class Normaliser {
         }
         ortho.addAll(para);
         return ortho;
-    }
-
-    /** The six-membered cycles of aromatic atoms through {@code c}, each listed from {@code c}. */
-    private static List<List<IAtom>> sixRings(IAtomContainer mol, IAtom c) {
-        List<List<IAtom>> out = new java.util.ArrayList<>();
-        List<IAtom> path = new java.util.ArrayList<>(List.of(c));
-        extendRing(mol, path, out);
-        return out;
-    }
-
-    private static void extendRing(IAtomContainer mol, List<IAtom> path, List<List<IAtom>> out) {
-        IAtom last = path.get(path.size() - 1);
-        for (IBond b : mol.getConnectedBondsList(last)) {
-            IAtom next = b.getOther(last);
-            if (!next.isAromatic() || !b.isAromatic()) {
-                continue;
-            }
-            if (path.size() == 6) {
-                if (next == path.get(0)) {
-                    out.add(List.copyOf(path));
-                }
-                continue;
-            }
-            if (!path.contains(next)) {
-                path.add(next);
-                extendRing(mol, path, out);
-                path.remove(path.size() - 1);
-            }
-        }
     }
 
     /**
