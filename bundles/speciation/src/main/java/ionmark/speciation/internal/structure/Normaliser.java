@@ -108,6 +108,9 @@ final class Normaliser {
      * afterwards. Returns how many groups moved.
      */
     static int toAromaticLactam(IAtomContainer mol) {
+        if (!hasPyridineNitrogen(mol)) {
+            return 0; // most structures (every plain phenol) stop here, before any ring search
+        }
         int moved = 0;
         int[][] sixRings = null; // found when the first candidate asks
         for (IAtom o : mol.atoms()) {
@@ -138,6 +141,17 @@ final class Normaliser {
             }
         }
         return moved;
+    }
+
+    /** Whether some aromatic nitrogen could take the hydrogen: uncharged, two neighbours, no hydrogen. */
+    private static boolean hasPyridineNitrogen(IAtomContainer mol) {
+        for (IAtom a : mol.atoms()) {
+            if (a.getAtomicNumber() == 7 && a.isAromatic() && charge(a) == 0 && hydrogens(a) == 0
+                    && mol.getConnectedBondsCount(a) == 2) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** The six-membered cycles of the molecule (CDK's cycle finder), as closed paths of atom indices. */
