@@ -170,7 +170,8 @@ final class ModelCalibration {
      * Each pair rule's two values refined like a class value, after the classes: the same loss over
      * the compounds where the rule joins two sites, the same prior on the starting values, steps of
      * {@link #STEPS} on one value at a time, at most {@link #MAX_SHIFT} from the start and never below
-     * 0. A rule with fewer than {@link #MIN_COMPOUNDS} compounds keeps its values.
+     * 0. A rule with fewer than {@link #MIN_COMPOUNDS} compounds, or one that is not
+     * {@link #refinable}, keeps its values.
      */
     PairsRefined refinePairs(AcidityTable start, List<Observation> usable, String refId) {
         List<Move> pairMoves = new ArrayList<>();
@@ -184,7 +185,7 @@ final class ModelCalibration {
         AcidityTable t = start;
         for (PairRule r0 : start.pairs()) {
             List<Observation> obs = byRule.getOrDefault(r0.id(), List.of());
-            if (obs.size() < MIN_COMPOUNDS) {
+            if (obs.size() < MIN_COMPOUNDS || !refinable(r0)) {
                 continue;
             }
             java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(new Engine(x, maxHeavyAtoms), obs)
@@ -232,6 +233,20 @@ final class ModelCalibration {
             t = withPair(t, r0.id(), end.singly(), end.doubly(), refId, how);
         }
         return new PairsRefined(t, pairMoves);
+    }
+
+    /**
+     * Sources whose values are derived from measured macroscopic constants of reference compounds (the
+     * distance rule, the extra interaction of two ring nitrogens in one azine ring): the calibration
+     * keeps rules from these. The loss pairs each experimental value with the nearest predicted one and
+     * does not charge for a spurious extra constant, so a refit weakens such a rule until, say, the
+     * second constant of a pyrazine lands where the first belongs.
+     */
+    static final java.util.Set<String> DERIVED_SOURCES = java.util.Set.of("ionmark-interaction", "ionmark-azine-pairs");
+
+    /** Whether the calibration may move a rule: working values and earlier fits yes, derived values no. */
+    static boolean refinable(PairRule r) {
+        return !DERIVED_SOURCES.contains(r.source());
     }
 
     private static PairRule pair(AcidityTable t, String id) {
