@@ -84,10 +84,8 @@ class ModelCalibrationTest {
      */
     @Test
     void aDisplacedPairRuleIsMovedBackTowardTheData() {
-        AcidityTable plain = new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(),
-                List.of(), TABLE.interaction(), TABLE.pairs());
-        ionmark.acidity.api.PairRule start = plain.pairs().stream().filter(r -> r.id().equals("malonic-dialkyl"))
-                .findFirst().orElseThrow();
+        AcidityTable plain = withoutMeasured();
+        ionmark.acidity.api.PairRule start = rule(plain, "malonic-dialkyl");
         AcidityTable truth = plain.withPairs(plain.pairs().stream()
                 .map(r -> r == start ? r.withValues(1.7, 1.8, r.source(), r.note()) : r).toList());
         Engine e = new Engine(truth, 300);
@@ -97,8 +95,7 @@ class ModelCalibrationTest {
             data.add(new Observation("m" + data.size(), smiles, e.analyse(smiles, Conditions.noPh(), true).macroPka()));
         }
         ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
-        ionmark.acidity.api.PairRule found = r.table().pairs().stream().filter(x -> x.id().equals("malonic-dialkyl"))
-                .findFirst().orElseThrow();
+        ionmark.acidity.api.PairRule found = rule(r.table(), "malonic-dialkyl");
         // the prior (three compounds at the starting values), the robust loss and the step grid hold each
         // value short of the truth: at least 40 % of the way, never beyond it
         assertTrue(found.singly() >= start.singly() + 0.4 * (1.7 - start.singly()) && found.singly() <= 1.9,
@@ -116,10 +113,8 @@ class ModelCalibrationTest {
      */
     @Test
     void aRuleDerivedFromMeasuredConstantsKeepsItsValues() {
-        AcidityTable plain = new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(),
-                List.of(), TABLE.interaction(), TABLE.pairs());
-        ionmark.acidity.api.PairRule start = plain.pairs().stream().filter(r -> r.id().equals("azine-ring-n-1,4"))
-                .findFirst().orElseThrow();
+        AcidityTable plain = withoutMeasured();
+        ionmark.acidity.api.PairRule start = rule(plain, "azine-ring-n-1,4");
         assertEquals("ionmark-azine-pairs", start.source());
         AcidityTable weak = plain.withPairs(plain.pairs().stream()
                 .map(r -> r == start ? r.withValues(0, 0, r.source(), r.note()) : r).toList());
@@ -130,12 +125,10 @@ class ModelCalibrationTest {
             data.add(new Observation("m" + data.size(), smiles, e.analyse(smiles, Conditions.noPh(), true).macroPka()));
         }
         ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
-        ionmark.acidity.api.PairRule found = r.table().pairs().stream().filter(x -> x.id().equals("azine-ring-n-1,4"))
-                .findFirst().orElseThrow();
+        ionmark.acidity.api.PairRule found = rule(r.table(), "azine-ring-n-1,4");
         assertEquals(start, found);
         assertTrue(r.moves().stream().noneMatch(m -> m.toString().contains("azine-ring-n-1,4")), r.moves().toString());
-        assertTrue(ModelCalibration.refinable(plain.pairs().stream().filter(x -> x.id().equals("malonic-dialkyl"))
-                .findFirst().orElseThrow()));
+        assertTrue(ModelCalibration.refinable(rule(plain, "malonic-dialkyl")));
     }
 
     /**
@@ -145,8 +138,7 @@ class ModelCalibrationTest {
      */
     @Test
     void classSdIsWidenedForTheConstantsFittedToTheSameErrors() {
-        AcidityTable plain = new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(),
-                List.of(), TABLE.interaction(), TABLE.pairs());
+        AcidityTable plain = withoutMeasured();
         Engine e = new Engine(plain, 300);
         List<Observation> data = new ArrayList<>();
         for (String smiles : List.of("CCN", "CCCN", "CCCCN", "CC(C)CN", "CCCCCN", "NCC1CCCCC1")) {
@@ -159,5 +151,15 @@ class ModelCalibrationTest {
         double want = Math.sqrt((6 * widened * widened + 3 * before.sd() * before.sd()) / 9);
         double got = after.groups().stream().filter(g -> g.id().equals("amine-primary")).findFirst().orElseThrow().sd();
         assertEquals(want, got, 0.006, "sd " + before.sd() + " -> " + got); // sd is stored to two decimals
+    }
+
+    /** The shipped table without its measured compounds, so that every value comes from the model. */
+    private static AcidityTable withoutMeasured() {
+        return new AcidityTable(TABLE.version(), TABLE.references(), TABLE.groups(), TABLE.substituents(), List.of(),
+                TABLE.interaction(), TABLE.pairs());
+    }
+
+    private static ionmark.acidity.api.PairRule rule(AcidityTable t, String id) {
+        return t.pairs().stream().filter(r -> r.id().equals(id)).findFirst().orElseThrow();
     }
 }
