@@ -34,8 +34,8 @@ import ionmark.speciation.api.Site;
  * are visited one at a time (coordinate descent), largest first, trying shifts of
  * {@link #STEPS} units and both twice that, in up to {@link #SWEEPS} sweeps per step size; a class
  * with fewer than {@link #MIN_COMPOUNDS} compounds is left alone, and no class moves more than
- * {@link #MAX_SHIFT} from where stage one left it. Finally each class's uncertainty is set from the refined model's errors
- * ({@link #withHonestSd}).
+ * {@link #MAX_SHIFT} from where stage one left it. Finally each class's uncertainty is set from the
+ * refined model's errors ({@link #withHonestSd}).
  */
 final class ModelCalibration {
     static final double HUBER = 1.0;
@@ -256,7 +256,8 @@ final class ModelCalibration {
      * does not charge for a spurious extra constant, so a refit weakens such a rule until, say, the
      * second constant of a pyrazine lands where the first belongs.
      */
-    static final java.util.Set<String> DERIVED_SOURCES = java.util.Set.of("ionmark-interaction", "ionmark-azine-pairs");
+    static final java.util.Set<String> DERIVED_SOURCES =
+            java.util.Set.of("ionmark-interaction", "ionmark-azine-pairs");
 
     /** Whether the calibration may move a rule: working values and earlier fits yes, derived values no. */
     static boolean refinable(PairRule r) {
