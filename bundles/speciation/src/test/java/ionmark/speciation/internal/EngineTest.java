@@ -149,6 +149,29 @@ class EngineTest {
     }
 
     @Test
+    void hydroxyDrawnNextToADiazineNitrogenDoesNotDonateToTheOtherNitrogen() {
+        // 4-hydroxypyrimidine is 4(3H)-pyrimidinone in water, base pKa 1.69 against pyrimidine's 1.31 (Albert,
+        // from memory): the drawn OH stands for a ring C=O, so no hydroxy term may raise a ring N's pKa
+        for (String lactim : new String[] {"Oc1ccncn1", "Oc1ncccn1", "Oc1cnccn1", "Cc1cc(O)nc(C)n1"}) {
+            for (var site : at(lactim, 7).sites()) {
+                if (!site.element().equals("N")) {
+                    continue;
+                }
+                var terms = site.derivation().stream().filter(t -> t.label().contains("hydroxy")).toList();
+                assertTrue(!terms.isEmpty() && terms.stream().allMatch(t -> t.label().contains("lactim") && t.value() < 0),
+                        lactim + " " + terms);
+            }
+        }
+        // 5-hydroxypyrimidine's OH is meta to both ring N's, a true hydroxy group: the ordinary constants
+        for (var site : at("Oc1cncnc1", 7).sites()) {
+            if (site.element().equals("N")) {
+                assertTrue(site.derivation().stream().anyMatch(t -> t.label().startsWith("Hammett meta hydroxy:")),
+                        site.derivation().toString());
+            }
+        }
+    }
+
+    @Test
     void permanentChargeIsCountedButNotTitrated() {
         Analysis a = at("C[N+](C)(C)CC(=O)O", 7);
         assertTrue(a.sites().stream().anyMatch(s -> s.permanent()));
