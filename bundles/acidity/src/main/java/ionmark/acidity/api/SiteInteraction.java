@@ -11,11 +11,25 @@ import java.util.Map;
  * @param decay   factor per further bond beyond the last tabulated distance
  * @param cutoff  interactions below this (pKa units) are treated as zero when clustering sites
  * @param source  reference id
+ * @param exempt  ids of group classes the distance rule leaves out: an acid whose anion's charge is
+ *                already part of the substituent constants other sites see for it (a sulfonic acid, whose
+ *                sulfo constants are those of the sulfonate), so adding the rule would count that charge twice
  */
-public record SiteInteraction(List<double[]> shifts, double decay, double cutoff, String source) {
+public record SiteInteraction(List<double[]> shifts, double decay, double cutoff, String source, List<String> exempt) {
 
     public SiteInteraction {
         shifts = shifts == null ? List.of() : shifts.stream().map(double[]::clone).toList();
+        exempt = exempt == null ? List.of() : List.copyOf(exempt);
+    }
+
+    /** Without exempt classes: every pair of charged sites interacts. */
+    public SiteInteraction(List<double[]> shifts, double decay, double cutoff, String source) {
+        this(shifts, decay, cutoff, source, List.of());
+    }
+
+    /** Whether the distance rule leaves sites of group class {@code groupId} out. */
+    public boolean exempts(String groupId) {
+        return exempt.contains(groupId);
     }
 
     /** Interaction in pKa units between two unit charges {@code bonds} apart (0 when no bond path). */

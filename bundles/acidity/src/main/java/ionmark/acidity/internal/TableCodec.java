@@ -204,7 +204,7 @@ final class TableCodec {
             shifts.add(new double[] {e.get(0).asDouble(), e.get(1).asDouble()});
         }
         return new SiteInteraction(shifts, f.number(n, p, "decay", true), f.number(n, p, "cutoff", true),
-                n.path("source").asText(""));
+                n.path("source").asText(""), f.strings(n, p, "exempt"));
     }
 
     private static Map<String, String> sources(JsonNode n, String p, Fields f) {
@@ -312,6 +312,10 @@ final class TableCodec {
         in.put("decay", si.decay());
         in.put("cutoff", si.cutoff());
         in.put("source", si.source());
+        if (!si.exempt().isEmpty()) { // absent when empty: older tables keep their content hash
+            ArrayNode ex = in.putArray("exempt");
+            si.exempt().forEach(ex::add);
+        }
         sb.append("  \"interaction\": ").append(line(in)).append('\n');
         return sb.toString();
     }

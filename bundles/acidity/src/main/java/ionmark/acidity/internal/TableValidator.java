@@ -19,6 +19,7 @@ import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.Relation;
 import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.SiteInteraction;
+import ionmark.acidity.api.SiteType;
 import ionmark.acidity.api.Substituent;
 import ionmark.acidity.api.ValidationReport;
 
@@ -52,6 +53,7 @@ final class TableValidator {
         checkSubstituents(t, refIds, out);
         checkMeasured(t, refIds, compiled, out);
         checkInteraction(t.interaction(), refIds, out);
+        checkExempt(t, out);
         checkPairs(t, refIds, out);
         if (!t.version().hash().isEmpty() && !t.version().hash().equals(TableCodec.hash(t))) {
             out.add(warn("$.version.hash", "content hash does not match the content (edited by hand?); "
@@ -282,6 +284,21 @@ final class TableValidator {
                 out.add(err(p + ".source", "the pair values need their source"));
             } else if (!refIds.contains(r.source())) {
                 out.add(err(p + ".source", "unknown reference '" + r.source() + "'"));
+            }
+        }
+    }
+
+    /** Each class the distance rule leaves out exists and is an acid (only an anion's charge can sit in σ). */
+    private static void checkExempt(AcidityTable t, List<Problem> out) {
+        List<String> ex = t.interaction().exempt();
+        for (int i = 0; i < ex.size(); i++) {
+            String id = ex.get(i);
+            Optional<GroupClass> g = t.group(id);
+            if (g.isEmpty()) {
+                out.add(err("$.interaction.exempt[" + i + "]", "unknown group class '" + id + "'"));
+            } else if (g.get().type() != SiteType.ACID) {
+                out.add(err("$.interaction.exempt[" + i + "]", "'" + id + "' is a base; only an acid's anion can be"
+                        + " part of substituent constants"));
             }
         }
     }

@@ -17,6 +17,7 @@ import org.openscience.cdk.qsar.result.DoubleResult;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.MeasuredCompound;
+import ionmark.acidity.api.SiteInteraction;
 import ionmark.acidity.api.SiteType;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
@@ -110,7 +111,7 @@ public final class Engine {
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(target);
         // the sites keep their order from here on: one interaction matrix serves every model below
-        double[][] inter = interactions(distances(adj, est));
+        double[][] inter = interactions(distances(adj, est), est);
         est = heldPairs(target, est, inter, new java.util.HashSet<>());
         if (measured.isPresent()) {
             est = fitToMeasured(mol, adj, inter, est, measured.get());
@@ -169,7 +170,7 @@ public final class Engine {
             List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(), target,
                     SitePerceiver.perceive(table, target));
             java.util.Set<String> used = new java.util.TreeSet<>();
-            heldPairs(target, est, interactions(distances(target.adjacency(), est)), used);
+            heldPairs(target, est, interactions(distances(target.adjacency(), est), est), used);
             return used;
         } catch (StructureException | RuntimeException e) {
             return java.util.Set.of();
@@ -453,13 +454,31 @@ public final class Engine {
         return out;
     }
 
-    /** The charge-distance interaction for every pair of sites, indexed as {@link #distances}. */
-    private double[][] interactions(int[][] dist) {
+    /**
+     * The charge-distance interaction for every pair of sites, indexed as {@link #distances}; 0 for a
+     * pair with a site of a class the table exempts (its charge is already in the substituent constants).
+     */
+    private double[][] interactions(int[][] dist, List<EstimatedSite> est) {
+        SiteInteraction rule = table.table().interaction();
         int k = dist.length;
+        boolean[] exempt = new boolean[k];
+        if (!rule.exempt().isEmpty()) {
+            int a = 0;
+            for (EstimatedSite s : est) { // the order of distances: titratable sites, then permanent ones
+                if (!s.site().group().permanent()) {
+                    exempt[a++] = rule.exempts(s.site().group().id());
+                }
+            }
+            for (EstimatedSite s : est) {
+                if (s.site().group().permanent()) {
+                    exempt[a++] = rule.exempts(s.site().group().id());
+                }
+            }
+        }
         double[][] w = new double[k][k];
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
-                w[i][j] = i == j ? 0 : table.table().interaction().at(dist[i][j]);
+                w[i][j] = i == j || exempt[i] || exempt[j] ? 0 : rule.at(dist[i][j]);
             }
         }
         return w;

@@ -122,7 +122,8 @@ final class Regression {
                 out.add("substituent " + s.id());
             }
         }
-        if (!head.interaction().asMap().equals(draft.interaction().asMap())) {
+        if (!head.interaction().asMap().equals(draft.interaction().asMap())
+                || !head.interaction().exempt().equals(draft.interaction().exempt())) {
             out.add("site interactions");
         }
         for (ionmark.acidity.api.PairRule r : draft.pairs()) {
