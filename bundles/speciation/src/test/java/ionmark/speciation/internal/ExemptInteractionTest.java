@@ -37,6 +37,11 @@ class ExemptInteractionTest {
     }
 
     @Test
+    void theShippedTableExemptsSulfonicAcids() {
+        assertTrue(SHIPPED.interaction().exempts("sulfonic"), SHIPPED.interaction().exempt().toString());
+    }
+
+    @Test
     void aBaseNextToASulfonateKeepsItsEstimateWhenTheClassIsExempt() {
         // orthanilic acid (2-aminobenzenesulfonic acid): anilinium pKa 2.48 (CRC Handbook, from memory); the
         // sulfonate O is four bonds from the amino N, where the distance rule adds 1.3 units
@@ -49,6 +54,14 @@ class ExemptInteractionTest {
         double before = counted.macroPka().get(counted.macroPka().size() - 1);
         assertTrue(before > top + 1.0, before + " against " + top);
         assertEquals(2.48, top, 1.0);
+    }
+
+    @Test
+    void aHydroxyNextToTheSulfonateKeepsItsHydrogenBondThroughAPairRule() {
+        // with the class exempt, the shipped pair rule carries what is particular to the ortho arrangement
+        Engine shipped = new Engine(SHIPPED, 300);
+        assertTrue(shipped.pairRules("O=S(=O)(O)c1ccccc1O").contains("sulfonate-ortho-hydroxy"));
+        assertTrue(shipped.pairRules("O=S(=O)(O)c1cccc(O)c1").isEmpty());
     }
 
     @Test
