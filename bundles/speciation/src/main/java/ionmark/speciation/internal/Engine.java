@@ -463,16 +463,9 @@ public final class Engine {
         int k = dist.length;
         boolean[] exempt = new boolean[k];
         if (!rule.exempt().isEmpty()) {
-            int a = 0;
-            for (EstimatedSite s : est) { // the order of distances: titratable sites, then permanent ones
-                if (!s.site().group().permanent()) {
-                    exempt[a++] = rule.exempts(s.site().group().id());
-                }
-            }
-            for (EstimatedSite s : est) {
-                if (s.site().group().permanent()) {
-                    exempt[a++] = rule.exempts(s.site().group().id());
-                }
+            List<EstimatedSite> ordered = inDistanceOrder(est);
+            for (int i = 0; i < k; i++) {
+                exempt[i] = rule.exempts(ordered.get(i).site().group().id());
             }
         }
         double[][] w = new double[k][k];
@@ -546,20 +539,21 @@ public final class Engine {
         return s.shifted(d, new Term(label, d, table.table().citation(rule.source())), s.basis(), s.sd());
     }
 
-    /** Bond distances between the sites' atoms: titratable sites first, then permanent ones. */
+    /** The sites as {@link #distances} and {@link #interactions} index them: titratable first, then permanent. */
+    private static List<EstimatedSite> inDistanceOrder(List<EstimatedSite> est) {
+        List<EstimatedSite> out = new ArrayList<>(est.size());
+        est.stream().filter(s -> !s.site().group().permanent()).forEach(out::add);
+        est.stream().filter(s -> s.site().group().permanent()).forEach(out::add);
+        return out;
+    }
+
+    /** Bond distances between the sites' atoms, in {@link #inDistanceOrder}. */
     private static int[][] distances(int[][] adj, List<EstimatedSite> est) {
         int k = est.size();
         int[] atoms = new int[k];
-        int a = 0;
-        for (EstimatedSite s : est) {
-            if (!s.site().group().permanent()) {
-                atoms[a++] = s.site().atom();
-            }
-        }
-        for (EstimatedSite s : est) {
-            if (s.site().group().permanent()) {
-                atoms[a++] = s.site().atom();
-            }
+        List<EstimatedSite> ordered = inDistanceOrder(est);
+        for (int i = 0; i < k; i++) {
+            atoms[i] = ordered.get(i).site().atom();
         }
         int[][] out = new int[k][k];
         int[] d = new int[adj.length];
