@@ -172,6 +172,25 @@ class EngineTest {
     }
 
     @Test
+    void amideFormylHydrazinoAndAzoSubstituentsCount() {
+        // each had no substituent entry and counted for nothing; constants: Hansch, Leo and Taft 1991 (from memory)
+        assertTerm("CC(=O)N(C)c1cccnc1", "N", "Hammett meta N-acyl-N-alkylamino", false); // sigma-m +0.31
+        assertTerm("O=CNc1cccnc1", "N", "Hammett meta formamido", false); // sigma-m +0.19
+        assertTerm("NNc1ccncc1", "N", "Hammett para hydrazino", true); // sigma-p -0.55
+        assertTerm("Oc1ccc(N=Nc2ccccc2)cc1", "O", "Hammett para arylazo", false); // sigma-p +0.39
+        // along a chain: the acyl-substituted ring N of N-acetylproline withdraws from the carboxyl group
+        assertTrue(at("CC(=O)N1CCC[C@H]1C(=O)O", 7).sites().stream().filter(s -> s.element().equals("O"))
+                .flatMap(s -> s.derivation().stream()).anyMatch(t -> t.label().contains("N-acyl-N-alkylamino")));
+    }
+
+    private static void assertTerm(String smiles, String element, String label, boolean raises) {
+        var terms = at(smiles, 7).sites().stream().filter(s -> s.element().equals(element))
+                .flatMap(s -> s.derivation().stream()).filter(t -> t.label().startsWith(label)).toList();
+        assertEquals(1, terms.size(), smiles + " " + terms);
+        assertTrue(raises == terms.get(0).value() > 0, smiles + " " + terms);
+    }
+
+    @Test
     void permanentChargeIsCountedButNotTitrated() {
         Analysis a = at("C[N+](C)(C)CC(=O)O", 7);
         assertTrue(a.sites().stream().anyMatch(s -> s.permanent()));
