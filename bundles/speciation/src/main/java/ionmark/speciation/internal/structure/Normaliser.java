@@ -97,10 +97,12 @@ final class Normaliser {
     }
 
     /**
-     * 2- and 4-hydroxypyridines to their pyridone tautomer: a hydroxy group on a carbon of a
+     * 2- and 4-hydroxypyridines to their pyridone tautomer, and 2- and 4-mercaptopyridines to their
+     * pyridinethione tautomer: a hydroxy or mercapto group on a carbon of a
      * six-membered aromatic ring whose only ring nitrogen is pyridine-type (uncharged, two
      * neighbours, no hydrogen) and sits ortho or para to it gives its hydrogen to that nitrogen, as
-     * 2-pyridone, 4-pyridone, 2-quinolone and 4-quinolone show in water. The double bonds move along
+     * 2-pyridone, 4-pyridone, 2-quinolone, 4-quinolone and the pyridinethiones (even more
+     * strongly) show in water. The double bonds move along
      * an alternating path from the carbon to the nitrogen, so the structure stays a valid Kekulé
      * form. 3-Hydroxypyridines, hydroxy groups on the benzo ring of a quinoline, and rings with two or
      * more nitrogens (hydroxypyrimidines, hydroxypteridines) stay as drawn: see the contributor guide
@@ -114,7 +116,8 @@ final class Normaliser {
         int moved = 0;
         int[][] sixRings = null; // found when the first candidate asks
         for (IAtom o : mol.atoms()) {
-            if (o.getAtomicNumber() != 8 || charge(o) != 0 || hydrogens(o) != 1 || mol.getConnectedBondsCount(o) != 1) {
+            int z = o.getAtomicNumber();
+            if (z != 8 && z != 16 || charge(o) != 0 || hydrogens(o) != 1 || mol.getConnectedBondsCount(o) != 1) {
                 continue;
             }
             IBond co = mol.getConnectedBondsList(o).get(0);

@@ -108,8 +108,9 @@ public final class StructureReader {
         SmartsPattern.prepare(mol);
         int lactims = Normaliser.toAromaticLactam(mol);
         if (lactims > 0) {
-            notes.add("input had " + lactims + " hydroxy group(s) ortho or para to the ring nitrogen of a pyridine ring "
-                    + "(2- or 4-hydroxypyridine type); analysed as the pyridone tautomer, the form that dominates in water");
+            notes.add("input had " + lactims + " hydroxy or mercapto group(s) ortho or para to the ring nitrogen of a "
+                    + "pyridine ring (2- or 4-hydroxypyridine or -mercaptopyridine type); analysed as the pyridone or "
+                    + "pyridinethione tautomer, the form that dominates in water");
             SmartsPattern.prepare(mol);
         }
         String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
