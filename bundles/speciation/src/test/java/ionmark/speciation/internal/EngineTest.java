@@ -132,7 +132,7 @@ class EngineTest {
             Analysis drawn = at(pair[0], 7);
             Analysis oxo = at(pair[1], 7);
             assertEquals(oxo.macroPka(), drawn.macroPka(), pair[0]);
-            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("pyridinethione tautomer")), pair[0]);
+            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
             assertTrue(drawn.sites().stream().noneMatch(s -> s.group().equals("hydroxy-heteroaryl")), pair[0]);
         }
         // 2-pyridone: N-H acid 11.65, O-protonation 0.75 (Albert, from memory); no pyridine-like base near 5
@@ -141,11 +141,11 @@ class EngineTest {
         // a hydroxy group meta to the ring N, or on the benzo ring of quinoline, is a true OH and stays
         for (String stays : new String[] {"Oc1cccnc1", "Oc1cccc2cccnc12"}) {
             Analysis a = at(stays, 7);
-            assertTrue(a.warnings().stream().noneMatch(w -> w.contains("pyridinethione tautomer")), stays);
+            assertTrue(a.warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
             assertTrue(a.smiles().contains("O") && !a.smiles().contains("=O"), a.smiles());
         }
         // rings with a second nitrogen stay as drawn for now (see the contributor guide)
-        assertTrue(at("Oc1ccncn1", 7).warnings().stream().noneMatch(w -> w.contains("pyridinethione tautomer")));
+        assertTrue(at("Oc1ccncn1", 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")));
     }
 
     @Test
@@ -158,13 +158,31 @@ class EngineTest {
             Analysis drawn = at(pair[0], 7);
             Analysis thione = at(pair[1], 7);
             assertEquals(thione.macroPka(), drawn.macroPka(), pair[0]);
-            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("pyridinethione tautomer")), pair[0]);
+            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
             assertTrue(drawn.sites().stream().anyMatch(s -> s.group().equals("pyridinethione-nh")), pair[0]);
             assertTrue(drawn.macroPka().stream().noneMatch(p -> p > 1.5 && p < 6.5), pair[0] + " " + drawn.macroPka());
         }
         // 3-mercaptopyridine has no thione tautomer, and a ring with a second N stays as drawn
         for (String stays : new String[] {"Sc1cccnc1", "Sc1ncccn1"}) {
-            assertTrue(at(stays, 7).warnings().stream().noneMatch(w -> w.contains("pyridinethione tautomer")), stays);
+            assertTrue(at(stays, 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
+        }
+    }
+
+    @Test
+    void hydroxyImidazoleDrawingsAreAnalysedAsTheirImidazolones() {
+        // 2-hydroxybenzimidazole is 2-benzimidazolone in water, a cyclic urea with no basic ring N left (Albert,
+        // Heterocyclic Chemistry, from memory): both drawings are one compound and get one answer
+        String[][] same = {{"Oc1nc2ccccc2[nH]1", "O=c1[nH]c2ccccc2[nH]1"}, {"Oc1ncc[nH]1", "O=c1[nH]cc[nH]1"}};
+        for (String[] pair : same) {
+            Analysis drawn = at(pair[0], 7);
+            Analysis oxo = at(pair[1], 7);
+            assertEquals(oxo.macroPka(), drawn.macroPka(), pair[0]);
+            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
+            assertTrue(drawn.sites().stream().noneMatch(s -> s.type().equals("base") && s.pka() > 2), pair[0]);
+        }
+        // an O-H next to only one ring N (oxazole, thiazole) is not a cyclic urea and stays as drawn
+        for (String stays : new String[] {"Oc1ncco1", "Oc1nccs1"}) {
+            assertTrue(at(stays, 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
         }
     }
 

@@ -142,8 +142,60 @@ final class Normaliser {
                     break;
                 }
             }
+            if (z == 8 && o.getImplicitHydrogenCount() == 1 && toImidazolone(mol, o, c, co)) {
+                moved++;
+            }
         }
         return moved;
+    }
+
+    /**
+     * A hydroxy group on the carbon between the two nitrogens of an aromatic five-membered ring, one
+     * pyridine-type (the C=N partner) and one pyrrole-type, is the cyclic urea drawn as its lactim
+     * (2-hydroxybenzimidazole is 2-benzimidazolone in water): the hydrogen goes to the pyridine-type
+     * nitrogen and the C=N becomes C=O.
+     */
+    private static boolean toImidazolone(IAtomContainer mol, IAtom o, IAtom c, IBond co) {
+        IBond toPyridineType = null;
+        IAtom pyrroleType = null;
+        for (IBond b : mol.getConnectedBondsList(c)) {
+            IAtom n = b.getOther(c);
+            if (n == o || n.getAtomicNumber() != 7 || !n.isAromatic() || charge(n) != 0) {
+                continue;
+            }
+            int degree = mol.getConnectedBondsCount(n);
+            if (degree == 2 && hydrogens(n) == 0 && b.getOrder() == IBond.Order.DOUBLE) {
+                toPyridineType = b;
+            } else if (degree == 3 || degree == 2 && hydrogens(n) == 1) {
+                pyrroleType = n;
+            }
+        }
+        if (toPyridineType == null || pyrroleType == null
+                || !fiveRing(mol, c, toPyridineType.getOther(c), pyrroleType)) {
+            return false;
+        }
+        IAtom n = toPyridineType.getOther(c);
+        toPyridineType.setOrder(IBond.Order.SINGLE);
+        dropDoubleBondStereo(mol, toPyridineType);
+        co.setOrder(IBond.Order.DOUBLE);
+        o.setImplicitHydrogenCount(0);
+        n.setImplicitHydrogenCount(1);
+        return true;
+    }
+
+    /** Whether {@code a} and {@code b}, both bonded to {@code c}, close a five-membered ring through two more atoms. */
+    private static boolean fiveRing(IAtomContainer mol, IAtom c, IAtom a, IAtom b) {
+        for (IAtom x : mol.getConnectedAtomsList(a)) {
+            if (x == c) {
+                continue;
+            }
+            for (IAtom y : mol.getConnectedAtomsList(x)) {
+                if (y != a && y != c && mol.getBond(y, b) != null) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /** Whether some aromatic nitrogen could take the hydrogen: uncharged, two neighbours, no hydrogen. */

@@ -109,8 +109,9 @@ public final class StructureReader {
         int lactims = Normaliser.toAromaticLactam(mol);
         if (lactims > 0) {
             notes.add("input had " + lactims + " hydroxy or mercapto group(s) ortho or para to the ring nitrogen of a "
-                    + "pyridine ring (2- or 4-hydroxypyridine or -mercaptopyridine type); analysed as the pyridone or "
-                    + "pyridinethione tautomer, the form that dominates in water");
+                    + "pyridine ring (2- or 4-hydroxypyridine or -mercaptopyridine type) or hydroxy group(s) between the "
+                    + "two nitrogens of an imidazole ring; analysed as the pyridone, pyridinethione or imidazolone "
+                    + "tautomer, the form that dominates in water");
             SmartsPattern.prepare(mol);
         }
         String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
