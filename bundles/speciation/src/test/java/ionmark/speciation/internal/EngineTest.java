@@ -129,10 +129,7 @@ class EngineTest {
         String[][] same = {{"Oc1ccccn1", "O=c1cccc[nH]1"}, {"Oc1ccncc1", "O=c1cc[nH]cc1"},
                 {"Oc1ccc2ccccc2n1", "O=c1ccc2ccccc2[nH]1"}, {"Oc1ccc(Cl)cn1", "O=c1ccc(Cl)c[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = at(pair[0], 7);
-            Analysis oxo = at(pair[1], 7);
-            assertEquals(oxo.macroPka(), drawn.macroPka(), pair[0]);
-            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
             assertTrue(drawn.sites().stream().noneMatch(s -> s.group().equals("hydroxy-heteroaryl")), pair[0]);
         }
         // 2-pyridone: N-H acid 11.65, O-protonation 0.75 (Albert, from memory); no pyridine-like base near 5
@@ -140,12 +137,11 @@ class EngineTest {
         assertTrue(pyridinol.macroPka().stream().noneMatch(p -> p > 3.5 && p < 9), pyridinol.macroPka().toString());
         // a hydroxy group meta to the ring N, or on the benzo ring of quinoline, is a true OH and stays
         for (String stays : new String[] {"Oc1cccnc1", "Oc1cccc2cccnc12"}) {
-            Analysis a = at(stays, 7);
-            assertTrue(a.warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
+            Analysis a = staysAsDrawn(stays);
             assertTrue(a.smiles().contains("O") && !a.smiles().contains("=O"), a.smiles());
         }
         // rings with a second nitrogen stay as drawn for now (see the contributor guide)
-        assertTrue(at("Oc1ccncn1", 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")));
+        staysAsDrawn("Oc1ccncn1");
     }
 
     @Test
@@ -155,16 +151,13 @@ class EngineTest {
         String[][] same = {{"Sc1ccccn1", "S=c1cccc[nH]1"}, {"Sc1ccncc1", "S=c1cc[nH]cc1"},
                 {"Sc1ccc2ccccc2n1", "S=c1ccc2ccccc2[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = at(pair[0], 7);
-            Analysis thione = at(pair[1], 7);
-            assertEquals(thione.macroPka(), drawn.macroPka(), pair[0]);
-            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
             assertTrue(drawn.sites().stream().anyMatch(s -> s.group().equals("pyridinethione-nh")), pair[0]);
             assertTrue(drawn.macroPka().stream().noneMatch(p -> p > 1.5 && p < 6.5), pair[0] + " " + drawn.macroPka());
         }
         // 3-mercaptopyridine has no thione tautomer, and a ring with a second N stays as drawn
         for (String stays : new String[] {"Sc1cccnc1", "Sc1ncccn1"}) {
-            assertTrue(at(stays, 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
+            staysAsDrawn(stays);
         }
     }
 
@@ -174,16 +167,30 @@ class EngineTest {
         // Heterocyclic Chemistry, from memory): both drawings are one compound and get one answer
         String[][] same = {{"Oc1nc2ccccc2[nH]1", "O=c1[nH]c2ccccc2[nH]1"}, {"Oc1ncc[nH]1", "O=c1[nH]cc[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = at(pair[0], 7);
-            Analysis oxo = at(pair[1], 7);
-            assertEquals(oxo.macroPka(), drawn.macroPka(), pair[0]);
-            assertTrue(drawn.warnings().stream().anyMatch(w -> w.contains("tautomer, the form that dominates in water")), pair[0]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
             assertTrue(drawn.sites().stream().noneMatch(s -> s.type().equals("base") && s.pka() > 2), pair[0]);
         }
         // an O-H next to only one ring N (oxazole, thiazole) is not a cyclic urea and stays as drawn
         for (String stays : new String[] {"Oc1ncco1", "Oc1nccs1"}) {
-            assertTrue(at(stays, 7).warnings().stream().noneMatch(w -> w.contains("tautomer, the form that dominates in water")), stays);
+            staysAsDrawn(stays);
         }
+    }
+
+    private static final String TAUTOMER_NOTE = "tautomer, the form that dominates in water";
+
+    /** The reader moved {@code drawn} to a tautomer, said so, and answers as for {@code tautomer}; returns its analysis. */
+    private static Analysis movedToTautomerOf(String drawn, String tautomer) {
+        Analysis a = at(drawn, 7);
+        assertEquals(at(tautomer, 7).macroPka(), a.macroPka(), drawn);
+        assertTrue(a.warnings().stream().anyMatch(w -> w.contains(TAUTOMER_NOTE)), drawn);
+        return a;
+    }
+
+    /** The reader left {@code smiles} as drawn (no tautomer note); returns its analysis. */
+    private static Analysis staysAsDrawn(String smiles) {
+        Analysis a = at(smiles, 7);
+        assertTrue(a.warnings().stream().noneMatch(w -> w.contains(TAUTOMER_NOTE)), smiles);
+        return a;
     }
 
     @Test
