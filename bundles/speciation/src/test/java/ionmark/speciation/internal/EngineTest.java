@@ -129,7 +129,7 @@ class EngineTest {
         String[][] same = {{"Oc1ccccn1", "O=c1cccc[nH]1"}, {"Oc1ccncc1", "O=c1cc[nH]cc1"},
                 {"Oc1ccc2ccccc2n1", "O=c1ccc2ccccc2[nH]1"}, {"Oc1ccc(Cl)cn1", "O=c1ccc(Cl)c[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1], "pyridone");
             assertTrue(drawn.sites().stream().noneMatch(s -> s.group().equals("hydroxy-heteroaryl")), pair[0]);
         }
         // 2-pyridone: N-H acid 11.65, O-protonation 0.75 (Albert, from memory); no pyridine-like base near 5
@@ -151,7 +151,7 @@ class EngineTest {
         String[][] same = {{"Sc1ccccn1", "S=c1cccc[nH]1"}, {"Sc1ccncc1", "S=c1cc[nH]cc1"},
                 {"Sc1ccc2ccccc2n1", "S=c1ccc2ccccc2[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1], "pyridinethione");
             assertTrue(drawn.sites().stream().anyMatch(s -> s.group().equals("pyridinethione-nh")), pair[0]);
             assertTrue(drawn.macroPka().stream().noneMatch(p -> p > 1.5 && p < 6.5), pair[0] + " " + drawn.macroPka());
         }
@@ -167,7 +167,7 @@ class EngineTest {
         // Heterocyclic Chemistry, from memory): both drawings are one compound and get one answer
         String[][] same = {{"Oc1nc2ccccc2[nH]1", "O=c1[nH]c2ccccc2[nH]1"}, {"Oc1ncc[nH]1", "O=c1[nH]cc[nH]1"}};
         for (String[] pair : same) {
-            Analysis drawn = movedToTautomerOf(pair[0], pair[1]);
+            Analysis drawn = movedToTautomerOf(pair[0], pair[1], "imidazolone");
             assertTrue(drawn.sites().stream().noneMatch(s -> s.type().equals("base") && s.pka() > 2), pair[0]);
         }
         // an O-H next to only one ring N (oxazole, thiazole) is not a cyclic urea and stays as drawn
@@ -178,11 +178,15 @@ class EngineTest {
 
     private static final String TAUTOMER_NOTE = "tautomer, the form that dominates in water";
 
-    /** The reader moved {@code drawn} to a tautomer, said so, and answers as for {@code tautomer}; returns its analysis. */
-    private static Analysis movedToTautomerOf(String drawn, String tautomer) {
+    /**
+     * The reader moved {@code drawn} to the {@code kind} tautomer, said so by name, and answers as for
+     * {@code tautomer}; returns its analysis.
+     */
+    private static Analysis movedToTautomerOf(String drawn, String tautomer, String kind) {
         Analysis a = at(drawn, 7);
         assertEquals(at(tautomer, 7).macroPka(), a.macroPka(), drawn);
-        assertTrue(a.warnings().stream().anyMatch(w -> w.contains(TAUTOMER_NOTE)), drawn);
+        assertTrue(a.warnings().stream().anyMatch(w -> w.contains("analysed as the " + kind + " " + TAUTOMER_NOTE)),
+                drawn + " " + a.warnings());
         return a;
     }
 

@@ -106,14 +106,16 @@ final class Normaliser {
      * an alternating path from the carbon to the nitrogen, so the structure stays a valid Kekulé
      * form. 3-Hydroxypyridines, hydroxy groups on the benzo ring of a quinoline, and rings with two or
      * more nitrogens (hydroxypyrimidines, hydroxypteridines) stay as drawn: see the contributor guide
-     * for what was measured. Needs rings and aromaticity perceived; the aromatic flags are stale
-     * afterwards. Returns how many groups moved.
+     * for what was measured. A hydroxy group between the two nitrogens of an imidazole-type ring is
+     * moved to the imidazolone ({@link #toImidazolone}). Needs rings and aromaticity perceived; the
+     * aromatic flags are stale afterwards. Returns how many groups moved, by kind: pyridones,
+     * pyridinethiones, imidazolones.
      */
-    static int toAromaticLactam(IAtomContainer mol) {
+    static int[] toAromaticLactam(IAtomContainer mol) {
+        int[] moved = new int[3];
         if (!hasPyridineNitrogen(mol)) {
-            return 0; // most structures (every plain phenol) stop here, before any ring search
+            return moved; // most structures (every plain phenol) stop here, before any ring search
         }
-        int moved = 0;
         int[][] sixRings = null; // found when the first candidate asks
         for (IAtom o : mol.atoms()) {
             int z = o.getAtomicNumber();
@@ -138,12 +140,12 @@ final class Normaliser {
                     co.setOrder(IBond.Order.DOUBLE);
                     o.setImplicitHydrogenCount(0);
                     n.setImplicitHydrogenCount(1);
-                    moved++;
+                    moved[z == 8 ? 0 : 1]++;
                     break;
                 }
             }
-            if (z == 8 && o.getImplicitHydrogenCount() == 1 && toImidazolone(mol, o, c, co)) {
-                moved++;
+            if (z == 8 && hydrogens(o) == 1 && toImidazolone(mol, o, c, co)) {
+                moved[2]++;
             }
         }
         return moved;

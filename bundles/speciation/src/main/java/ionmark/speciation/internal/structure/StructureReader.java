@@ -106,12 +106,19 @@ public final class StructureReader {
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
-        int lactims = Normaliser.toAromaticLactam(mol);
-        if (lactims > 0) {
-            notes.add("input had " + lactims + " hydroxy or mercapto group(s) ortho or para to the ring nitrogen of a "
-                    + "pyridine ring (2- or 4-hydroxypyridine or -mercaptopyridine type) or hydroxy group(s) between the "
-                    + "two nitrogens of an imidazole ring; analysed as the pyridone, pyridinethione or imidazolone "
-                    + "tautomer, the form that dominates in water");
+        int[] moved = Normaliser.toAromaticLactam(mol);
+        String[] what = {"hydroxy group(s) ortho or para to the ring nitrogen of a pyridine ring (2- or "
+                + "4-hydroxypyridine type); analysed as the pyridone",
+                "mercapto group(s) ortho or para to the ring nitrogen of a pyridine ring (2- or 4-mercaptopyridine "
+                        + "type); analysed as the pyridinethione",
+                "hydroxy group(s) between the two nitrogens of an imidazole-type ring (2-hydroxybenzimidazole type); "
+                        + "analysed as the imidazolone"};
+        for (int k = 0; k < what.length; k++) {
+            if (moved[k] > 0) {
+                notes.add("input had " + moved[k] + " " + what[k] + " tautomer, the form that dominates in water");
+            }
+        }
+        if (moved[0] + moved[1] + moved[2] > 0) {
             SmartsPattern.prepare(mol);
         }
         String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
