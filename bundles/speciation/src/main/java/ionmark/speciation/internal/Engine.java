@@ -200,6 +200,9 @@ public final class Engine {
             java.util.Comparator<EstimatedSite> byPka = java.util.Comparator.comparingDouble(EstimatedSite::pka);
             EstimatedSite first = bases > 0 ? est.stream().max(byPka).orElseThrow() : est.stream().min(byPka)
                     .orElseThrow();
+            if (est.size() > 1 && !firstStepNearest(o, bases > 0)) {
+                return java.util.Optional.empty();
+            }
             GroupClass g = first.site().group();
             double sigma = g.relation() == ionmark.acidity.api.Relation.NONE || g.rho() == 0 || Double.isNaN(g.rho())
                     ? 0 : -(first.pka() - g.pka()) / g.rho();
@@ -208,6 +211,29 @@ public final class Engine {
         } catch (StructureException | RuntimeException e) {
             return java.util.Optional.empty();
         }
+    }
+
+    /**
+     * Whether the one experimental value of a compound with several sites of one type is nearer the
+     * model's first macroscopic step (lowest for acids, highest for bases) than any other: a single
+     * reported value is often a later step (the second pKa of an alkyl phosphate or a dialkylmalonic
+     * acid, the first lying below the measured range), and giving it to the first site would drag
+     * that class toward the later step.
+     */
+    private boolean firstStepNearest(ionmark.speciation.api.Observation o, boolean bases) {
+        List<Double> macro = analyse(o.structure(), Conditions.noPh(), true).macroPka().stream()
+                .filter(v -> v > -3 && v < 17).toList();
+        if (macro.size() < 2) {
+            return true;
+        }
+        double x = o.pka().get(0);
+        int nearest = 0;
+        for (int j = 1; j < macro.size(); j++) {
+            if (Math.abs(macro.get(j) - x) < Math.abs(macro.get(nearest) - x)) {
+                nearest = j;
+            }
+        }
+        return nearest == (bases ? macro.size() - 1 : 0);
     }
 
     /**
