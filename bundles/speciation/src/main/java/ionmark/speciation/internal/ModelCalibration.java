@@ -26,7 +26,7 @@ import ionmark.speciation.api.Site;
  * microstates, macroscopic constants), scored with the same one-to-one pairing as the accuracy
  * report.
  *
- * <p>The first stage ({@code Calibration}) can only use compounds with one perceived site, so the
+ * <p>The first stage ({@code Calibration}) can only use compounds with one value and sites of one type, so the
  * many multiprotic compounds (amino acids, diamines, hydroxy-azines with a ring nitrogen) do not
  * inform it, and their classes keep whatever the one-site compounds or the handbook said. Here the
  * objective is a robust least-squares sum (Huber, quadratic within {@link #HUBER} unit) over paired
