@@ -26,9 +26,9 @@ import ionmark.speciation.api.Site;
  * microstates, macroscopic constants), scored with the same one-to-one pairing as the accuracy
  * report.
  *
- * <p>The first stage ({@code Calibration}) can only use compounds with one value and sites of one type, so the
- * many multiprotic compounds (amino acids, diamines, hydroxy-azines with a ring nitrogen) do not
- * inform it, and their classes keep whatever the one-site compounds or the handbook said. Here the
+ * <p>The first stage ({@code Calibration}) can only use compounds with one reported value and sites
+ * of one type, so the many multiprotic compounds (amino acids, hydroxy-azines with a ring nitrogen,
+ * anything with two or more reported values) do not inform it, and their classes keep whatever the one-site compounds or the handbook said. Here the
  * objective is a robust least-squares sum (Huber, quadratic within {@link #HUBER} unit) over paired
  * values, plus a prior that weighs the stage-one value like {@link #PRIOR_WEIGHT} compounds. Classes
  * are visited one at a time (coordinate descent), largest first, trying shifts of

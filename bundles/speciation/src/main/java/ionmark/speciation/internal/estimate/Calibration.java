@@ -61,8 +61,8 @@ public final class Calibration {
         }
         List<Reference> refs = new ArrayList<>(base.references().stream().filter(r -> !r.id().equals(refId)).toList());
         refs.add(new Reference(refId, citation + " " + "Least-squares calibration per class on compounds with one "
-                + "value and sites of one type (the value given to the site that titrates first), then a whole-model refinement of class values, reaction constants "
-                + "and pair rules, " + java.time.LocalDate.now() + "; the fit statistics are in each class's and "
+                + "value and sites of one type (the value given to the site that titrates first), then a "
+                + "whole-model refinement of class values, reaction constants and pair rules, " + java.time.LocalDate.now() + "; the fit statistics are in each class's and "
                 + "pair rule's note."));
         return new TableCalibration.Result(base.withGroups(groups).withReferences(refs), fits);
     }
