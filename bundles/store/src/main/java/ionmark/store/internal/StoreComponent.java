@@ -68,8 +68,10 @@ public final class StoreComponent implements TableStore {
     private void seed() {
         if (store.head().isEmpty()) {
             try {
+                // the store numbers its own versions from 1; say which table it started from, so that "v1"
+                // in a notebook can be traced to the shipped table's own number
                 store.publish(tables.toJson(tables.current()), 0, "ionmark", "initial version: the table in use when the "
-                        + "store was created");
+                        + "store was created (its own version block: v" + tables.current().version().number() + ")");
             } catch (StoreConflictException e) {
                 // another instance seeded it first
             } catch (StoreRejectedException e) {
