@@ -225,7 +225,7 @@ class EngineTest {
 
     @Test
     void pyronesAndCoumarinsHaveNoBasicSiteInTheWaterRange() {
-        // 4-pyrone protonates near pH 0 and coumarin far below it (CRC Handbook, from memory): neither is a base a
+        // 4-pyrone protonates near pH 0 (about 0.1) and coumarin far below it (from memory): neither is a base a
         // chemist meets between pH 1 and 14
         for (String pyrone : new String[] {"O=c1ccocc1", "O=c1ccc2ccccc2o1", "Cc1cc(=O)cc(C)o1"}) {
             Analysis a = at(pyrone, 7);
