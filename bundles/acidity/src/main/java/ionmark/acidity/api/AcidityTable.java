@@ -79,6 +79,11 @@ public final class AcidityTable {
         return new AcidityTable(version, references, groups, substituents, measured, interaction, p);
     }
 
+    /** A copy with another site-interaction rule (used by calibration). */
+    public AcidityTable withInteraction(SiteInteraction si) {
+        return new AcidityTable(version, references, groups, substituents, measured, si, pairs);
+    }
+
     /** A copy with other references. */
     public AcidityTable withReferences(List<Reference> r) {
         return new AcidityTable(version, r, groups, substituents, measured, interaction, pairs);

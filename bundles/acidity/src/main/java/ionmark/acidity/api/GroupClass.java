@@ -21,7 +21,8 @@ import java.util.Objects;
  * @param enthalpy    standard enthalpy of ionization, kJ/mol (van 't Hoff temperature correction)
  * @param sd          one standard deviation of the class estimate, pKa units
  * @param permanent   a permanently charged group: counted as a charge, never titrated
- * @param sources     reference id per numeric field name ("pka", "rho", "attenuation", "enthalpy", "sd")
+ * @param sources     reference id per numeric field name ("pka", "rho", "attenuation", "enthalpy", "sd"; "reach" for
+ *                    the class's factor in {@link SiteInteraction#reach()})
  * @param note        free text for curators, may be empty
  * @param matches     example SMILES the class must match at its site atom (checked by the validator)
  * @param misses      example SMILES the class must not match
@@ -134,6 +135,14 @@ public record GroupClass(String id, String name, String smarts, SiteType type, d
     /** A copy with another reference pKa and its source. */
     public GroupClass withPka(double value, String source) {
         return copy(value, rho, attenuation, sd, "pka", source);
+    }
+
+    /**
+     * A copy with the source of a number kept outside the class (the class's reach factor in the
+     * site-interaction rule, field "reach"). Since 1.3.
+     */
+    public GroupClass withSource(String field, String source) {
+        return copy(pka, rho, attenuation, sd, field, source);
     }
 
     private GroupClass copy(double newPka, double newRho, double newAttenuation, double newSd, String field,

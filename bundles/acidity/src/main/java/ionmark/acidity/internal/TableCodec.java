@@ -203,8 +203,17 @@ final class TableCodec {
             }
             shifts.add(new double[] {e.get(0).asDouble(), e.get(1).asDouble()});
         }
+        Map<String, Double> reach = new TreeMap<>();
+        JsonNode r = n.path("reach");
+        if (!r.isMissingNode()) {
+            if (!r.isObject()) {
+                f.problems.add(error(p + ".reach", "must map group class ids to factors"));
+            } else {
+                r.fields().forEachRemaining(e -> reach.put(e.getKey(), f.number(r, p + ".reach", e.getKey(), true)));
+            }
+        }
         return new SiteInteraction(shifts, f.number(n, p, "decay", true), f.number(n, p, "cutoff", true),
-                n.path("source").asText(""), f.strings(n, p, "exempt"));
+                n.path("source").asText(""), f.strings(n, p, "exempt"), reach);
     }
 
     private static Map<String, String> sources(JsonNode n, String p, Fields f) {
@@ -315,6 +324,10 @@ final class TableCodec {
         if (!si.exempt().isEmpty()) { // absent when empty: older tables keep their content hash
             ArrayNode ex = in.putArray("exempt");
             si.exempt().forEach(ex::add);
+        }
+        if (!si.reach().isEmpty()) { // absent when empty: older tables keep their content hash
+            ObjectNode re = in.putObject("reach");
+            si.reach().forEach(re::put);
         }
         sb.append("  \"interaction\": ").append(line(in)).append('\n');
         return sb.toString();

@@ -301,6 +301,16 @@ final class TableValidator {
                         + " part of substituent constants"));
             }
         }
+        t.interaction().reach().forEach((id, f) -> {
+            String p = "$.interaction.reach." + id;
+            Optional<GroupClass> g = t.group(id);
+            if (g.isEmpty()) {
+                out.add(err(p, "unknown group class '" + id + "'"));
+            } else if (g.get().source("reach").isBlank()) {
+                out.add(err(p, "the reach factor " + f + " has no source: add sources.reach to class '" + id + "'"));
+            }
+            range(out, p, f, 0.2, 2, "reach factor");
+        });
     }
 
     private static void checkInteraction(SiteInteraction si, Set<String> refIds, List<Problem> out) {

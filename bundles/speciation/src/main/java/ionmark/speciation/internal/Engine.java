@@ -482,22 +482,21 @@ public final class Engine {
 
     /**
      * The charge-distance interaction for every pair of sites, indexed as {@link #distances}; 0 for a
-     * pair with a site of a class the table exempts (its charge is already in the substituent constants).
+     * pair with a site of a class the table exempts (its charge is already in the substituent constants),
+     * times both sites' reach factors.
      */
     private double[][] interactions(int[][] dist, List<EstimatedSite> est) {
         SiteInteraction rule = table.table().interaction();
         int k = dist.length;
-        boolean[] exempt = new boolean[k];
-        if (!rule.exempt().isEmpty()) {
-            List<EstimatedSite> ordered = inDistanceOrder(est);
-            for (int i = 0; i < k; i++) {
-                exempt[i] = rule.exempts(ordered.get(i).site().group().id());
-            }
+        double[] reach = new double[k];
+        List<EstimatedSite> ordered = inDistanceOrder(est);
+        for (int i = 0; i < k; i++) {
+            reach[i] = rule.reachOf(ordered.get(i).site().group().id());
         }
         double[][] w = new double[k][k];
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
-                w[i][j] = i == j || exempt[i] || exempt[j] ? 0 : rule.at(dist[i][j]);
+                w[i][j] = i == j || reach[i] == 0 || reach[j] == 0 ? 0 : rule.at(dist[i][j]) * reach[i] * reach[j];
             }
         }
         return w;

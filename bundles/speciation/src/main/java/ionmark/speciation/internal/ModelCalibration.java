@@ -58,6 +58,11 @@ final class ModelCalibration {
     static final int SWEEPS = 3;
     /** Loss of an experimental value left without a predicted partner (as a 3-unit error). */
     static final double MISS = huber(3.0);
+    /** Bounds of a class's reach factor on the distance rule. */
+    static final double REACH_MIN = 0.4;
+    static final double REACH_MAX = 1.5;
+    /** The prior on a reach factor, by the shift it causes at three bonds (the rule's 2.45 there). */
+    static final double REACH_PRIOR_SHIFT = 2.45;
 
     /** What the refinement did to one class. */
     record Move(String group, int compounds, double before, double after, double rhoBefore, double rhoAfter,
@@ -77,9 +82,18 @@ final class ModelCalibration {
         List<Observation> usable = data.stream().filter(o -> !o.pka().isEmpty()).toList();
         Engine e0 = new Engine(start, maxHeavyAtoms);
         Map<String, List<Observation>> byClass = new LinkedHashMap<>();
-        usable.parallelStream().map(o -> Map.entry(o, classes(e0.analyse(o.structure(), Conditions.noPh(), true))))
-                .toList().forEach(en -> en.getValue().forEach(
-                        g -> byClass.computeIfAbsent(g, k -> new ArrayList<>()).add(en.getKey())));
+        Map<String, List<Observation>> withPartner = new HashMap<>();
+        usable.parallelStream().map(o -> Map.entry(o, e0.analyse(o.structure(), Conditions.noPh(), true)))
+                .toList().forEach(en -> {
+                    Set<String> cs = classes(en.getValue());
+                    boolean partnered = fullyObserved(en.getValue(), en.getKey());
+                    cs.forEach(g -> {
+                        byClass.computeIfAbsent(g, k -> new ArrayList<>()).add(en.getKey());
+                        if (partnered) {
+                            withPartner.computeIfAbsent(g, k -> new ArrayList<>()).add(en.getKey());
+                        }
+                    });
+                });
         List<String> order = byClass.keySet().stream().filter(g -> byClass.get(g).size() >= MIN_COMPOUNDS)
                 .sorted(Comparator.comparingInt((String g) -> -byClass.get(g).size()).thenComparing(g -> g)).toList();
         Map<String, Double> origin = new HashMap<>();
@@ -90,12 +104,14 @@ final class ModelCalibration {
         start.groups().forEach(g -> rhoOrigin.put(g.id(), g.rho()));
         Map<String, Double> attOrigin = new HashMap<>();
         start.groups().forEach(g -> attOrigin.put(g.id(), g.attenuation()));
+        Map<String, Double> reachOrigin = new HashMap<>();
+        start.groups().forEach(g -> reachOrigin.put(g.id(), start.interaction().reachOf(g.id())));
         for (double step : STEPS) {
             for (int sweep = 0; sweep < SWEEPS; sweep++) {
                 AcidityTable sweepStart = t;
                 for (String id : order) {
                     List<Observation> obs = byClass.get(id);
-                    double[] origin0 = {origin.get(id), rhoOrigin.get(id), attOrigin.get(id)};
+                    double[] origin0 = {origin.get(id), rhoOrigin.get(id), attOrigin.get(id), reachOrigin.get(id)};
                     GroupClass g = group(t, id);
                     double[] best = {objective(t, id, obs, origin0)};
                     lossBefore.putIfAbsent(id, best[0]);
@@ -133,6 +149,26 @@ final class ModelCalibration {
                         }
                         t = better(t, trials, id, obs, origin0, best);
                     }
+                    // the class's reach factor on the distance rule, where enough of its compounds have a partner site
+                    List<Observation> partnered = withPartner.getOrDefault(id, List.of());
+                    if (partnered.size() >= MIN_COMPOUNDS_RHO && origin0[3] > 0) {
+                        trials = new ArrayList<>();
+                        double r0 = t.interaction().reachOf(id);
+                        for (double d : new double[] {-step, -step / 2, step / 2, step}) {
+                            double r = round(r0 + d);
+                            if (r >= REACH_MIN && r <= REACH_MAX) {
+                                AcidityTable base = t;
+                                trials.add(with(base.withInteraction(base.interaction().withReach(id, r)), id,
+                                        x -> x.withSource("reach", refId)));
+                            }
+                        }
+                        double[] bestPartnered = {objective(t, id, partnered, origin0)};
+                        AcidityTable chosen = better(t, trials, id, partnered, origin0, bestPartnered);
+                        if (chosen != t) {
+                            t = chosen;
+                            best[0] = objective(t, id, obs, origin0);
+                        }
+                    }
                 }
                 if (t == sweepStart) {
                     break;
@@ -151,7 +187,8 @@ final class ModelCalibration {
             double attBefore = attOrigin.getOrDefault(g.id(), g.attenuation());
             boolean same = Math.abs(g.pka() - before) < 1e-9
                     && (Double.isNaN(g.rho()) || Math.abs(g.rho() - rhoBefore) < 1e-9)
-                    && (Double.isNaN(g.attenuation()) || Math.abs(g.attenuation() - attBefore) < 1e-9);
+                    && (Double.isNaN(g.attenuation()) || Math.abs(g.attenuation() - attBefore) < 1e-9)
+                    && Math.abs(t.interaction().reachOf(g.id()) - reachOrigin.get(g.id())) < 1e-9;
             if (!order.contains(g.id()) || same) {
                 groups.add(g);
                 continue;
@@ -164,6 +201,12 @@ final class ModelCalibration {
             if (!Double.isNaN(g.attenuation()) && Math.abs(g.attenuation() - attBefore) >= 1e-9) {
                 rhoText += String.format(Locale.ROOT, ", %s %.2f -> %.2f", g.relation() == Relation.HAMMETT
                         ? "ortho factor" : "attenuation", attBefore, g.attenuation());
+            }
+            double reachNow = t.interaction().reachOf(g.id());
+            if (Math.abs(reachNow - reachOrigin.get(g.id())) >= 1e-9) {
+                rhoText += String.format(Locale.ROOT, ", reach on the distance rule %.2f -> %.2f (%d compounds with a "
+                        + "second site and every constant observed)", reachOrigin.get(g.id()), reachNow,
+                        withPartner.getOrDefault(g.id(), List.of()).size());
             }
             String note = (g.note() == null || g.note().isBlank() ? "" : g.note() + "; ") + String.format(Locale.ROOT,
                     "%s whole-model refinement: %d compounds with a site of this class, pKa %.2f -> %.2f%s, objective "
@@ -322,6 +365,22 @@ final class ModelCalibration {
         return out;
     }
 
+    /**
+     * Whether a compound can tell how strongly its sites interact: at least two titratable sites, and
+     * no predicted constant in the measurable range (−2 to 16) without an experimental value to pair
+     * with. The loss does not charge for an extra constant, so where one is free, weakening the
+     * distance rule can move it onto a value that belongs to another site (a diazine's second,
+     * unmeasurable protonation landing on a covalent-hydration constant); such compounds take no part
+     * in fitting a class's reach.
+     */
+    static boolean fullyObserved(Analysis a, Observation o) {
+        if (!a.ok() || a.sites().stream().filter(x -> !x.permanent()).count() < 2) {
+            return false;
+        }
+        long inRange = a.macroPka().stream().filter(v -> v >= -2 && v <= 16).count();
+        return inRange <= o.pka().size();
+    }
+
     /** Classes of the titratable sites in one analysis. */
     static Set<String> classes(Analysis a) {
         Set<String> out = new TreeSet<>();
@@ -388,7 +447,8 @@ final class ModelCalibration {
 
     /** Loss over the class's compounds plus the prior, for one table. */
     private double objective(AcidityTable t, String id, List<Observation> obs, double[] origin0) {
-        return loss(new Engine(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2]);
+        return loss(new Engine(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2])
+                + PRIOR_WEIGHT * huber(REACH_PRIOR_SHIFT * (t.interaction().reachOf(id) - origin0[3]));
     }
 
     /**

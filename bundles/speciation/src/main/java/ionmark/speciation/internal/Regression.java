@@ -123,7 +123,8 @@ final class Regression {
             }
         }
         if (!head.interaction().asMap().equals(draft.interaction().asMap())
-                || !head.interaction().exempt().equals(draft.interaction().exempt())) {
+                || !head.interaction().exempt().equals(draft.interaction().exempt())
+                || !head.interaction().reach().equals(draft.interaction().reach())) {
             out.add("site interactions");
         }
         for (ionmark.acidity.api.PairRule r : draft.pairs()) {
