@@ -564,6 +564,34 @@ public final class Engine {
         return s.shifted(d, new Term(label, d, table.table().citation(rule.source())), s.basis(), s.sd());
     }
 
+    /**
+     * Derivation lines, worth 0 in the site value, for what the microstate model adds on top of it: the
+     * coupling with every other titratable site (distance rule at the bond count × both reach factors,
+     * plus any pair rule) and the potential of permanent charges. They are why the macroscopic constants
+     * differ from the site values.
+     */
+    private void couplings(SiteModel model, int i, List<EstimatedSite> titr, List<Term> terms) {
+        double cutoff = table.table().interaction().cutoff();
+        String source = table.table().citation(table.table().interaction().source());
+        for (int j = 0; j < model.size(); j++) {
+            double w = model.w()[i][j];
+            if (j == i || Math.abs(w) < cutoff) {
+                continue;
+            }
+            EstimatedSite other = titr.get(j);
+            terms.add(new Term(String.format(Locale.ROOT, "coupling with the %s site on atom %d: %.2f pKa units while "
+                    + "both are charged (distance rule × both reach factors, with any pair rule); applied in the "
+                    + "microstate model, not in this value", other.site().group().id(), other.site().atom(), w), 0.0,
+                    source));
+        }
+        double phi = model.background()[i];
+        if (Math.abs(phi) >= cutoff) {
+            // log weight −q·Φ: the site titrates as if its value were lower by Φ, acid or base
+            terms.add(new Term(String.format(Locale.ROOT, "permanent charges in the molecule move this site by %+.2f "
+                    + "pKa units in the microstate model, not in this value", -phi), 0.0, source));
+        }
+    }
+
     /** The sites as {@link #distances} and {@link #interactions} index them: titratable first, then permanent. */
     private static List<EstimatedSite> inDistanceOrder(List<EstimatedSite> est) {
         List<EstimatedSite> out = new ArrayList<>(est.size());
@@ -663,17 +691,21 @@ public final class Engine {
             }
         }
         List<Site> sites = new ArrayList<>();
+        List<EstimatedSite> titrNow = p.sites().stream().filter(x -> !x.site().group().permanent()).toList();
         int t = 0;
         for (EstimatedSite s : p.sites()) {
             GroupClass g = s.site().group();
             Double pr = null;
             double pka = s.pka();
+            List<Term> terms = new ArrayList<>(s.terms());
             if (!g.permanent()) {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];
+                if (!brief) {
+                    couplings(p.model(), t, titrNow, terms);
+                }
                 t++;
             }
-            List<Term> terms = new ArrayList<>(s.terms());
             if (Math.abs(pka - s.pka()) > 1e-9) {
                 terms.add(new Term("conditions (temperature, ionic strength)", pka - s.pka(), "van 't Hoff; Davies"));
             }

@@ -63,6 +63,41 @@ class InteractionReachTest {
     }
 
     @Test
+    void theDerivationStatesEachCouplingAtZeroValueAndOnlyInTheFullAnalysis() {
+        // the shipped table as it is: the stated coupling is the rule at three bonds times both factors
+        Engine shipped = new Engine(SHIPPED, 300);
+        Analysis full = shipped.analyse("NCCS", Conditions.noPh());
+        SiteInteraction si = SHIPPED.interaction();
+        double w = si.at(3) * si.reachOf("amine-primary") * si.reachOf("thiol");
+        var amine = full.sites().stream().filter(s -> s.element().equals("N")).findFirst().orElseThrow();
+        var coupling = amine.derivation().stream().filter(x -> x.label().startsWith("coupling with the thiol site on "
+                + "atom 3:")).toList();
+        assertEquals(1, coupling.size(), amine.derivation().toString());
+        assertEquals(0.0, coupling.get(0).value(), 0.0);
+        assertTrue(coupling.get(0).label().contains(String.format(java.util.Locale.ROOT, "%.2f pKa units", w)),
+                coupling.get(0).label());
+        double sum = amine.derivation().stream().mapToDouble(x -> x.value()).sum();
+        assertEquals(amine.pka(), sum, 0.011);
+        Analysis brief = shipped.analyse("NCCS", Conditions.noPh(), true);
+        assertTrue(brief.sites().stream().flatMap(s -> s.derivation().stream())
+                .noneMatch(x -> x.label().startsWith("coupling")));
+    }
+
+    @Test
+    void aPermanentChargeIsStatedWithTheShiftTheMacroConstantShows() {
+        // 4-hydroxyphenyltrimethylammonium: one titratable site, so its macroscopic constant is the site
+        // value moved by the fixed cation's potential
+        Analysis a = new Engine(SHIPPED, 300).analyse("C[N+](C)(C)c1ccc(O)cc1", Conditions.noPh());
+        assertTrue(a.ok(), a.error());
+        var phenol = a.sites().stream().filter(s -> s.element().equals("O")).findFirst().orElseThrow();
+        var line = phenol.derivation().stream().filter(x -> x.label().startsWith("permanent charges")).findFirst()
+                .orElseThrow();
+        double shift = Double.parseDouble(line.label().replaceAll(".* by ([+-][0-9.]+) pKa units.*", "$1"));
+        assertTrue(shift < -0.3, line.label());
+        assertEquals(phenol.pka() + shift, a.macroPka().get(0), 0.02);
+    }
+
+    @Test
     void anExemptClassStaysOutWhateverItsFactor() {
         SiteInteraction si = SHIPPED.interaction();
         SiteInteraction both = new SiteInteraction(si.shifts(), si.decay(), si.cutoff(), si.source(),
