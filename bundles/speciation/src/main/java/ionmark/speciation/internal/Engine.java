@@ -582,7 +582,7 @@ public final class Engine {
             terms.add(new Term(String.format(Locale.ROOT, "coupling with the %s site on atom %d: %.2f pKa units while "
                     + "both are charged (distance rule × both reach factors, with any pair rule); applied in the "
                     + "microstate model, not in this value", other.site().group().id(), other.site().atom(), w), 0.0,
-                    source));
+                    source + reachSources(titr.get(i).site().group(), other.site().group())));
         }
         double phi = model.background()[i];
         if (Math.abs(phi) >= cutoff) {
@@ -590,6 +590,19 @@ public final class Engine {
             terms.add(new Term(String.format(Locale.ROOT, "permanent charges in the molecule move this site by %+.2f "
                     + "pKa units in the microstate model, not in this value", -phi), 0.0, source));
         }
+    }
+
+    /** "; reach factor of X: citation" for each of the two classes whose factor is not 1. */
+    private String reachSources(GroupClass a, GroupClass b) {
+        StringBuilder sb = new StringBuilder();
+        for (GroupClass g : a.id().equals(b.id()) ? List.of(a) : List.of(a, b)) {
+            double r = table.table().interaction().reachOf(g.id());
+            if (r != 1.0 && !g.source("reach").isBlank()) {
+                sb.append(String.format(Locale.ROOT, "; reach factor %.2f of %s: %s", r, g.id(),
+                        table.table().citation(g.source("reach"))));
+            }
+        }
+        return sb.toString();
     }
 
     /** The sites as {@link #distances} and {@link #interactions} index them: titratable first, then permanent. */

@@ -76,6 +76,8 @@ class InteractionReachTest {
         assertEquals(0.0, coupling.get(0).value(), 0.0);
         assertTrue(coupling.get(0).label().contains(String.format(java.util.Locale.ROOT, "%.2f pKa units", w)),
                 coupling.get(0).label());
+        // the fitted thiol factor names where it comes from
+        assertTrue(coupling.get(0).source().contains("reach factor 0.66 of thiol"), coupling.get(0).source());
         double sum = amine.derivation().stream().mapToDouble(x -> x.value()).sum();
         assertEquals(amine.pka(), sum, 0.011);
         Analysis brief = shipped.analyse("NCCS", Conditions.noPh(), true);
