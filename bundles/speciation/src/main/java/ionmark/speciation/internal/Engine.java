@@ -588,11 +588,15 @@ public final class Engine {
         if (Math.abs(phi) >= cutoff) {
             // log weight −q·Φ: the site titrates as if its value were lower by Φ, acid or base
             terms.add(new Term(String.format(Locale.ROOT, "permanent charges in the molecule move this site by %+.2f "
-                    + "pKa units in the microstate model, not in this value", -phi), 0.0, source));
+                    + "pKa units in the microstate model, not in this value", -phi), 0.0,
+                    source + reachSources(titr.get(i).site().group(), titr.get(i).site().group())));
         }
     }
 
-    /** "; reach factor of X: citation" for each of the two classes whose factor is not 1. */
+    /**
+     * "; reach factor r of X: citation" for each of the two classes (one when both are the same) whose
+     * factor is not 1.
+     */
     private String reachSources(GroupClass a, GroupClass b) {
         StringBuilder sb = new StringBuilder();
         for (GroupClass g : a.id().equals(b.id()) ? List.of(a) : List.of(a, b)) {
