@@ -1,9 +1,11 @@
 package ionmark.speciation.internal.sites;
 
 import java.util.ArrayDeque;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.HashMap;
 import java.util.HashSet;
+import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
@@ -13,6 +15,8 @@ import org.openscience.cdk.graph.Cycles;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
+import org.openscience.cdk.interfaces.IDoubleBondStereochemistry;
+import org.openscience.cdk.interfaces.IStereoElement;
 import org.openscience.cdk.isomorphism.matchers.Expr;
 import org.openscience.cdk.isomorphism.matchers.IQueryAtom;
 import org.openscience.cdk.isomorphism.matchers.IQueryBond;
@@ -68,6 +72,13 @@ public final class RootedPattern {
      */
     private final Expression[] neighbourScreen;
     private final Expression[] neighbourBondScreen;
+    /**
+     * Double-bond geometry the pattern asks for ({@code /} and {@code \} bonds): per double bond, the query
+     * atoms {begin, end, ligand on begin, ligand on end} and 1 when the two ligands are cis (together).
+     * A mapping holds only where the molecule states that geometry for the mapped bond; a molecule
+     * drawn without it does not match.
+     */
+    private final int[][] geometry;
 
     public RootedPattern(IAtomContainer q, int root) {
         this(q, root, new Recursions());
@@ -149,6 +160,7 @@ public final class RootedPattern {
             }
         }
         rootScreen = trees[root] == null ? null : trees[root].screen();
+        geometry = geometry(q);
         // every query atom bonded to the root is reached from it: the root has the lowest rank
         int k = 0;
         for (int i = 1; i < n; i++) {
@@ -163,6 +175,63 @@ public final class RootedPattern {
                 neighbourBondScreen[k++] = parentTest[i] == null ? null : parentTest[i].screen();
             }
         }
+    }
+
+    private static int[][] geometry(IAtomContainer q) {
+        List<int[]> out = new ArrayList<>();
+        for (IStereoElement<?, ?> se : q.stereoElements()) {
+            if (!(se instanceof IDoubleBondStereochemistry db)) {
+                continue;
+            }
+            IBond focus = db.getStereoBond();
+            IBond[] lig = db.getBonds();
+            int cis = focus instanceof QueryBond qb ? stereoValue(qb.getExpression()) : 0;
+            if (cis == 0) {
+                continue;
+            }
+            IAtom begin = focus.getBegin();
+            IBond atBegin = lig[0].contains(begin) ? lig[0] : lig[1];
+            IBond atEnd = atBegin == lig[0] ? lig[1] : lig[0];
+            out.add(new int[] {q.indexOf(begin), q.indexOf(focus.getEnd()), q.indexOf(atBegin.getOther(begin)),
+                    q.indexOf(atEnd.getOther(focus.getEnd())), cis == IStereoElement.TOGETHER ? 1 : 0});
+        }
+        return out.toArray(new int[0][]);
+    }
+
+    /** The value of the STEREOCHEMISTRY primitive in a bond expression (CDK's TOGETHER or OPPOSITE), 0 when none. */
+    private static int stereoValue(Expr e) {
+        if (e == null) {
+            return 0;
+        }
+        if (e.type() == Expr.Type.STEREOCHEMISTRY) {
+            return e.value();
+        }
+        int l = stereoValue(e.left());
+        return l != 0 ? l : stereoValue(e.right());
+    }
+
+    /** Whether the molecule states, for every double bond the pattern gives a geometry, that geometry. */
+    private boolean geometryHolds(Target t, int[] map) {
+        for (int[] g : geometry) {
+            IDoubleBondStereochemistry s = t.doubleBondStereo(map[g[0]], map[g[1]]);
+            if (s == null) {
+                return false;
+            }
+            IBond sb = s.getStereoBond();
+            IBond[] lig = s.getBonds();
+            IBond atBegin = lig[0].contains(sb.getBegin()) ? lig[0] : lig[1];
+            IBond atEnd = atBegin == lig[0] ? lig[1] : lig[0];
+            int ligBegin = atBegin.getOther(sb.getBegin()).getIndex();
+            int ligEnd = atEnd.getOther(sb.getEnd()).getIndex();
+            boolean together = s.getStereo() == IDoubleBondStereochemistry.Conformation.TOGETHER;
+            boolean sameWay = sb.getBegin().getIndex() == map[g[0]];
+            together ^= (sameWay ? ligBegin : ligEnd) != map[g[2]];
+            together ^= (sameWay ? ligEnd : ligBegin) != map[g[3]];
+            if (together != (g[4] == 1)) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /**
@@ -249,7 +318,7 @@ public final class RootedPattern {
     /** Returns false when the visitor asked to stop. */
     private boolean extend(Target t, int i, int[] map, Visitor v) {
         if (i == order.length) {
-            return v.visit(map);
+            return geometry.length > 0 && !geometryHolds(t, map) || v.visit(map);
         }
         int qa = order[i];
         int from = map[parent[i]];
@@ -427,6 +496,8 @@ public final class RootedPattern {
         private int[] ringCounts;
         /** Signatures by atom, {@link #UNKNOWN} until asked for; -1 stays -1 (does not fit). */
         private long[] signatures;
+        /** The molecule's double-bond geometry by bond index, when first asked. */
+        private IDoubleBondStereochemistry[] dbStereo;
         private static final long UNKNOWN = Long.MIN_VALUE;
         /** CDK's minimum cycle basis, the same rings as {@code Cycles.sssr}. */
         private static final CycleFinder SSSR = Cycles.mcb();
@@ -640,6 +711,24 @@ public final class RootedPattern {
                 return -1;
             }
             return order[b] | (bondAromatic[b] ? 8 : 0) | (bondInRing[b] ? 16 : 0);
+        }
+
+        /** The molecule's stated geometry of the double bond between atoms u and w, or null. */
+        IDoubleBondStereochemistry doubleBondStereo(int u, int w) {
+            if (dbStereo == null) {
+                IDoubleBondStereochemistry[] byBond = new IDoubleBondStereochemistry[bondObjects.length];
+                for (IStereoElement<?, ?> se : mol.stereoElements()) {
+                    if (se instanceof IDoubleBondStereochemistry db) {
+                        int b = bond(db.getStereoBond().getBegin().getIndex(), db.getStereoBond().getEnd().getIndex());
+                        if (b >= 0) {
+                            byBond[b] = db;
+                        }
+                    }
+                }
+                dbStereo = byBond;
+            }
+            int b = bond(u, w);
+            return b < 0 ? null : dbStereo[b];
         }
 
         /** The index of the bond between {@code u} and {@code w}, or -1. */

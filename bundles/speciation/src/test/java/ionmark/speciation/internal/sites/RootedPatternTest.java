@@ -130,6 +130,37 @@ class RootedPatternTest {
         assertNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("CCCNCCC").molecule()), 3));
     }
 
+    /**
+     * A pattern that states double-bond geometry ({@code /}, {@code \}) matches only molecules drawn with that
+     * geometry, whichever way the SMILES is written; one drawn without it matches neither form. CDK's whole-
+     * molecule matcher, which reads the geometry, is the reference.
+     */
+    @Test
+    void doubleBondGeometryInThePatternIsRead() throws Exception {
+        String cis = "[OX2H1:1][CX3](=O)/[CX3]=[CX3]\\[CX3](=O)[OX2H1:2]";
+        RootedPattern p = new RootedPattern(query(cis), 0);
+        SmartsPattern cdk = SmartsPattern.create(cis);
+        StructureReader reader = new StructureReader(300);
+        Map<String, Boolean> drawings = new java.util.LinkedHashMap<>();
+        drawings.put("OC(=O)/C=C\\C(=O)O", true); // maleic acid
+        drawings.put("OC(=O)\\C=C/C(=O)O", true);
+        drawings.put("C(=O)(O)/C=C\\C(O)=O", true);
+        drawings.put("O=C(O)/C(/[H])=C(/[H])C(=O)O", true);
+        drawings.put("OC(=O)/C=C/C(=O)O", false); // fumaric acid
+        drawings.put("C(\\C(=O)O)=C/C(=O)O", false);
+        drawings.put("OC(=O)C=CC(=O)O", false); // geometry not stated
+        for (Map.Entry<String, Boolean> d : drawings.entrySet()) {
+            IAtomContainer mol = reader.read(d.getKey()).molecule();
+            RootedPattern.Target t = new RootedPattern.Target(mol);
+            boolean found = false;
+            for (int a = 0; a < mol.getAtomCount(); a++) {
+                found |= p.matchesAt(t, a);
+            }
+            assertEquals(d.getValue(), found, d.getKey());
+            assertEquals(cdk.matches(mol), found, "CDK disagrees on " + d.getKey());
+        }
+    }
+
     @Test
     void rootElementsComeFromTheSiteExpression() {
         assertEquals(Set.of(7), new RootedPattern(query("[NX3;H2]C"), 0).rootElements());
