@@ -113,6 +113,10 @@ class PairRuleTest {
         Analysis fumaric = shippedRules().analyse("OC(=O)/C=C/C(=O)O", Conditions.noPh());
         Analysis undrawn = shippedRules().analyse("OC(=O)C=CC(=O)O", Conditions.noPh());
         assertTrue(ruleNamed(maleic, "ene-dicarboxylic-cis"), maleic.sites().toString());
+        // a chemist reading the line sees where the numbers come from, not the generic working-rule citation
+        assertTrue(maleic.sites().get(0).derivation().stream().filter(t -> t.label().startsWith("pair rule"))
+                .allMatch(t -> t.source().contains("maleic acid's two constants, 1.92 and 6.23")),
+                maleic.sites().get(0).derivation().toString());
         assertTrue(fumaric.sites().stream().noneMatch(s -> s.derivation().stream()
                 .anyMatch(t -> t.label().startsWith("pair rule"))), fumaric.sites().toString());
         assertEquals(fumaric.macroPka(), undrawn.macroPka());
