@@ -119,6 +119,11 @@ final class Accuracy {
     }
 
     static void report(List<Scored> all, Summary sum, Path dir, String title) throws IOException {
+        report(all, sum, dir, title, "");
+    }
+
+    /** {@code extra}: further Markdown sections (the charge-state measure) placed before the per-class table. */
+    static void report(List<Scored> all, Summary sum, Path dir, String title, String extra) throws IOException {
         Files.createDirectories(dir);
         StringBuilder md = new StringBuilder("# Accuracy: ").append(title).append("\n\n");
         md.append("Scored as the team's reviewers score: predicted and experimental macroscopic pKa values paired one to "
@@ -127,6 +132,7 @@ final class Accuracy {
         md.append(String.format(Locale.ROOT, "| share within 1.0 | MAE | RMSE | misses | failed molecules | extra "
                 + "predictions (2–12) |%n|---|---|---|---|---|---|%n| %.1f %% | %.2f | %.2f | %d | %d | %d |%n%n",
                 100 * sum.within1(), sum.mae(), sum.rmse(), sum.values() - sum.matched(), sum.failed(), sum.extra()));
+        md.append(extra);
         Map<String, double[]> perClass = new TreeMap<>();
         for (Scored x : all) {
             for (int[] p : x.pairs()) {

@@ -30,7 +30,7 @@ public final class Cli {
     static final String USAGE = """
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M] [--brief]
-                   ionmark accuracy --truth FILE [--out DIR] [--fold K/N]
+                   ionmark accuracy --truth FILE [--out DIR] [--fold K/N] [--subset open|frozen]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
                    ionmark table check DRAFT      (validation and the regression report against the head)
@@ -358,10 +358,20 @@ public final class Cli {
     }
 
     private int accuracy(List<String> raw) {
-        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--fold"));
+        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--fold", "--subset"));
         int[] f = fold(a.flags().get("--fold"));
-        List<Observation> data = truth(a).stream().filter(o -> f == null || Accuracy.inFold(o.id(), f[0], f[1]))
-                .toList();
+        String subset = a.flags().get("--subset");
+        FrozenSplit.in(subset, ""); // a bad subset name is a usage error before any work
+        java.util.function.Predicate<String> keep = id -> (f == null || Accuracy.inFold(id, f[0], f[1]))
+                && FrozenSplit.in(subset, id);
+        List<Observation> data = truth(a).stream().filter(o -> keep.test(o.id())).toList();
+        List<ChargeStates.Truth> charges;
+        try {
+            charges = ChargeStates.read(Path.of(a.flags().get("--truth"))).stream().filter(t -> keep.test(t.id()))
+                    .toList();
+        } catch (IOException | RuntimeException e) {
+            throw new UsageException("cannot read the z_top column of the truth file: " + e.getMessage());
+        }
         Path dir = Path.of(a.flags().getOrDefault("--out", "accuracy-report"));
         try {
             Files.createDirectories(dir);
@@ -369,9 +379,20 @@ public final class Cli {
                     StandardCharsets.UTF_8)) {
                 List<Accuracy.Scored> scored = Accuracy.run(speciation, data, jsonl, new Progress(err, data.size()));
                 Accuracy.Summary sum = Accuracy.summarise(scored, speciation);
+                String section = "";
+                ChargeStates.Summary cs = null;
+                if (!charges.isEmpty()) {
+                    List<ChargeStates.Row> rows = ChargeStates.run(speciation, charges);
+                    cs = ChargeStates.summarise(rows);
+                    section = ChargeStates.markdown(rows, cs);
+                }
                 Accuracy.report(scored, sum, dir, a.flags().getOrDefault("--truth", "") + (f == null ? ""
-                        : " (fold " + f[0] + "/" + f[1] + ")") + ", table " + tables.current().version().label());
+                        : " (fold " + f[0] + "/" + f[1] + ")") + (subset == null ? "" : " (" + subset + " subset)")
+                        + ", table " + tables.current().version().label(), section);
                 out.println(sum.line());
+                if (cs != null) {
+                    out.println(cs.line());
+                }
                 out.println("report: " + dir.resolve("report.md"));
             }
         } catch (IOException e) {

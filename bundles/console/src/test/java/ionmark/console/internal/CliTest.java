@@ -52,6 +52,23 @@ class CliTest {
     }
 
     @Test
+    void accuracyWithZTopReportsChargeStatesAndKeepsTheOpenSubset() throws IOException {
+        // D00005 is frozen by the split rule, D00001 open; acetic acid 4.76, ethylamine 10.65 (CRC, from memory)
+        Path truth = dir.resolve("t.tsv");
+        Files.writeString(truth, "id\tsmiles\tpka_values\tz_top\nD00001\tCC(=O)O\t4.76\t0\nD00005\tCCN\t10.65\t1\n");
+        assertEquals(0, run("accuracy", "--truth", truth.toString(), "--out", dir.resolve("r").toString(), "--subset",
+                "open"));
+        assertTrue(out().contains("molecules=1 "), out());
+        assertTrue(out().contains("charge states: compounds=1 failed=0"), out());
+        assertTrue(Files.readString(dir.resolve("r/report.md")).contains("## Charge states"));
+    }
+
+    @Test
+    void accuracyRefusesAnUnknownSubset() {
+        assertEquals(2, run("accuracy", "--truth", "x.tsv", "--subset", "all"));
+    }
+
+    @Test
     void tableValidateAcceptsTheShippedTable() throws IOException {
         Path good = dir.resolve("good.json");
         Files.writeString(good, TABLES.toJson(TABLES.current()));

@@ -44,14 +44,20 @@ final class Conditioning {
     }
 
     /**
-     * Apparent (mixed) pKa at ionic strength I for a site whose protonated form has charge zHa and
-     * deprotonated form zA: pKa' = pKa + log γ(A) − log γ(HA), with pH read as activity.
+     * Apparent (mixed) pKa at ionic strength I for a step from a species of charge zHa to one of charge
+     * zA: pKa' = pKa + log γ(A) − log γ(HA), with pH read as activity. The charges are those of the
+     * whole species ({@code microstates.SpeciesActivity} applies it so), not of one site.
      */
     static double ionicShift(int zHa, int zA, double ionicStrength, double tCelsius) {
         if (ionicStrength <= 0) {
             return 0;
         }
         return logGamma(zA, ionicStrength, tCelsius) - logGamma(zHa, ionicStrength, tCelsius);
+    }
+
+    /** k of the Davies term: log γ(z) = −k·z² (0 at I = 0). */
+    static double davies(double ionicStrength, double tCelsius) {
+        return ionicStrength <= 0 ? 0 : -logGamma(1, ionicStrength, tCelsius);
     }
 
     static void describe(Conditions c, List<String> out, List<String> warnings) {
@@ -62,7 +68,8 @@ final class Conditioning {
         }
         if (c.ionicStrength() > 0) {
             out.add(String.format(Locale.ROOT,
-                    "ionic strength %.3f M: site pKa values made apparent by the Davies equation (A = %.4f)",
+                    "ionic strength %.3f M: Davies equation (A = %.4f) on the net charge of each whole species, "
+                            + "so a site's apparent constant depends on the charges elsewhere in the molecule",
                     c.ionicStrength(), debyeA(c.temperature())));
         }
         if (c.ionicStrength() > 0.5) {

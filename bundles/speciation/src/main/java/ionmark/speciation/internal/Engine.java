@@ -30,6 +30,7 @@ import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.LferEstimator;
 import ionmark.speciation.internal.estimate.Overrides;
 import ionmark.speciation.internal.microstates.MacroConstants;
+import ionmark.speciation.internal.microstates.SpeciesActivity;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
 import ionmark.speciation.internal.microstates.Populations;
 import ionmark.speciation.internal.microstates.SiteModel;
@@ -123,8 +124,12 @@ public final class Engine {
             }
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
-        SiteModel model = model(inter, est, c);
-        double[] poly = MacroConstants.polynomial(model, table.table().interaction().cutoff());
+        // ionic strength acts on whole species (Davies with each microstate's net charge), see SpeciesActivity
+        SiteModel atZero = model(inter, est, c);
+        double k = Conditioning.davies(c.ionicStrength(), c.temperature());
+        SiteModel model = SpeciesActivity.of(atZero, permanentCharge(est), k);
+        double[] poly = SpeciesActivity.polynomial(MacroConstants.polynomial(atZero, table.table().interaction().cutoff()),
+                atZero, permanentCharge(est), k);
         final List<EstimatedSite> sitesNow = est;
         List<Double> measuredHere = measured.map(m -> atConditions(m, inter, sitesNow, poly)).orElse(List.of());
         return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
@@ -440,7 +445,7 @@ public final class Engine {
     }
 
     /**
-     * The numeric model at the conditions: corrected site pKa values and the interactions
+     * The numeric model at the temperature (ionic strength comes after, on whole species): corrected site pKa values and the interactions
      * ({@code inter}, from {@link #interactions} and {@link #heldPairs} for these sites).
      */
     private SiteModel model(double[][] inter, List<EstimatedSite> est, Conditions c) {
@@ -455,8 +460,7 @@ public final class Engine {
         for (int i = 0; i < n; i++) {
             GroupClass g = titr.get(i).site().group();
             base[i] = g.type() == SiteType.BASE;
-            pka[i] = titr.get(i).pka() + Conditioning.temperatureShift(g.enthalpy(), c.temperature())
-                    + Conditioning.ionicShift(base[i] ? 1 : 0, base[i] ? 0 : -1, c.ionicStrength(), c.temperature());
+            pka[i] = titr.get(i).pka() + Conditioning.temperatureShift(g.enthalpy(), c.temperature());
         }
         double[][] w = new double[n][n];
         double[] bg = new double[n];
@@ -570,11 +574,11 @@ public final class Engine {
      * plus any pair rule) and the potential of permanent charges. They are why the macroscopic constants
      * differ from the site values.
      */
-    private void couplings(SiteModel model, int i, List<EstimatedSite> titr, List<Term> terms) {
+    private void couplings(SiteModel model, double davies, int q0, int i, List<EstimatedSite> titr, List<Term> terms) {
         double cutoff = table.table().interaction().cutoff();
         String source = table.table().citation(table.table().interaction().source());
         for (int j = 0; j < model.size(); j++) {
-            double w = model.w()[i][j];
+            double w = model.w()[i][j] + 2 * davies; // the rule's part; SpeciesActivity adds −2k to every pair
             if (j == i || Math.abs(w) < cutoff) {
                 continue;
             }
@@ -584,7 +588,7 @@ public final class Engine {
                     + "microstate model, not in this value", other.site().group().id(), other.site().atom(), w), 0.0,
                     source + reachSources(titr.get(i).site().group(), other.site().group())));
         }
-        double phi = model.background()[i];
+        double phi = model.background()[i] + 2 * davies * q0;
         if (Math.abs(phi) >= cutoff) {
             // log weight −q·Φ: the site titrates as if its value were lower by Φ, acid or base
             terms.add(new Term(String.format(Locale.ROOT, "permanent charges in the molecule move this site by %+.2f "
@@ -719,7 +723,8 @@ public final class Engine {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];
                 if (!brief) {
-                    couplings(p.model(), t, titrNow, terms);
+                    couplings(p.model(), Conditioning.davies(c.ionicStrength(), c.temperature()), p.permanentCharge(), t, titrNow,
+                            terms);
                 }
                 t++;
             }
