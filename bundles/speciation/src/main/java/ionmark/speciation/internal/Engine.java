@@ -28,7 +28,10 @@ import ionmark.speciation.api.Term;
 import ionmark.speciation.api.Window;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.LferEstimator;
+import ionmark.speciation.internal.estimate.AnalogCorrection;
+import ionmark.speciation.internal.estimate.AnalogSettings;
 import ionmark.speciation.internal.estimate.Overrides;
+import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.SpeciesActivity;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
@@ -57,12 +60,38 @@ public final class Engine {
     private final Overrides overrides;
     private final StructureReader reader;
     private final MicrostateSolver solver;
+    /** Built on first use: engines made for a calibration step rarely need it. */
+    private volatile SiteAnalogIndex analogs;
+    /** Set while the index is built, under the lock: a measured compound read then that is no exact match gets none. */
+    private boolean buildingAnalogs;
 
     public Engine(AcidityTable table, int maxHeavyAtoms) {
         this.table = new CompiledTable(table);
         this.overrides = new Overrides(this.table);
         this.reader = new StructureReader(maxHeavyAtoms);
         this.solver = new MicrostateSolver(table.interaction().cutoff());
+    }
+
+    /** The measured sites of this table, by class family (built once, on first use). */
+    SiteAnalogIndex analogIndex() {
+        SiteAnalogIndex idx = analogs;
+        if (idx == null) {
+            synchronized (this) {
+                if (buildingAnalogs) {
+                    return SiteAnalogIndex.EMPTY;
+                }
+                if (analogs == null) {
+                    buildingAnalogs = true;
+                    try {
+                        analogs = MeasuredSites.index(this, table.table().measured(), AnalogSettings.current());
+                    } finally {
+                        buildingAnalogs = false;
+                    }
+                }
+                idx = analogs;
+            }
+        }
+        return idx;
     }
 
     public AcidityTable table() {
@@ -117,11 +146,7 @@ public final class Engine {
         if (measured.isPresent()) {
             est = fitToMeasured(mol, adj, inter, est, measured.get());
         } else {
-            // the fingerprint only when some site's class has a measured analog to compare with
-            if (est.stream().anyMatch(s -> !s.site().group().permanent() && overrides.hasAnalogs(s.site().group().id()))) {
-                long[] fp = Overrides.fingerprint(target);
-                est.replaceAll(s -> s.site().group().permanent() ? s : overrides.analog(mol, fp, s));
-            }
+            est = AnalogCorrection.apply(analogIndex(), target, est);
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
         // ionic strength acts on whole species (Davies with each microstate's net charge), see SpeciesActivity

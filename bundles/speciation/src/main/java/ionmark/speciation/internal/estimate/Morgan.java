@@ -4,42 +4,38 @@ package ionmark.speciation.internal.estimate;
 import ionmark.speciation.internal.sites.RootedPattern;
 
 /**
- * Circular (Morgan) fingerprint of radius 2, in the manner of extended-connectivity fingerprints
+ * Circular (Morgan) atom identifiers, in the manner of extended-connectivity fingerprints
  * (Rogers, D.; Hahn, M. J. Chem. Inf. Model. 2010, 50, 742–754): every atom starts from a hash of
  * its own invariants (element, heavy-atom degree, hydrogens, formal charge, aromaticity, ring
  * membership, packed into one word); each round hashes the atom's identifier with the sorted
- * (bond, neighbour identifier) pairs around it. Identifiers of rounds 0, 1 and 2 are folded into {@link #BITS} bits. Only used to
- * rank measured analogs by Tanimoto similarity, so the exact hash function is an internal matter;
- * it is the same for the query and the measured compounds.
+ * (bond, neighbour identifier) pairs around it. Only used to compare site environments of measured
+ * analogs ({@link SiteEnvironment}), so the exact hash function is an internal matter; it is the
+ * same for the query and the measured compounds.
  *
  * <p>Written over plain arrays because a general-purpose fingerprinter was the largest single cost
  * of an estimate.
  */
 final class Morgan {
-    static final int BITS = 2048;
-    static final int RADIUS = 2;
 
     private Morgan() {
     }
 
-    /** The fingerprint as {@link #BITS}/64 words, bit b in word b/64 at position b mod 64. */
-    static long[] of(RootedPattern.Target mol) {
+    /**
+     * Every atom's identifier after rounds 0 to {@code radius}: {@code ids[r][atom]}, computed as
+     * {@link #of} computes them (for the site environments of {@link SiteEnvironment}).
+     */
+    static int[][] identifiers(RootedPattern.Target mol, int radius) {
         int n = mol.atomCount();
         int[][] nbr = mol.adjacency();
-        long[] fp = new long[BITS / 64];
-        int[] id = new int[n];
+        int[][] ids = new int[radius + 1][n];
         for (int i = 0; i < n; i++) {
-            // the invariants packed into one word (each clipped to its field), then hashed once
             int packed = Math.min(mol.atomicNumber(i), 255) | Math.min(nbr[i].length, 15) << 8
                     | Math.min(mol.implicitHydrogens(i), 15) << 12 | (Math.max(-8, Math.min(mol.formalCharge(i), 7)) + 8) << 16
                     | (mol.aromatic(i) ? 1 : 0) << 20 | (mol.inRing(i) ? 1 : 0) << 21;
-            int x = mix(0x9747b28c, packed);
-            id[i] = x;
-            set(fp, x);
+            ids[0][i] = mix(0x9747b28c, packed);
         }
         long[] pairs = new long[8];
-        for (int round = 1; round <= RADIUS; round++) {
-            int[] next = new int[n];
+        for (int round = 1; round <= radius; round++) {
             int seed = mix(0x5bd1e995, round);
             for (int i = 0; i < n; i++) {
                 int d = nbr[i].length;
@@ -47,20 +43,17 @@ final class Morgan {
                     pairs = new long[d];
                 }
                 for (int k = 0; k < d; k++) {
-                    pairs[k] = ((long) mol.bondCode(i, k) << 32) | (id[nbr[i][k]] & 0xffffffffL);
+                    pairs[k] = ((long) mol.bondCode(i, k) << 32) | (ids[round - 1][nbr[i][k]] & 0xffffffffL);
                 }
                 sort(pairs, d);
-                int x = mix(seed, id[i]);
+                int x = mix(seed, ids[round - 1][i]);
                 for (int k = 0; k < d; k++) {
-                    // bond code (0-4) and neighbour identifier in one step
                     x = mix(x, (int) pairs[k] ^ (int) (pairs[k] >>> 32) * 0x9E3779B1);
                 }
-                next[i] = x;
-                set(fp, x);
+                ids[round][i] = x;
             }
-            id = next;
         }
-        return fp;
+        return ids;
     }
 
     /** Insertion sort of the first {@code d} values: an atom has a handful of neighbours. */
@@ -76,14 +69,8 @@ final class Morgan {
         }
     }
 
-    /** Folds a 32-bit identifier into the fingerprint ({@link #BITS} is a power of two). */
-    private static void set(long[] fp, int x) {
-        int bit = x & (BITS - 1);
-        fp[bit >>> 6] |= 1L << bit;
-    }
-
     /** One step of a 32-bit multiplicative hash (MurmurHash3's mixing constants). */
-    private static int mix(int h, int v) {
+    static int mix(int h, int v) {
         int k = v * 0xcc9e2d51;
         k = Integer.rotateLeft(k, 15) * 0x1b873593;
         h ^= k;

@@ -1,0 +1,75 @@
+package ionmark.speciation.internal.estimate;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import ionmark.acidity.api.GroupClass;
+import ionmark.acidity.api.MeasuredCompound;
+import ionmark.acidity.api.SiteType;
+
+/**
+ * The measured sites of one table snapshot, by class family: each measured compound's macroscopic
+ * values assigned to its sites through the model (as an exact match is fitted), giving per site the
+ * residual measured − model and the site's local environment. Built once per snapshot; immutable.
+ */
+public final class SiteAnalogIndex {
+    /** Residuals beyond this are left out: a fit that far off says more about the assignment than the site. */
+    static final double MAX_RESIDUAL = 5.0;
+
+    /**
+     * One measured site.
+     *
+     * @param compound the measured compound
+     * @param group    class id of the site
+     * @param type     acid or base
+     * @param env      local environment ({@link SiteEnvironment}) at the index's radius
+     * @param model    the model's site value before the measured values were fitted
+     * @param residual measured − model at this site
+     * @param citation full citation of the measured value's source
+     */
+    public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
+            double residual, String citation) {
+    }
+
+    public static final SiteAnalogIndex EMPTY = new SiteAnalogIndex(List.of(), AnalogSettings.DEFAULT);
+
+    private final Map<String, List<MeasuredSite>> byFamily = new HashMap<>();
+    private final AnalogSettings settings;
+    private final int size;
+
+    public SiteAnalogIndex(List<MeasuredSite> sites, AnalogSettings settings) {
+        this.settings = settings;
+        int n = 0;
+        for (MeasuredSite s : sites) {
+            if (Math.abs(s.residual()) <= MAX_RESIDUAL && !Double.isNaN(s.residual())) {
+                byFamily.computeIfAbsent(family(s.group()), k -> new ArrayList<>()).add(s);
+                n++;
+            }
+        }
+        byFamily.replaceAll((k, v) -> List.copyOf(v));
+        this.size = n;
+    }
+
+    public AnalogSettings settings() {
+        return settings;
+    }
+
+    /** Number of measured sites held. */
+    public int size() {
+        return size;
+    }
+
+    /** Measured sites of the same family and type as {@code g} (the same class among them). */
+    public List<MeasuredSite> candidates(GroupClass g) {
+        List<MeasuredSite> all = byFamily.getOrDefault(family(g.id()), List.of());
+        return all.stream().filter(s -> s.type() == g.type()).toList();
+    }
+
+    /** A class's family: its id up to the first hyphen ({@code amine-tertiary} → {@code amine}). */
+    public static String family(String groupId) {
+        int dash = groupId.indexOf('-');
+        return dash < 0 ? groupId : groupId.substring(0, dash);
+    }
+}
