@@ -31,6 +31,7 @@ public final class Cli {
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M] [--brief]
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N] [--subset open|frozen]
+                   ionmark annotate ENTRY.md [--format json|text]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
                    ionmark table check DRAFT      (validation and the regression report against the head)
@@ -68,6 +69,7 @@ public final class Cli {
                 case "batch" -> batch(args.subList(1, args.size()));
                 case "table" -> table(args.subList(1, args.size()));
                 case "accuracy" -> accuracy(args.subList(1, args.size()));
+                case "annotate" -> AnnotateCommand.inFramework(out, err).run(args.subList(1, args.size()));
                 default -> usage("unknown command '" + args.get(0) + "'");
             };
         } catch (UsageException e) {

@@ -152,11 +152,10 @@ public final class WebShell extends HttpServlet {
         String id = path.substring(7);
         AdminPage p = adminPages.stream().filter(x -> x.id().equals(id)).findFirst().orElse(null);
         if (p == null) {
-            resp.sendError(404, "no such admin page");
+            fail(resp, w, 404, "There is no administration page '" + id + "'.");
         } else if (!w.user().has(p.requiredRole())) {
             audit(w.user().name(), "request", "denied", (post ? "POST " : "GET ") + path + " needs " + p.requiredRole());
-            resp.sendError(403, "the page needs the role " + p.requiredRole() + (w.session() == null
-                    ? ": sign in at /signin" : ""));
+            fail(resp, w, 403, "The page needs the role " + p.requiredRole() + ".");
         } else {
             page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, w.user(),
                     w.csrf()));
@@ -179,27 +178,43 @@ public final class WebShell extends HttpServlet {
                 resp.setHeader("Set-Cookie", Sessions.cookie("", 0));
                 resp.sendRedirect("/");
             } else if (path.equals("/") || path.isEmpty()) {
-                page(resp, "Entries", w, Pages.list(workspace.ids(), panels, adminPages.stream()
-                        .filter(p -> w.user().has(p.requiredRole())).toList()));
+                String q = req.getParameter("q") == null ? "" : req.getParameter("q").strip();
+                page(resp, "Entries", w, EntryPages.list(rows(q), q, mayEdit(w)) + Pages.list(List.of(), panels,
+                        adminPages.stream().filter(p -> w.user().has(p.requiredRole())).toList())
+                        .replace("<h1>Entries</h1><ul class=\"entries\"></ul>", ""));
+            } else if (path.equals("/new")) {
+                if (mayEdit(w)) {
+                    page(resp, "New entry", w, EntryPages.newEntry(w.csrf(), ""));
+                } else {
+                    fail(resp, w, 403, EditPolicy.refusal(w.session() != null));
+                }
             } else if (path.startsWith("/entry/") && path.endsWith("/edit")) {
                 String id = path.substring(7, path.length() - 5);
-                page(resp, "Edit " + id, w, Pages.editor(id, workspace.text(id), w.csrf()));
+                if (mayEdit(w)) {
+                    page(resp, "Edit " + id, w, EntryPages.editor(id, workspace.text(id), w.csrf()));
+                } else {
+                    fail(resp, w, 403, EditPolicy.refusal(w.session() != null));
+                }
+            } else if (path.startsWith("/entry/") && path.contains("/history")) {
+                history(path.substring(7), resp, w);
             } else if (path.startsWith("/entry/")) {
                 String id = path.substring(7);
                 Entry e = workspace.entry(id);
-                page(resp, e.title(), w, Pages.entry(e, decorations(e, w.user()), panels));
+                page(resp, e.title(), w, EntryPages.notices(e, !decorators.isEmpty()) + Pages.entry(e,
+                        decorations(e, w.user()), panels).replace("/edit\">Edit</a>", "/edit\">Edit</a> · <a href=\"/entry/"
+                        + Pages.esc(id) + "/history\">History</a>"));
             } else if (path.startsWith("/panel/")) {
                 SidePanel p = panel(path.substring(7));
                 if (p == null) {
-                    resp.sendError(404, "no such panel");
+                    fail(resp, w, 404, "There is no panel '" + path.substring(7) + "'.");
                     return;
                 }
                 page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.html(params(req), w.user()));
             } else {
-                resp.sendError(404);
+                fail(resp, w, 404, "There is no page at " + path + ".");
             }
         } catch (IllegalArgumentException | java.nio.file.NoSuchFileException e) {
-            resp.sendError(404, "no such entry");
+            fail(resp, who(req), 404, "There is no such entry.");
         }
     }
 
@@ -211,7 +226,8 @@ public final class WebShell extends HttpServlet {
         String expected = path.equals("/signin") ? csrf : w.csrf();
         if (!expected.equals(req.getHeader("X-Ionmark-Token")) && !expected.equals(req.getParameter("token"))) {
             audit(w.user().name(), "request", "denied", "POST " + path + " without a valid CSRF token");
-            resp.sendError(403, "missing or wrong CSRF token");
+            fail(resp, w, 403, "The form was stale or came from elsewhere (missing or wrong CSRF token): reload "
+                    + "the page and try again.");
             return;
         }
         if (path.equals("/signin")) {
@@ -225,16 +241,28 @@ public final class WebShell extends HttpServlet {
             if (path.equals("/preview")) {
                 String text = new String(req.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
                 Entry e = Workspace.parse("preview", text);
-                send(resp, Pages.body(e, decorations(e, w.user())));
+                send(resp, EntryPages.notices(e, !decorators.isEmpty()) + Pages.body(e, decorations(e, w.user())));
+            } else if (!mayEdit(w)) {
+                audit(w.user().name(), "request", "denied", "POST " + path + " without an editing role");
+                fail(resp, w, 403, EditPolicy.refusal(w.session() != null));
+            } else if (path.equals("/new")) {
+                String title = req.getParameter("title") == null ? "" : req.getParameter("title").strip();
+                if (title.isEmpty()) {
+                    page(resp, "New entry", w, EntryPages.newEntry(w.csrf(), "Give the entry a title."));
+                    return;
+                }
+                String id = EntryPages.idFor(title, workspace.ids());
+                workspace.save(id, "# " + title + "\n\n", w.user().name());
+                resp.sendRedirect("/entry/" + id + "/edit");
             } else if (path.startsWith("/entry/")) {
                 String id = path.substring(7);
-                workspace.save(id, req.getParameter("text") == null ? "" : req.getParameter("text"));
+                workspace.save(id, req.getParameter("text") == null ? "" : req.getParameter("text"), w.user().name());
                 resp.sendRedirect("/entry/" + id);
             } else {
-                resp.sendError(404);
+                fail(resp, w, 404, "There is no page at " + path + ".");
             }
         } catch (IllegalArgumentException e) {
-            resp.sendError(400, e.getMessage());
+            fail(resp, w, 400, e.getMessage());
         }
     }
 
@@ -258,11 +286,60 @@ public final class WebShell extends HttpServlet {
     private Map<Integer, List<String>> decorations(Entry e, HostUser who) {
         Map<Integer, List<String>> out = new HashMap<>();
         for (EntryDecorator d : decorators) {
-            for (Decoration x : d.decorate(e, who)) {
+            List<Decoration> found;
+            try {
+                found = d.decorate(e, who);
+            } catch (RuntimeException ex) {
+                // one contributor's failure must not take the entry down with it
+                found = List.of(new Decoration(0, "<p class=\"im-error\" role=\"alert\">Annotations failed: "
+                        + Pages.esc(String.valueOf(ex.getMessage())) + "</p>"));
+            }
+            for (Decoration x : found) {
                 out.computeIfAbsent(x.block(), k -> new java.util.ArrayList<>()).add(x.html());
             }
         }
         return out;
+    }
+
+    private boolean mayEdit(Who w) {
+        return EditPolicy.mayEdit(w.user(), w.session() != null);
+    }
+
+    /** The entry list: title, last save and its author, filtered by a search over titles and text. */
+    private List<EntryPages.Row> rows(String query) throws IOException {
+        List<EntryPages.Row> rows = new java.util.ArrayList<>();
+        String q = query.toLowerCase(java.util.Locale.ROOT);
+        for (String id : workspace.ids()) {
+            String text = workspace.text(id);
+            Entry e = Workspace.parse(id, text);
+            if (!q.isEmpty() && !e.title().toLowerCase(java.util.Locale.ROOT).contains(q)
+                    && !text.toLowerCase(java.util.Locale.ROOT).contains(q)) {
+                continue;
+            }
+            var last = workspace.history().last(id);
+            String when = last.map(s -> EntryPages.WHEN.format(s.time())).orElseGet(() -> workspace.modified(id));
+            rows.add(new EntryPages.Row(id, e.title(), when, last.map(EntryHistory.Save::author).orElse("–")));
+        }
+        return rows;
+    }
+
+    private void history(String rest, HttpServletResponse resp, Who w) throws IOException {
+        String[] parts = rest.split("/history/?", 2);
+        String id = parts[0];
+        workspace.text(id); // 404 for an unknown entry
+        if (parts.length > 1 && !parts[1].isEmpty()) {
+            int n = Integer.parseInt(parts[1]);
+            page(resp, id + " save " + n, w, "<h1>" + Pages.esc(id) + ", save " + n + "</h1><pre class=\"im-source\">"
+                    + Pages.esc(workspace.history().text(id, n)) + "</pre>");
+        } else {
+            page(resp, "History of " + id, w, EntryPages.history(id, workspace.history().saves(id)));
+        }
+    }
+
+    /** A styled error page with the status. */
+    private static void fail(HttpServletResponse resp, Who w, int status, String message) throws IOException {
+        resp.setStatus(status);
+        page(resp, status + "", w, EntryPages.error(status, message, w.session() != null));
     }
 
     private SidePanel panel(String id) {

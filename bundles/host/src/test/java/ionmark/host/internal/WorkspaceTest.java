@@ -56,22 +56,56 @@ class WorkspaceTest {
     @Test
     void saveReplacesTheEntryWhole() throws IOException {
         Workspace w = new Workspace(dir);
-        w.save("e1", "first");
-        w.save("e1", "second");
+        w.save("e1", "first", "ana");
+        w.save("e1", "second", "ben");
         assertEquals("second", w.text("e1"));
         try (var s = Files.list(dir)) {
-            assertEquals(1, s.count(), "no temporary files left behind");
+            assertEquals(1, s.filter(Files::isRegularFile).count(), "no temporary files left behind");
         }
+    }
+
+    @Test
+    void everySaveIsKeptWithItsAuthorAndTime() throws IOException {
+        Workspace w = new Workspace(dir);
+        w.save("e1", "first", "ana");
+        w.save("e1", "second", "ben");
+        var saves = w.history().saves("e1");
+        assertEquals(2, saves.size());
+        assertEquals("ana", saves.get(0).author());
+        assertEquals("ben", saves.get(1).author());
+        assertTrue(!saves.get(1).time().isBefore(saves.get(0).time()));
+        assertEquals("first", w.history().text("e1", 1), "the earlier text is still there");
+    }
+
+    @Test
+    void anUnclosedFenceIsReportedWithItsLine() {
+        Entry e = Workspace.parse("x", "# T\n\nat pH 7\n\n```smiles\nCCN\n\nmore text\n");
+        assertEquals(1, e.notices().size(), e.notices().toString());
+        assertTrue(e.notices().get(0).contains("line 5"), e.notices().toString());
+        assertTrue(e.notices().get(0).contains("never closed"), e.notices().toString());
+    }
+
+    @Test
+    void anEmptyStructureBlockIsReported() {
+        Entry e = Workspace.parse("x", "```smiles\n```\n");
+        assertTrue(e.notices().get(0).contains("empty"), e.notices().toString());
+    }
+
+    @Test
+    void aBlockPhThatIsNotANumberIsReported() {
+        Entry e = Workspace.parse("x", "```smiles ph=high\nCCN\n```\n");
+        assertTrue(e.notices().get(0).contains("'ph=high'"), e.notices().toString());
+        assertEquals(null, e.blocks().get(0).ph());
     }
 
     @Test
     void aFailedSaveLeavesTheOldEntry() throws IOException {
         Workspace w = new Workspace(dir);
-        w.save("e1", "kept");
+        w.save("e1", "kept", "ana");
         // make the target a directory so the rename fails: the old text must survive
         Path target = dir.resolve("e2.md");
         Files.createDirectories(target.resolve("blocker"));
-        assertThrows(IOException.class, () -> w.save("e2", "new"));
+        assertThrows(IOException.class, () -> w.save("e2", "new", "ana"));
         assertEquals("kept", w.text("e1"));
         try (var s = Files.list(dir)) {
             assertTrue(s.noneMatch(p -> p.getFileName().toString().endsWith(".tmp")), "temporary file cleaned up");
@@ -81,7 +115,7 @@ class WorkspaceTest {
     @Test
     void idsThatCouldEscapeTheFolderAreRefused() {
         Workspace w = new Workspace(dir);
-        assertThrows(IllegalArgumentException.class, () -> w.save("../evil", "x"));
+        assertThrows(IllegalArgumentException.class, () -> w.save("../evil", "x", "ana"));
         assertThrows(IllegalArgumentException.class, () -> w.text("a/b"));
     }
 

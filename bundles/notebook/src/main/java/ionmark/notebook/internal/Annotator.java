@@ -2,163 +2,127 @@ package ionmark.notebook.internal;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
+import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicyOption;
 
-import ionmark.host.api.Block;
+import ionmark.acidity.api.TableService;
 import ionmark.host.api.Decoration;
 import ionmark.host.api.Entry;
 import ionmark.host.api.EntryDecorator;
 import ionmark.host.api.HostUser;
-import ionmark.speciation.api.Analysis;
-import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.Curve;
+import ionmark.notebook.api.AnnotatedEntry;
+import ionmark.notebook.api.AnnotatedStructure;
+import ionmark.notebook.api.EntryAnnotation;
+import ionmark.notebook.api.Separation;
 import ionmark.speciation.api.Speciation;
+import ionmark.store.api.TableStore;
 
 /**
- * Annotates every structure of an entry (structure blocks, and SMILES written inline in text where
- * unambiguous) at the pH the entry states for it: the block's own pH, else the nearest statement
- * before it in the same section (for inline SMILES: up to the end of its own paragraph), else the
- * entry's first statement.
- * Temperature and ionic strength are found the same way.
+ * Annotates every structure of an entry ({@link EntryReader}, the path {@code ionmark annotate} shares) and
+ * renders a card after the block each came from, plus, for an entry with several structures, the pH ranges
+ * that separate them.
  */
-@Component(service = EntryDecorator.class)
-public final class Annotator implements EntryDecorator {
+@Component(service = {EntryDecorator.class, EntryAnnotation.class})
+public final class Annotator implements EntryDecorator, EntryAnnotation {
     private final Speciation speciation;
-    private final ionmark.store.api.TableStore store;
-    private final ionmark.acidity.api.TableService tables;
+    private final TableStore store;
+    private final TableService tables;
 
     public Annotator(Speciation speciation) {
         this(speciation, null, null);
     }
 
-    /** With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version. */
+    /**
+     * With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version.
+     * Greedy: a store that starts after this component still gets bound (a reluctant optional reference stayed
+     * unbound, and pinned entries silently showed the head).
+     */
     @Activate
     public Annotator(@Reference Speciation speciation,
-            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
-            ionmark.store.api.TableStore store,
-            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
-            ionmark.acidity.api.TableService tables) {
+            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
+            TableStore store,
+            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
+            TableService tables) {
         this.speciation = speciation;
         this.store = store;
         this.tables = tables;
     }
 
-    /** The speciation for an entry: bound to its pinned table version when it names one the store holds. */
-    Speciation forEntry(Entry entry) {
-        if (entry.pinnedTableVersion() <= 0 || store == null || tables == null) {
-            return speciation;
-        }
-        return store.content(entry.pinnedTableVersion()).flatMap(json -> tables.validate(json).table())
-                .map(speciation::pinned).orElse(speciation);
+    /** The speciation for an entry and what the reader must know about the table it uses. */
+    record Bound(Speciation speciation, List<String> warnings) {
     }
 
-    /** A statement found in a text block. */
-    record Found<T>(int block, int section, T value) {
+    Bound forEntry(Entry entry) {
+        int v = entry.pinnedTableVersion();
+        if (v <= 0) {
+            return new Bound(speciation, List.of());
+        }
+        if (store == null || tables == null) {
+            return new Bound(speciation, List.of("This entry is pinned to table v" + v + ", but no table store is "
+                    + "available: annotated with the current table instead."));
+        }
+        var json = store.content(v);
+        if (json.isEmpty()) {
+            return new Bound(speciation, List.of("This entry is pinned to table v" + v + ", which the table store does "
+                    + "not hold: annotated with the current table instead. Correct the 'Table version:' line."));
+        }
+        var table = tables.validate(json.get()).table();
+        if (table.isEmpty()) {
+            return new Bound(speciation, List.of("Table v" + v + " in the store does not validate: annotated with the "
+                    + "current table instead."));
+        }
+        return new Bound(speciation.pinned(table.get()), List.of());
+    }
+
+    @Override
+    public AnnotatedEntry annotate(Entry entry) {
+        Bound b = forEntry(entry);
+        return new EntryReader(b.speciation()).read(entry, b.warnings());
     }
 
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
-        Speciation sp = forEntry(entry);
-        List<Found<StatedConditions.PhStatement>> phs = new ArrayList<>();
-        List<Found<StatedConditions.Value>> temps = new ArrayList<>();
-        List<Found<StatedConditions.Value>> ionic = new ArrayList<>();
-        List<Block> blocks = entry.blocks();
-        for (int i = 0; i < blocks.size(); i++) {
-            Block b = blocks.get(i);
-            if (b.kind() != Block.Kind.STRUCTURE) {
-                int k = i;
-                StatedConditions.ph(b.content()).forEach(p -> phs.add(new Found<>(k, b.section(), p)));
-                StatedConditions.temperature(b.content()).forEach(p -> temps.add(new Found<>(k, b.section(), p)));
-                StatedConditions.ionicStrength(b.content()).forEach(p -> ionic.add(new Found<>(k, b.section(), p)));
-            }
-        }
+        AnnotatedEntry a = annotate(entry);
         List<Decoration> out = new ArrayList<>();
-        for (int i = 0; i < blocks.size(); i++) {
-            Block b = blocks.get(i);
-            if (b.kind() == Block.Kind.TEXT) {
-                // SMILES written inline in the text: annotated after the paragraph, at the pH that applies there
-                for (String smi : InlineStructures.find(b.content())) {
-                    Block inline = new Block(Block.Kind.STRUCTURE, smi, null, b.section());
-                    out.add(new Decoration(i, card(sp, inline, i + 1, phs, temps, ionic).html()));
-                }
-                continue;
-            }
-            if (b.kind() != Block.Kind.STRUCTURE || b.content().isBlank()) {
-                continue;
-            }
-            out.add(new Decoration(i, card(sp, b, i, phs, temps, ionic).html()));
+        List<String> own = a.warnings().stream().filter(w -> !entry.notices().contains(w)).toList();
+        if (!own.isEmpty()) {
+            StringBuilder sb = new StringBuilder("<ul class=\"im-entrywarn\" role=\"alert\">");
+            own.forEach(w -> sb.append("<li>").append(Html.esc(w)).append("</li>"));
+            out.add(new Decoration(0, sb.append("</ul>").toString()));
+        }
+        for (AnnotatedStructure s : a.structures()) {
+            out.add(new Decoration(s.block(), new Card(s).html()));
+        }
+        long distinct = a.structures().stream().filter(AnnotatedStructure::ok).map(AnnotatedStructure::words).distinct()
+                .count();
+        if (distinct >= 2) {
+            out.add(new Decoration(entry.blocks().size() - 1, separations(a.separations())));
         }
         return out;
     }
 
-    Card card(Speciation sp, Block b, int index, List<Found<StatedConditions.PhStatement>> phs,
-            List<Found<StatedConditions.Value>> temps, List<Found<StatedConditions.Value>> ionic) {
-        List<String> taken = new ArrayList<>();
-        double t = Conditions.STANDARD_TEMPERATURE;
-        Found<StatedConditions.Value> ft = nearest(temps, index, b.section());
-        if (ft != null) {
-            t = ft.value().value();
-            taken.add(ft.value().words());
-        }
-        double is = 0;
-        Found<StatedConditions.Value> fi = nearest(ionic, index, b.section());
-        if (fi != null) {
-            is = fi.value().value();
-            taken.add(fi.value().words());
-        }
-        List<Double> phValues = new ArrayList<>();
-        if (b.ph() != null) {
-            phValues.add(b.ph());
-            taken.add(0, "pH " + StatedConditions.format(b.ph()) + " (on the structure block)");
+    static String separations(List<Separation> found) {
+        StringBuilder sb = new StringBuilder("<section class=\"im-separations\"><h3>pH ranges that separate the "
+                + "structures of this entry</h3>");
+        if (found.isEmpty()) {
+            sb.append("<p>No pH range between 0 and 14 leaves one structure at least 99 % neutral while another is at "
+                    + "least 99 % charged.</p>");
         } else {
-            Found<StatedConditions.PhStatement> f = nearest(phs, index, b.section());
-            if (f != null) {
-                phValues.add(f.value().low());
-                if (f.value().isRange()) {
-                    phValues.add(f.value().high());
-                }
-                taken.add(0, f.value().words());
+            sb.append("<table class=\"im-sites\"><thead><tr><th>pH range</th><th>to the organic phase (≥ 99 % "
+                    + "neutral)</th><th>stays in water (≥ 99 % charged)</th></tr></thead><tbody>");
+            for (Separation s : found) {
+                sb.append("<tr><td>").append(String.format(Locale.ROOT, "%.1f–%.1f", s.from(), s.to())).append("</td><td>")
+                        .append(Html.esc(s.extracted())).append("</td><td>").append(Html.esc(s.retained()))
+                        .append("</td></tr>");
             }
+            sb.append("</tbody></table>");
         }
-        return check(sp, b.content(), phValues, t, is, taken);
-    }
-
-    Card check(String structure, List<Double> phValues, double t, double is, List<String> taken) {
-        return check(speciation, structure, phValues, t, is, taken);
-    }
-
-    Card check(Speciation speciation, String structure, List<Double> phValues, double t, double is,
-            List<String> taken) {
-        List<Analysis> analyses = new ArrayList<>();
-        if (phValues.isEmpty()) {
-            analyses.add(speciation.analyse(structure, new Conditions(null, t, is)));
-        } else {
-            for (double ph : phValues) {
-                analyses.add(speciation.analyse(structure, new Conditions(ph, t, is)));
-            }
-        }
-        Curve curve = null;
-        if (analyses.get(0).ok()) {
-            try {
-                curve = speciation.curve(structure, new Conditions(null, t, is), 0, 14, 0.1);
-            } catch (IllegalArgumentException e) {
-                curve = null;
-            }
-        }
-        return new Card(analyses, taken, curve);
-    }
-
-    /** The nearest statement before the block in its section, else the first in the entry. */
-    static <T> Found<T> nearest(List<Found<T>> found, int block, int section) {
-        Found<T> best = null;
-        for (Found<T> f : found) {
-            if (f.block() < block && f.section() == section) {
-                best = f;
-            }
-        }
-        return best != null ? best : found.isEmpty() ? null : found.get(0);
+        return sb.append("<p class=\"im-small\">From each structure's estimated charge states; partition estimates "
+                + "are for planning.</p></section>").toString();
     }
 }

@@ -1,53 +1,186 @@
 package ionmark.notebook.internal;
 
 import java.awt.Color;
+import java.io.StringReader;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
 
 import org.openscience.cdk.depict.DepictionGenerator;
+import org.openscience.cdk.graph.ConnectivityChecker;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.interfaces.IBond;
+import org.openscience.cdk.io.MDLV2000Reader;
+import org.openscience.cdk.io.MDLV3000Reader;
 import org.openscience.cdk.renderer.generators.standard.StandardGenerator;
 import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smiles.SmiFlavor;
+import org.openscience.cdk.smiles.SmilesGenerator;
 import org.openscience.cdk.smiles.SmilesParser;
+import org.openscience.cdk.tools.manipulator.AtomContainerManipulator;
 
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Site;
 
 /**
- * The structure as SVG with a badge at every site: pKa ± sd and percent protonated. Acid sites get
- * a square marker, base sites a round one (shape and text, not colour alone).
+ * The analysed structure as SVG with a numbered mark at every site: a square for an acid, a circle for a
+ * base, the number being the site's row in the card's table. The solver numbers site atoms in the order of
+ * the parent structure's heavy atoms as read from the input; the analysed SMILES lists them in another order.
+ * {@link #drawn(Analysis)} rebuilds that parent from the input and maps each of its atoms to the analysed
+ * SMILES through the writer's output order, checking element and every bond; when the check fails it draws
+ * the parent as read, whose atom order is the solver's own.
  */
 final class Depiction {
+    /** Acid and base marks: a purple and green pair told apart by colour-blind readers too (and by shape). */
+    static final Color ACID = new Color(0x6A, 0x3D, 0x9A);
+    static final Color BASE = new Color(0x1B, 0x78, 0x37);
+    private static final int FLAVOR = SmiFlavor.Stereo | SmiFlavor.UseAromaticSymbols;
+
     private Depiction() {
     }
 
+    /** The molecule to draw and, for each solver atom index, the index of that atom in it. */
+    record Drawn(IAtomContainer molecule, int[] atomAt) {
+        IAtom atom(int solverIndex) {
+            return solverIndex >= 0 && solverIndex < atomAt.length ? molecule.getAtom(atomAt[solverIndex]) : null;
+        }
+    }
+
+    static Drawn drawn(Analysis a) throws Exception {
+        SmilesParser sp = new SmilesParser(SilentChemObjectBuilder.getInstance());
+        IAtomContainer analysed = sp.parseSmiles(a.smiles());
+        IAtomContainer parent = parentAsRead(a.input());
+        int n = analysed.getAtomCount();
+        if (parent != null && parent.getAtomCount() == n) {
+            int[] order = new int[n];
+            new SmilesGenerator(FLAVOR).create(parent, order);
+            if (consistent(parent, analysed, order)) {
+                return new Drawn(analysed, order);
+            }
+        }
+        if (parent != null) {
+            int[] identity = new int[parent.getAtomCount()];
+            for (int i = 0; i < identity.length; i++) {
+                identity[i] = i;
+            }
+            return new Drawn(parent, identity);
+        }
+        int[] identity = new int[n];
+        for (int i = 0; i < n; i++) {
+            identity[i] = i;
+        }
+        return new Drawn(analysed, identity);
+    }
+
+    /** The input's parent component with hydrogens suppressed, atoms in input order, as the solver reads it. */
+    static IAtomContainer parentAsRead(String input) {
+        try {
+            IAtomContainer mol;
+            if (EntryReader.looksLikeMolfile(input)) {
+                String record = input.contains("$$$$") ? input.substring(0, input.indexOf("$$$$")) : input;
+                IAtomContainer empty = SilentChemObjectBuilder.getInstance().newAtomContainer();
+                if (record.contains("V3000")) {
+                    try (MDLV3000Reader r = new MDLV3000Reader(new StringReader(record))) {
+                        mol = r.read(empty);
+                    }
+                } else {
+                    try (MDLV2000Reader r = new MDLV2000Reader(new StringReader(record))) {
+                        mol = r.read(empty);
+                    }
+                }
+            } else {
+                String first = input.strip().split("\\s+")[0];
+                mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(first);
+            }
+            if (mol == null) {
+                return null;
+            }
+            AtomContainerManipulator.suppressHydrogens(mol);
+            if (!ConnectivityChecker.isConnected(mol)) {
+                List<IAtomContainer> parts = new ArrayList<>();
+                ConnectivityChecker.partitionIntoMolecules(mol).atomContainers().forEach(parts::add);
+                mol = parts.stream().max(Comparator.comparingInt((IAtomContainer c) -> hasCarbon(c) ? 1 : 0)
+                        .thenComparingInt(IAtomContainer::getAtomCount)).orElseThrow();
+            }
+            return mol;
+        } catch (Exception | LinkageError e) {
+            return null;
+        }
+    }
+
+    private static boolean hasCarbon(IAtomContainer c) {
+        for (IAtom a : c.atoms()) {
+            if (a.getAtomicNumber() != null && a.getAtomicNumber() == 6) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** Same element at each mapped atom, and a bond in the analysed molecule for every bond of the parent. */
+    static boolean consistent(IAtomContainer parent, IAtomContainer analysed, int[] order) {
+        for (int i = 0; i < order.length; i++) {
+            if (order[i] < 0 || order[i] >= analysed.getAtomCount()
+                    || !parent.getAtom(i).getAtomicNumber().equals(analysed.getAtom(order[i]).getAtomicNumber())) {
+                return false;
+            }
+        }
+        for (IBond b : parent.bonds()) {
+            if (analysed.getBond(analysed.getAtom(order[b.getBegin().getIndex()]),
+                    analysed.getAtom(order[b.getEnd().getIndex()])) == null) {
+                return false;
+            }
+        }
+        return parent.getBondCount() == analysed.getBondCount();
+    }
+
+    /** The SVG, or a short note when the structure cannot be drawn. */
     static String svg(Analysis a) {
         try {
-            IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(a.smiles());
-            for (Site s : a.sites()) {
-                if (s.atom() >= mol.getAtomCount()) {
+            Drawn d = drawn(a);
+            IAtomContainer mol = d.molecule();
+            List<IAtom> acids = new ArrayList<>();
+            List<IAtom> bases = new ArrayList<>();
+            List<Site> sites = a.sites();
+            for (int row = 0; row < sites.size(); row++) {
+                Site s = sites.get(row);
+                IAtom atom = d.atom(s.atom());
+                if (atom == null) {
                     continue;
                 }
-                IAtom atom = mol.getAtom(s.atom());
-                String mark = s.type().equals("acid") ? "■" : "●";
-                String label = s.permanent() ? mark + " fixed +" : String.format(Locale.ROOT, "%s %.1f±%.1f%s", mark,
-                        s.pka(), s.sd(), s.protonated() == null ? "" : String.format(Locale.ROOT, " · %.0f%% H⁺",
-                                100 * s.protonated()));
+                boolean acid = s.type().equals("acid");
+                String label = (acid ? "■" : "●") + (row + 1) + (s.permanent() ? " fixed"
+                        : String.format(Locale.ROOT, " %.1f", s.pka()));
                 atom.setProperty(StandardGenerator.ANNOTATION_LABEL, label);
+                (acid ? acids : bases).add(atom);
             }
-            List<IAtom> acids = a.sites().stream().filter(s -> s.type().equals("acid") && s.atom() < mol.getAtomCount())
-                    .map(s -> mol.getAtom(s.atom())).toList();
-            List<IAtom> bases = a.sites().stream().filter(s -> s.type().equals("base") && s.atom() < mol.getAtomCount())
-                    .map(s -> mol.getAtom(s.atom())).toList();
-            String svg = new DepictionGenerator().withSize(360, 240).withAnnotationScale(0.6)
-                    .withAnnotationColor(new Color(0x22, 0x22, 0x22))
-                    .withHighlight(acids, new Color(0xE0, 0x8A, 0x00)).withHighlight(bases, new Color(0x1F, 0x6F, 0xB5))
-                    .withOuterGlowHighlight(3.0).depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
+            int heavy = mol.getAtomCount();
+            // scaled to the molecule: a small one is not blown up, a large one gets room
+            int w = Math.max(260, Math.min(560, 150 + 22 * heavy));
+            int h = Math.max(200, Math.min(380, 130 + 12 * heavy));
+            String svg = new DepictionGenerator().withSize(w, h).withFillToFit().withZoom(1.0)
+                    .withAnnotationScale(0.55).withAnnotationColor(new Color(0x1D, 0x24, 0x33))
+                    .withHighlight(acids, ACID).withHighlight(bases, BASE).withOuterGlowHighlight(4.0)
+                    .depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             int start = svg.indexOf("<svg");
             return start >= 0 ? svg.substring(start) : svg;
         } catch (Exception | LinkageError e) {
             return "<p class=\"im-nodepict\">(no drawing: " + Html.esc(String.valueOf(e.getMessage())) + ")</p>";
+        }
+    }
+
+    /** A small drawing of one species (charged forms as written by the solver). */
+    static String species(String smiles) {
+        try {
+            IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
+            String svg = new DepictionGenerator().withSize(180, 120).withFillToFit().depict(mol)
+                    .toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
+            int start = svg.indexOf("<svg");
+            return start >= 0 ? svg.substring(start) : svg;
+        } catch (Exception | LinkageError e) {
+            return "<code>" + Html.esc(smiles) + "</code>";
         }
     }
 }
