@@ -9,5 +9,5 @@
  * }</pre>
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.3.0")
+@org.osgi.annotation.versioning.Version("1.4.0")
 package ionmark.acidity.api;

@@ -16,6 +16,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.ClassFit;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.acidity.api.Problem;
@@ -85,6 +86,10 @@ final class TableCodec {
             problems.add(error("$", "the table must be a JSON object"));
             return new Read(null, root, problems);
         }
+        if (SplitFormat.CURATED.equals(root.path("format").asText())) {
+            // the curated base alone (fragments expanded, no fitted overlay): what calibration starts from
+            root = SplitFormat.build(root, null, problems);
+        }
         Fields f = new Fields(problems);
         if (!FORMAT.equals(root.path("format").asText())) {
             problems.add(error("$.format", "format must be \"" + FORMAT + "\""));
@@ -93,17 +98,26 @@ final class TableCodec {
         List<Reference> refs = new ArrayList<>();
         each(root, "references", f, (n, p) -> refs.add(new Reference(f.text(n, p, "id"), f.text(n, p, "citation"))));
         List<GroupClass> groups = new ArrayList<>();
-        each(root, "groups", f, (n, p) -> groups.add(readGroup(n, p, f)));
+        Map<String, ClassFit> fits = new TreeMap<>();
+        each(root, "groups", f, (n, p) -> {
+            GroupClass g = readGroup(n, p, f);
+            groups.add(g);
+            readFit(n.get("fit"), p + ".fit", f).ifPresent(x -> fits.put(g.id(), x));
+        });
         List<Substituent> subs = new ArrayList<>();
         each(root, "substituents", f, (n, p) -> subs.add(readSubstituent(n, p, f)));
         List<MeasuredCompound> measured = new ArrayList<>();
         each(root, "measured", f, (n, p) -> measured.add(readMeasured(n, p, f)));
         List<PairRule> pairs = new ArrayList<>();
         if (root.has("pairs")) { // optional: tables before pair rules have none
-            each(root, "pairs", f, (n, p) -> pairs.add(readPair(n, p, f)));
+            each(root, "pairs", f, (n, p) -> {
+                PairRule r = readPair(n, p, f);
+                pairs.add(r);
+                readFit(n.get("fit"), p + ".fit", f).ifPresent(x -> fits.put("pair:" + r.id(), x));
+            });
         }
         SiteInteraction interaction = readInteraction(root.path("interaction"), "$.interaction", f);
-        AcidityTable table = new AcidityTable(version, refs, groups, subs, measured, interaction, pairs);
+        AcidityTable table = new AcidityTable(version, refs, groups, subs, measured, interaction, pairs, fits);
         return new Read(table, root, problems);
     }
 
@@ -186,6 +200,50 @@ final class TableCodec {
         return new PairRule(f.text(n, p, "id"), f.text(n, p, "name"), f.text(n, p, "smarts"),
                 f.number(n, p, "singly", true), f.number(n, p, "doubly", true), n.path("source").asText(""), n.path("note").asText(""),
                 f.strings(n, p, "matches"));
+    }
+
+    /** The provenance object of a fitted record: source, date, n, rmse, before, after, log. */
+    static java.util.Optional<ClassFit> readFit(JsonNode n, String p, Fields f) {
+        if (n == null || n.isNull()) {
+            return java.util.Optional.empty();
+        }
+        if (!n.isObject()) {
+            f.problems.add(error(p, "a fit is an object with source, date, n, rmse, before, after and log"));
+            return java.util.Optional.empty();
+        }
+        return java.util.Optional.of(new ClassFit(f.text(n, p, "source"), n.path("date").asText(""),
+                n.path("n").asInt(0), n.has("rmse") ? n.path("rmse").asDouble() : Double.NaN,
+                numbers(n.path("before")), numbers(n.path("after")), n.path("log").asText("")));
+    }
+
+    private static Map<String, Double> numbers(JsonNode n) {
+        Map<String, Double> m = new TreeMap<>();
+        n.fields().forEachRemaining(e -> m.put(e.getKey(), e.getValue().asDouble()));
+        return m;
+    }
+
+    static ObjectNode fitNode(ClassFit x) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("source", x.source());
+        if (!x.date().isEmpty()) {
+            o.put("date", x.date());
+        }
+        if (x.n() > 0) {
+            o.put("n", x.n());
+        }
+        num(o, "rmse", x.rmse());
+        if (!x.before().isEmpty()) {
+            ObjectNode b = o.putObject("before");
+            x.before().forEach(b::put);
+        }
+        if (!x.after().isEmpty()) {
+            ObjectNode a = o.putObject("after");
+            x.after().forEach(a::put);
+        }
+        if (!x.log().isEmpty()) {
+            o.put("log", x.log());
+        }
+        return o;
     }
 
     private static SiteInteraction readInteraction(JsonNode n, String p, Fields f) {
@@ -308,11 +366,12 @@ final class TableCodec {
             o.put("citation", r.citation());
             return o;
         }).toList(), false);
-        block(sb, "groups", t.groups().stream().map(TableCodec::groupNode).toList(), false);
+        block(sb, "groups", t.groups().stream().map(g -> withFit(groupNode(g), t.fit(g.id()))).toList(), false);
         block(sb, "substituents", t.substituents().stream().map(TableCodec::substituentNode).toList(), false);
         block(sb, "measured", t.measured().stream().map(TableCodec::measuredNode).toList(), false);
         if (!t.pairs().isEmpty()) { // absent when empty: older tables keep their content hash
-            block(sb, "pairs", t.pairs().stream().map(TableCodec::pairNode).toList(), false);
+            block(sb, "pairs", t.pairs().stream().map(r -> withFit(pairNode(r), t.fit("pair:" + r.id()))).toList(),
+                    false);
         }
         SiteInteraction si = t.interaction();
         ObjectNode in = JSON.createObjectNode();
@@ -341,7 +400,12 @@ final class TableCodec {
         sb.append(rows.isEmpty() ? "]" : "\n  ]").append(last ? "\n" : ",\n");
     }
 
-    private static ObjectNode groupNode(GroupClass g) {
+    private static ObjectNode withFit(ObjectNode o, java.util.Optional<ClassFit> fit) {
+        fit.ifPresent(x -> o.set("fit", fitNode(x)));
+        return o;
+    }
+
+    static ObjectNode groupNode(GroupClass g) {
         ObjectNode o = JSON.createObjectNode();
         o.put("id", g.id());
         o.put("name", g.name());
@@ -373,7 +437,7 @@ final class TableCodec {
         return o;
     }
 
-    private static ObjectNode substituentNode(Substituent x) {
+    static ObjectNode substituentNode(Substituent x) {
         ObjectNode o = JSON.createObjectNode();
         o.put("id", x.id());
         o.put("name", x.name());
@@ -388,7 +452,7 @@ final class TableCodec {
         return o;
     }
 
-    private static ObjectNode measuredNode(MeasuredCompound m) {
+    static ObjectNode measuredNode(MeasuredCompound m) {
         ObjectNode o = JSON.createObjectNode();
         o.put("id", m.id());
         o.put("name", m.name());
@@ -404,7 +468,7 @@ final class TableCodec {
         return o;
     }
 
-    private static ObjectNode pairNode(PairRule r) {
+    static ObjectNode pairNode(PairRule r) {
         ObjectNode o = JSON.createObjectNode();
         o.put("id", r.id());
         o.put("name", r.name());
@@ -420,7 +484,7 @@ final class TableCodec {
         return o;
     }
 
-    private static void num(ObjectNode o, String k, double v) {
+    static void num(ObjectNode o, String k, double v) {
         if (!Double.isNaN(v)) {
             o.put(k, v);
         }

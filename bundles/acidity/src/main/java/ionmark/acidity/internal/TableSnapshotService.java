@@ -35,7 +35,9 @@ import ionmark.acidity.api.ValidationReport;
 @Component(service = TableService.class, configurationPid = "ionmark.acidity.table")
 @Designate(ocd = TableConfiguration.class)
 public final class TableSnapshotService implements TableService {
-    static final String SHIPPED = "/ionmark/acidity/internal/default-table.json";
+    /** The curated base and the fitted overlay the shipped table is built from (bundles/acidity/table). */
+    static final String CURATED = "/ionmark/acidity/internal/table/curated.json";
+    static final String FITTED = "/ionmark/acidity/internal/table/fitted.json";
     /** System property naming a table file when the configuration names none (the launcher's IONMARK_TABLE). */
     static final String TABLE_FILE_PROPERTY = "ionmark.table.file";
 
@@ -66,17 +68,24 @@ public final class TableSnapshotService implements TableService {
         }
     }
 
-    /** The table shipped inside this bundle. */
+    /** The table shipped inside this bundle: the curated base with the fitted overlay. */
     public static AcidityTable shipped() {
-        try (InputStream in = TableSnapshotService.class.getResourceAsStream(SHIPPED)) {
+        List<ionmark.acidity.api.Problem> problems = new java.util.ArrayList<>();
+        AcidityTable t = TableSplitter.build(resource(CURATED), resource(FITTED), problems);
+        if (t == null) {
+            throw new IllegalStateException("the shipped table does not build: " + problems);
+        }
+        return t;
+    }
+
+    static String resource(String name) {
+        try (InputStream in = TableSnapshotService.class.getResourceAsStream(name)) {
             if (in == null) {
-                throw new IllegalStateException("the shipped table " + SHIPPED + " is missing from the bundle");
+                throw new IllegalStateException("the table file " + name + " is missing from the bundle");
             }
-            ValidationReport r = TableValidator.validate(new String(in.readAllBytes(), StandardCharsets.UTF_8));
-            return r.table().orElseThrow(() -> new IllegalStateException("the shipped table does not validate: "
-                    + r.errors()));
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8);
         } catch (IOException e) {
-            throw new IllegalStateException("cannot read the shipped table", e);
+            throw new IllegalStateException("cannot read the table file " + name, e);
         }
     }
 

@@ -11,7 +11,10 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
-/** Differences between two table texts by record (id) and field, not by text line. */
+/**
+ * Differences between two table texts by record (id) and field, not by text line: an added or
+ * removed record is shown with its values, a changed one field by field with old and new value.
+ */
 final class TableDiff {
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final List<String> SECTIONS = List.of("references", "groups", "substituents", "measured", "pairs");
@@ -29,20 +32,18 @@ final class TableDiff {
                 Map<String, JsonNode> rb = byId(b.path(section));
                 for (String id : new TreeSet<>(ra.keySet())) {
                     if (!rb.containsKey(id)) {
-                        out.add("removed " + section + "[" + id + "]");
+                        out.add("removed " + section + "[" + id + "]: " + ra.get(id));
                     }
                 }
                 for (String id : new TreeSet<>(rb.keySet())) {
                     if (!ra.containsKey(id)) {
-                        out.add("added " + section + "[" + id + "]");
+                        out.add("added " + section + "[" + id + "]: " + rb.get(id));
                     } else {
                         fields(section + "[" + id + "]", ra.get(id), rb.get(id), out);
                     }
                 }
             }
-            if (!a.path("interaction").equals(b.path("interaction"))) {
-                out.add("changed interaction: " + a.path("interaction") + " → " + b.path("interaction"));
-            }
+            fields("interaction", a.path("interaction"), b.path("interaction"), out);
             return out;
         } catch (JsonProcessingException e) {
             throw new IllegalStateException("a stored version is not valid JSON: " + e.getOriginalMessage(), e);
