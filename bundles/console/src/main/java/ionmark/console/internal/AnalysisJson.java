@@ -77,7 +77,8 @@ final class AnalysisJson {
         c.put("temperatureC", a.conditions().temperature());
         c.put("ionicStrengthM", a.conditions().ionicStrength());
         nullable(o, "netCharge", a.netCharge());
-        nullable(o, "fractionNeutral", a.fractionNeutral());
+        nullable(o, "fractionNeutral", a.fractionNeutral()); // net charge 0, zwitterions included
+        nullable(o, "fractionUncharged", a.fractionUncharged()); // no charged site at all
         ObjectNode cs = o.putObject("chargeStates");
         a.chargeStates().entrySet().stream().sorted(java.util.Map.Entry.comparingByKey())
                 .forEach(e -> cs.put(String.valueOf(e.getKey()), round4(e.getValue())));
@@ -91,7 +92,7 @@ final class AnalysisJson {
             nullable(o, "isoelectricPoint", a.isoelectricPoint());
             num(o, "logP", a.logP());
             nullable(o, "logD", a.logD());
-            windows(o.putArray("neutralWindows"), a.neutralWindows());
+            windows(o.putArray("neutralWindows"), a.neutralWindows()); // by fractionNeutral
             windows(o.putArray("chargedWindows"), a.chargedWindows());
         }
         a.corrections().forEach(o.putArray("corrections")::add);

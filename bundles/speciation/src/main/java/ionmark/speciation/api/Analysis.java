@@ -15,14 +15,19 @@ import java.util.Map;
  * @param macroPka       macroscopic pKa values, ascending
  * @param conditions     the conditions used
  * @param netCharge      mean net charge at the stated pH (null without pH)
- * @param fractionNeutral fraction with net charge 0 (null without pH)
+ * @param fractionNeutral fraction with net charge 0, zwitterions included (null without pH)
+ * @param fractionUncharged fraction with no charged site at all: the neutral fraction less its zwitterions;
+ *                       0 with a permanent charge (null without pH; since 1.2)
  * @param chargeStates   fraction per net charge (empty without pH)
  * @param species        leading microstates, largest first (empty without pH)
- * @param isoelectricPoint pH of zero mean charge for an ampholyte (acid and base sites), else null
- * @param logP           octanol/water logP of the neutral form (CDK JPlogP), NaN if unavailable
- * @param logD           logD at the stated pH from the neutral fraction (null without pH)
- * @param neutralWindows pH ranges (0–14) in which at least 99 % is neutral
- * @param chargedWindows pH ranges (0–14) in which at least 99 % is charged
+ * @param isoelectricPoint pH of zero mean charge for an ampholyte whose acid and base both titrate between
+ *                       pH 0 and 14, found between its lowest and highest listed constant; else null
+ * @param logP           octanol/water logP of the uncharged form (CDK JPlogP), NaN if unavailable
+ * @param logD           logD at the stated pH over all species: uncharged at logP, zwitterions and ions at
+ *                       logP − 3.5 per unit of net charge (a zwitterion as one), common practice (null without pH)
+ * @param neutralWindows pH ranges (0–14) in which at least 99 % has net charge 0 ({@code fractionNeutral},
+ *                       zwitterions included)
+ * @param chargedWindows pH ranges (0–14) in which at least 99 % has a net charge ({@code 1 − fractionNeutral})
  * @param corrections    temperature and ionic-strength corrections applied, in words
  * @param warnings       what the reader must know (estimated not measured, sampled, outside the table …)
  * @param sampled        true when populations were sampled rather than enumerated
@@ -30,7 +35,8 @@ import java.util.Map;
  * @param error          one-line error for bad input, else null
  */
 public record Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
-        Conditions conditions, Double netCharge, Double fractionNeutral, Map<Integer, Double> chargeStates,
+        Conditions conditions, Double netCharge, Double fractionNeutral, Double fractionUncharged,
+        Map<Integer, Double> chargeStates,
         List<Species> species, Double isoelectricPoint, double logP, Double logD, List<Window> neutralWindows, List<Window> chargedWindows,
         List<String> corrections, List<String> warnings, boolean sampled, String tableVersion, String error) {
 
@@ -46,8 +52,19 @@ public record Analysis(String input, String smiles, List<String> stripped, List<
         warnings = List.copyOf(warnings);
     }
 
+    /** The 1.1 form, without {@code fractionUncharged} (null). */
+    public Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
+            Conditions conditions, Double netCharge, Double fractionNeutral, Map<Integer, Double> chargeStates,
+            List<Species> species, Double isoelectricPoint, double logP, Double logD, List<Window> neutralWindows,
+            List<Window> chargedWindows, List<String> corrections, List<String> warnings, boolean sampled,
+            String tableVersion, String error) {
+        this(input, smiles, stripped, sites, macroPka, conditions, netCharge, fractionNeutral, null, chargeStates,
+                species, isoelectricPoint, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled,
+                tableVersion, error);
+    }
+
     public static Analysis failed(String input, Conditions c, String tableVersion, String error) {
-        return new Analysis(input, "", List.of(), List.of(), List.of(), c, null, null, Map.of(), List.of(), null, Double.NaN,
+        return new Analysis(input, "", List.of(), List.of(), List.of(), c, null, null, null, Map.of(), List.of(), null, Double.NaN,
                 null, List.of(), List.of(), List.of(), List.of(), false, tableVersion, error);
     }
 

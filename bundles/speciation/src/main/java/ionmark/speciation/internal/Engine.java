@@ -34,6 +34,8 @@ import ionmark.speciation.internal.estimate.Overrides;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.SpeciesActivity;
+import ionmark.speciation.internal.profile.Partition;
+import ionmark.speciation.internal.profile.WaterRange;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
 import ionmark.speciation.internal.microstates.Populations;
 import ionmark.speciation.internal.microstates.SiteModel;
@@ -696,12 +698,20 @@ public final class Engine {
         }
         List<Double> macro = MacroConstants.of(p.polynomial()).stream()
                 .filter(v -> v >= MACRO_LOW && v <= MACRO_HIGH).map(v -> Math.round(v * 100) / 100.0).toList();
+        List<WaterRange.Site> inWater = waterSites(p);
         if (p.measured().isPresent() && measuredFit(p)) {
             macro = p.measuredHere().stream().map(v -> Math.round(v * 100) / 100.0).toList();
+        } else {
+            macro = WaterRange.reportable(macro, inWater);
+            inWater.stream().filter(WaterRange::heldOut).forEach(w -> warnings.add(String.format(Locale.ROOT,
+                    "alcohol O-H estimated at %.1f ± %.1f: not counted as titrating in water (simple alcohols 15.5-16, "
+                            + "CRC, from memory); left out of the macroscopic constants and the isoelectric point",
+                    w.pka(), w.sd())));
         }
         double logP = brief ? Double.NaN : logP(mol);
         Double netCharge = null;
         Double neutral = null;
+        Double uncharged = null;
         Double logD = null;
         Map<Integer, Double> chargeStates = Map.of();
         List<Species> species = List.of();
@@ -726,7 +736,8 @@ public final class Engine {
             }
             netCharge = mean;
             neutral = chargeStates.getOrDefault(0, 0.0);
-            logD = Double.isNaN(logP) ? null : logP + Math.log10(Math.max(neutral, 1e-12));
+            uncharged = neutral * unchargedShare(p, c);
+            logD = Partition.logD(logP, chargeStates, uncharged);
             species = brief ? List.of() : species(mol, titr, pop, p.permanentCharge());
             if (!brief && p.measured().isPresent() && measuredFit(p)) {
                 species = consistentWith(species, shift(pop.chargeStates(), p.permanentCharge()), chargeStates);
@@ -765,8 +776,11 @@ public final class Engine {
             windows(p, neutralWindows, chargedWindows);
         }
         warnings.add(CAUTION);
+        final List<Double> listed = macro;
+        Double pI = brief ? null : WaterRange.isoelectricPoint(inWater, p.permanentCharge() > 0, listed,
+                ph -> meanCharge(p, ph));
         return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
-                chargeStates, species, brief ? null : isoelectricPoint(p), logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
+                uncharged, chargeStates, species, pI, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
                 null);
     }
 
@@ -796,36 +810,27 @@ public final class Engine {
         return new Curve(ph, mean, site, states);
     }
 
-    /**
-     * The isoelectric point of an ampholyte: the pH where the mean charge is zero, by bisection on
-     * the mean charge (monotone in pH) over −2…16. Null when the structure is not an ampholyte.
-     */
-    Double isoelectricPoint(Problem p) {
-        boolean acid = false;
-        boolean base = p.permanentCharge() > 0;
+    /** The titratable sites as {@link WaterRange} reads them (model values at the conditions). */
+    private static List<WaterRange.Site> waterSites(Problem p) {
+        List<WaterRange.Site> out = new ArrayList<>();
+        int t = 0;
         for (EstimatedSite s : p.sites()) {
             if (!s.site().group().permanent()) {
-                acid |= s.site().group().type() == SiteType.ACID;
-                base |= s.site().group().type() == SiteType.BASE;
+                out.add(new WaterRange.Site(s.site().group().id(), p.model().base()[t], p.model().pka()[t], s.sd()));
+                t++;
             }
         }
-        if (!acid || !base) {
-            return null;
+        return out;
+    }
+
+    /** {@link Partition#unchargedShareOfNeutral} for the problem's model, ionic-strength terms taken back out. */
+    private static double unchargedShare(Problem p, Conditions c) {
+        double k = Conditioning.davies(c.ionicStrength(), c.temperature());
+        double[] pka = p.model().pka().clone();
+        for (int i = 0; i < pka.length; i++) {
+            pka[i] += p.model().base()[i] ? -k : k;
         }
-        double lo = -2;
-        double hi = 16;
-        if (meanCharge(p, lo) < 0 || meanCharge(p, hi) > 0) {
-            return null;
-        }
-        for (int i = 0; i < 60; i++) {
-            double mid = (lo + hi) / 2;
-            if (meanCharge(p, mid) > 0) {
-                lo = mid;
-            } else {
-                hi = mid;
-            }
-        }
-        return Math.round((lo + hi) / 2 * 1000) / 1000.0;
+        return Partition.unchargedShareOfNeutral(pka, p.model().base(), p.polynomial(), p.permanentCharge());
     }
 
     private double meanCharge(Problem p, double ph) {

@@ -1,0 +1,86 @@
+package ionmark.speciation.internal.profile;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleUnaryOperator;
+
+/**
+ * What titrates in water between pH 0 and 14, for the macroscopic constants a card lists and for the
+ * isoelectric point.
+ *
+ * <p>An aliphatic alcohol O–H (class {@value #ALCOHOL}) is a very weak acid: methanol 15.5, ethanol 15.9
+ * (CRC, from memory). Its class value is fitted lower, and a β-amino or β-aryloxy alcohol then reads near
+ * 13, which would list a constant and make a β-blocker an "ampholyte" with an isoelectric point near 11.
+ * Such a site counts as titrating in water only when its estimate lies below 14 by more than its sd.
+ */
+public final class WaterRange {
+    public static final String ALCOHOL = "alcohol";
+    public static final double TOP = 14;
+    public static final double BOTTOM = 0;
+
+    /** One titratable site as the rule reads it. */
+    public record Site(String group, boolean base, double pka, double sd) {
+    }
+
+    private WaterRange() {
+    }
+
+    /** Whether an alcohol O–H site is held out: its estimate is not below 14 by more than its sd. */
+    public static boolean heldOut(Site s) {
+        return !s.base() && ALCOHOL.equals(s.group()) && s.pka() + s.sd() > TOP;
+    }
+
+    /**
+     * The macroscopic constants without those of held-out alcohol sites: for each such site, the highest
+     * remaining constant at or above 12 is dropped (an alcohol's constant is the last step).
+     */
+    public static List<Double> reportable(List<Double> ascending, List<Site> sites) {
+        List<Double> out = new ArrayList<>(ascending);
+        for (Site s : sites) {
+            if (heldOut(s) && !out.isEmpty() && out.get(out.size() - 1) >= 12) {
+                out.remove(out.size() - 1);
+            }
+        }
+        return out;
+    }
+
+    /**
+     * The isoelectric point of an ampholyte whose acid and base both titrate between pH 0 and 14: some
+     * acid site (not a held-out alcohol) with its value at most 14, and some base site with its value at
+     * least 0 or a permanent cation; the pH of zero mean charge found between the lowest and the highest
+     * listed constant in 0–14, else null.
+     *
+     * @param macro      listed constants, ascending
+     * @param meanCharge mean net charge at a pH, decreasing with pH
+     */
+    public static Double isoelectricPoint(List<Site> sites, boolean permanentCation, List<Double> macro,
+            DoubleUnaryOperator meanCharge) {
+        boolean acid = false;
+        boolean base = permanentCation;
+        for (Site s : sites) {
+            if (s.base()) {
+                base |= s.pka() >= BOTTOM;
+            } else if (!heldOut(s)) {
+                acid |= s.pka() <= TOP;
+            }
+        }
+        List<Double> inRange = macro.stream().filter(v -> v >= BOTTOM && v <= TOP).toList();
+        if (!acid || !base || inRange.isEmpty()) {
+            return null;
+        }
+        double lo = inRange.get(0);
+        double hi = inRange.get(inRange.size() - 1);
+        if (meanCharge.applyAsDouble(lo) < 0 || meanCharge.applyAsDouble(hi) > 0) {
+            return null;
+        }
+        for (int i = 0; i < 60; i++) {
+            double mid = (lo + hi) / 2;
+            if (meanCharge.applyAsDouble(mid) > 0) {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        return Math.round((lo + hi) / 2 * 1000) / 1000.0;
+    }
+}
