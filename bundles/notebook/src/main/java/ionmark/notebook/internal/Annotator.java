@@ -29,9 +29,14 @@ public final class Annotator implements EntryDecorator {
     private final Speciation speciation;
     private final ionmark.store.api.TableStore store;
     private final ionmark.acidity.api.TableService tables;
+    private final SeenEntries seen;
 
     public Annotator(Speciation speciation) {
         this(speciation, null, null);
+    }
+
+    public Annotator(Speciation speciation, ionmark.store.api.TableStore store, ionmark.acidity.api.TableService tables) {
+        this(speciation, store, tables, null);
     }
 
     /** With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version. */
@@ -40,10 +45,13 @@ public final class Annotator implements EntryDecorator {
             @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
             ionmark.store.api.TableStore store,
             @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
-            ionmark.acidity.api.TableService tables) {
+            ionmark.acidity.api.TableService tables,
+            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
+            SeenEntries seen) {
         this.speciation = speciation;
         this.store = store;
         this.tables = tables;
+        this.seen = seen;
     }
 
     /** The speciation for an entry: bound to its pinned table version when it names one the store holds. */
@@ -59,8 +67,54 @@ public final class Annotator implements EntryDecorator {
     record Found<T>(int block, int section, T value) {
     }
 
+    /** A structure of an entry with the conditions the entry states for it. */
+    record Stated(int block, String structure, List<Double> ph, double temperature, double ionicStrength,
+            List<String> taken) {
+        Stated at(int b) {
+            return new Stated(b, structure, ph, temperature, ionicStrength, taken);
+        }
+    }
+
+    /** Every structure of an entry (blocks and inline SMILES) with its stated conditions (the table report's input). */
+    List<Stated> stated(Entry entry) {
+        List<Found<StatedConditions.PhStatement>> phs = new ArrayList<>();
+        List<Found<StatedConditions.Value>> temps = new ArrayList<>();
+        List<Found<StatedConditions.Value>> ionic = new ArrayList<>();
+        scan(entry.blocks(), phs, temps, ionic);
+        List<Stated> out = new ArrayList<>();
+        List<Block> blocks = entry.blocks();
+        for (int i = 0; i < blocks.size(); i++) {
+            Block b = blocks.get(i);
+            if (b.kind() == Block.Kind.TEXT) {
+                for (String smi : InlineStructures.find(b.content())) {
+                    out.add(stated(new Block(Block.Kind.STRUCTURE, smi, null, b.section()), i + 1, phs, temps, ionic)
+                            .at(i));
+                }
+            } else if (b.kind() == Block.Kind.STRUCTURE && !b.content().isBlank()) {
+                out.add(stated(b, i, phs, temps, ionic).at(i));
+            }
+        }
+        return out;
+    }
+
+    private static void scan(List<Block> blocks, List<Found<StatedConditions.PhStatement>> phs,
+            List<Found<StatedConditions.Value>> temps, List<Found<StatedConditions.Value>> ionic) {
+        for (int i = 0; i < blocks.size(); i++) {
+            Block b = blocks.get(i);
+            if (b.kind() != Block.Kind.STRUCTURE) {
+                int k = i;
+                StatedConditions.ph(b.content()).forEach(p -> phs.add(new Found<>(k, b.section(), p)));
+                StatedConditions.temperature(b.content()).forEach(p -> temps.add(new Found<>(k, b.section(), p)));
+                StatedConditions.ionicStrength(b.content()).forEach(p -> ionic.add(new Found<>(k, b.section(), p)));
+            }
+        }
+    }
+
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
+        if (seen != null) {
+            seen.record(entry);
+        }
         Speciation sp = forEntry(entry);
         List<Found<StatedConditions.PhStatement>> phs = new ArrayList<>();
         List<Found<StatedConditions.Value>> temps = new ArrayList<>();
@@ -96,6 +150,12 @@ public final class Annotator implements EntryDecorator {
 
     Card card(Speciation sp, Block b, int index, List<Found<StatedConditions.PhStatement>> phs,
             List<Found<StatedConditions.Value>> temps, List<Found<StatedConditions.Value>> ionic) {
+        Stated s = stated(b, index, phs, temps, ionic);
+        return check(sp, s.structure(), s.ph(), s.temperature(), s.ionicStrength(), s.taken());
+    }
+
+    private static Stated stated(Block b, int index, List<Found<StatedConditions.PhStatement>> phs,
+            List<Found<StatedConditions.Value>> temps, List<Found<StatedConditions.Value>> ionic) {
         List<String> taken = new ArrayList<>();
         double t = Conditions.STANDARD_TEMPERATURE;
         Found<StatedConditions.Value> ft = nearest(temps, index, b.section());
@@ -123,7 +183,7 @@ public final class Annotator implements EntryDecorator {
                 taken.add(0, f.value().words());
             }
         }
-        return check(sp, b.content(), phValues, t, is, taken);
+        return new Stated(index, b.content(), phValues, t, is, taken);
     }
 
     Card check(String structure, List<Double> phValues, double t, double is, List<String> taken) {
