@@ -21,7 +21,8 @@ final class AdminForms {
             + "padding-right:.4em;overflow:hidden;white-space:pre;line-height:1.3em;user-select:none}"
             + ".im-raw textarea{line-height:1.3em;font-size:12px;white-space:pre;overflow:auto}"
             + ".im-better{color:#064}.im-worse{color:#8a0000}th[data-sort]{cursor:pointer;text-decoration:underline dotted}"
-            + ".im-warn{color:#6a4a00}.im-changes li{font-family:monospace;font-size:12px}</style>";
+            + ".im-warn{color:#6a4a00}.im-changes li{font-family:monospace;font-size:12px}"
+            + ".im-task select{max-width:42em}</style>";
 
     private AdminForms() {
     }

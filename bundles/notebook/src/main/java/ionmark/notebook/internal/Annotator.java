@@ -32,9 +32,14 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
     private final Speciation speciation;
     private final TableStore store;
     private final TableService tables;
+    private final SeenEntries seen;
 
     public Annotator(Speciation speciation) {
-        this(speciation, null, null);
+        this(speciation, null, null, null);
+    }
+
+    public Annotator(Speciation speciation, TableStore store, TableService tables) {
+        this(speciation, store, tables, null);
     }
 
     /**
@@ -47,10 +52,13 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
             @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
             TableStore store,
             @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
-            TableService tables) {
+            TableService tables,
+            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
+            SeenEntries seen) {
         this.speciation = speciation;
         this.store = store;
         this.tables = tables;
+        this.seen = seen;
     }
 
     /** The speciation for an entry and what the reader must know about the table it uses. */
@@ -87,6 +95,9 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
 
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
+        if (seen != null) {
+            seen.record(entry);
+        }
         AnnotatedEntry a = annotate(entry);
         List<Decoration> out = new ArrayList<>();
         List<String> own = a.warnings().stream().filter(w -> !entry.notices().contains(w)).toList();

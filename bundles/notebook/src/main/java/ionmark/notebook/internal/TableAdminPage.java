@@ -38,14 +38,16 @@ public final class TableAdminPage implements AdminPage {
     private final TableService tables;
     private final TableRegression regression;
     private final Speciation speciation;
+    private final SeenEntries seen;
 
     @Activate
     public TableAdminPage(@Reference TableStore store, @Reference TableService tables,
-            @Reference TableRegression regression, @Reference Speciation speciation) {
+            @Reference TableRegression regression, @Reference Speciation speciation, @Reference SeenEntries seen) {
         this.store = store;
         this.tables = tables;
         this.regression = regression;
         this.speciation = speciation;
+        this.seen = seen;
     }
 
     @Override
@@ -81,7 +83,7 @@ public final class TableAdminPage implements AdminPage {
                 }
                 case "check" -> {
                     store.audit(user.name(), "validate", head.number(), "ok", "validate and compare");
-                    sb.append(check(head, draft));
+                    sb.append(check(head, draft, params.getOrDefault("threshold", "")));
                 }
                 case "publish" -> {
                     String out = publish(draft, params, user);
@@ -159,9 +161,17 @@ public final class TableAdminPage implements AdminPage {
     }
 
     /** Runs a record form on the draft; returns the draft after it. */
+    /**
+     * The draft as a table whose hash is its content's: speciation keeps engines per version hash, and a
+     * hand-edited draft still carries the hash of the version it was copied from.
+     */
+    private java.util.Optional<AcidityTable> sealed(String text) {
+        return tables.validate(text).table().flatMap(t -> tables.validate(tables.toJson(t)).table());
+    }
+
     private String task(String action, Map<String, String> params, String draft, Task task) {
         ValidationReport r = tables.validate(draft);
-        AcidityTable t = r.table().orElse(null);
+        AcidityTable t = sealed(draft).orElse(null);
         if (t == null) {
             task.errors.add("The draft has errors; fix them in the raw JSON first (" + r.errors().size() + " errors).");
             return draft;
@@ -282,14 +292,14 @@ public final class TableAdminPage implements AdminPage {
         }
     }
 
-    private String check(VersionInfo head, String draft) {
+    private String check(VersionInfo head, String draft, String thresholdText) {
         ValidationReport r = tables.validate(draft);
         StringBuilder sb = new StringBuilder("<h2>Check of the draft</h2>").append(problems(r, draft));
         if (!r.ok()) {
             return sb.toString();
         }
         AcidityTable current = tables.validate(store.content(head.number()).orElseThrow()).table().orElseThrow();
-        AcidityTable next = r.table().orElseThrow();
+        AcidityTable next = sealed(draft).orElseThrow();
         List<MeasuredCompound> added = next.measured().stream().filter(m -> !current.measured().contains(m)).toList();
         if (!added.isEmpty()) {
             sb.append("<p id=\"measured-added\">Measured compounds added or changed: ").append(Html.esc(String.join(", ",
@@ -297,6 +307,12 @@ public final class TableAdminPage implements AdminPage {
                     + "move as analogs say so in the last columns.</p>");
         }
         sb.append(AdminReports.regression(regression.compare(current, next), next, speciation, added));
+        double threshold = DraftEdits.number(thresholdText.isBlank() ? String.valueOf(EntryImpact.DEFAULT_THRESHOLD)
+                : thresholdText, "threshold", new ArrayList<>());
+        threshold = Double.isNaN(threshold) ? EntryImpact.DEFAULT_THRESHOLD : threshold;
+        List<ionmark.host.api.Entry> entries = seen.all();
+        sb.append(EntryImpact.html(EntryImpact.rows(entries, speciation, current, next,
+                threshold), entries.size(), threshold));
         return sb.toString();
     }
 
@@ -305,16 +321,31 @@ public final class TableAdminPage implements AdminPage {
         JsonLines lines = JsonLines.of(draft == null ? "" : draft);
         StringBuilder sb = new StringBuilder("<div id=\"problems\">");
         sb.append("<p>").append(r.errors().size()).append(" errors, ").append(r.warnings().size()).append(" warnings</p><ul>");
-        for (Problem p : r.problems()) {
-            int line = lines.lineOf(p.path(), p.message());
-            sb.append("<li class=\"").append(p.severity() == Problem.Severity.ERROR ? "im-error" : "im-warn").append("\">")
-                    .append(p.severity() == Problem.Severity.ERROR ? "✖ " : "△ ");
-            if (line > 0) {
-                sb.append("<a href=\"#draft\" data-line=\"").append(line).append("\">line ").append(line).append("</a> ");
-            }
-            sb.append("<code>").append(Html.esc(p.path())).append("</code> ").append(Html.esc(p.message())).append("</li>");
+        List<Problem> warnings = r.warnings();
+        for (Problem p : r.errors()) {
+            problem(sb, p, lines);
+        }
+        boolean fold = warnings.size() > 10; // a long list of warnings must not hide the errors and the report
+        if (fold) {
+            sb.append("</ul><details><summary>").append(warnings.size()).append(" warnings</summary><ul>");
+        }
+        for (Problem p : warnings) {
+            problem(sb, p, lines);
+        }
+        if (fold) {
+            sb.append("</ul></details><ul>");
         }
         return sb.append("</ul></div>").toString();
+    }
+
+    private static void problem(StringBuilder sb, Problem p, JsonLines lines) {
+        int line = lines.lineOf(p.path(), p.message());
+        sb.append("<li class=\"").append(p.severity() == Problem.Severity.ERROR ? "im-error" : "im-warn").append("\">")
+                .append(p.severity() == Problem.Severity.ERROR ? "✖ " : "△ ");
+        if (line > 0) {
+            sb.append("<a href=\"#draft\" data-line=\"").append(line).append("\">line ").append(line).append("</a> ");
+        }
+        sb.append("<code>").append(Html.esc(p.path())).append("</code> ").append(Html.esc(p.message())).append("</li>");
     }
 
     private static String editor(VersionInfo head, int base, String draft, String csrf) {
@@ -322,7 +353,9 @@ public final class TableAdminPage implements AdminPage {
         return "<h2>Check and publish</h2><form method=\"post\" action=\"/admin/table\" id=\"publish-form\">"
                 + "<input type=\"hidden\" name=\"token\" value=\"" + t + "\"><input type=\"hidden\" name=\"base\" value=\""
                 + base + "\">"
-                + "<p><label>Why (required to publish) <input name=\"comment\" id=\"comment\" size=\"70\"></label></p>"
+                + "<p><label>Why (required to publish) <input name=\"comment\" id=\"comment\" size=\"70\"></label> "
+                + "<label>Report entries whose fraction neutral moves by more than <input name=\"threshold\" "
+                + "id=\"threshold\" size=\"4\" value=\"" + EntryImpact.DEFAULT_THRESHOLD + "\"></label></p>"
                 + "<p><button name=\"action\" value=\"check\" id=\"check\">Validate and compare</button> "
                 + "<button name=\"action\" value=\"publish\" id=\"publish\">Publish</button> (the head is v" + head.number()
                 + ", the draft is based on v" + base + ")</p>"

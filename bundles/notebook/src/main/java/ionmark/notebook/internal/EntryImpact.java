@@ -1,0 +1,97 @@
+package ionmark.notebook.internal;
+
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.host.api.Entry;
+import ionmark.notebook.api.AnnotatedStructure;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Speciation;
+
+/**
+ * Which notebook entries a draft changes: every structure at the pH its entry states, with the head
+ * and with the draft; a row where the main charge state changes or the fraction neutral moves by more
+ * than the threshold. A pinned entry keeps its version; the row says what it would show unpinned.
+ */
+final class EntryImpact {
+    /** Fraction-neutral change reported by default: 0.10 (ten percentage points; a working choice). */
+    static final double DEFAULT_THRESHOLD = 0.10;
+
+    private EntryImpact() {
+    }
+
+    record Row(Entry entry, String structure, double ph, int chargeHead, int chargeDraft, double neutralHead,
+            double neutralDraft) {
+    }
+
+    /** Reads every entry as the notebook does ({@link EntryReader}), once with the head and once with the draft. */
+    static List<Row> rows(List<Entry> entries, Speciation speciation, AcidityTable head, AcidityTable draft,
+            double threshold) {
+        EntryReader h = new EntryReader(speciation.pinned(head));
+        EntryReader d = new EntryReader(speciation.pinned(draft));
+        List<Row> out = new ArrayList<>();
+        for (Entry e : entries) {
+            List<AnnotatedStructure> hs = h.read(e, List.of()).structures();
+            List<AnnotatedStructure> ds = d.read(e, List.of()).structures();
+            for (int i = 0; i < Math.min(hs.size(), ds.size()); i++) {
+                AnnotatedStructure sh = hs.get(i);
+                AnnotatedStructure sd = ds.get(i);
+                if (!sh.ok() || !sd.ok()) {
+                    continue;
+                }
+                for (int j = 0; j < Math.min(sh.analyses().size(), sd.analyses().size()); j++) {
+                    Analysis a = sh.analyses().get(j);
+                    Analysis b = sd.analyses().get(j);
+                    if (!a.ok() || !b.ok() || a.fractionNeutral() == null || b.fractionNeutral() == null) {
+                        continue;
+                    }
+                    int za = main(a.chargeStates());
+                    int zb = main(b.chargeStates());
+                    if (za != zb || Math.abs(a.fractionNeutral() - b.fractionNeutral()) > threshold) {
+                        out.add(new Row(e, sh.structure(), a.conditions().ph(), za, zb, a.fractionNeutral(),
+                                b.fractionNeutral()));
+                    }
+                }
+            }
+        }
+        return out;
+    }
+
+    private static int main(Map<Integer, Double> states) {
+        return states.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey).orElse(0);
+    }
+
+    static String html(List<Row> rows, int entriesSeen, double threshold) {
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "<h3 id=\"entries-heading\">Notebook entries "
+                + "that change</h3><p>%d entries seen by the notebook; structures whose main charge state changes or "
+                + "whose fraction neutral moves by more than %.2f at the entry's stated pH:</p>", entriesSeen, threshold));
+        if (rows.isEmpty()) {
+            return sb.append("<p id=\"entries-none\">None.</p>").toString();
+        }
+        sb.append("<table class=\"im-sites\" id=\"entries\"><thead><tr><th data-sort>entry</th><th>structure</th>"
+                + "<th>pH</th><th>main charge head → draft</th><th data-sort>fraction neutral head → draft</th>"
+                + "<th>pinned</th></tr></thead><tbody>");
+        rows.sort(Comparator.comparing((Row r) -> r.entry().id()));
+        for (Row r : rows) {
+            int pin = r.entry().pinnedTableVersion();
+            sb.append("<tr><td><a href=\"/entry/").append(Html.esc(r.entry().id())).append("\">")
+                    .append(Html.esc(r.entry().title())).append("</a></td><td><code>").append(Html.esc(r.structure().length() > 60
+                            ? r.structure().substring(0, 60) + "…" : r.structure())).append("</code></td><td>")
+                    .append(String.format(Locale.ROOT, "%.2f", r.ph())).append("</td><td>")
+                    .append(signed(r.chargeHead())).append(" → ").append(signed(r.chargeDraft())).append("</td><td data-v=\"")
+                    .append(Math.abs(r.neutralDraft() - r.neutralHead())).append("\">")
+                    .append(String.format(Locale.ROOT, "%.3f → %.3f", r.neutralHead(), r.neutralDraft())).append("</td><td>")
+                    .append(pin > 0 ? "pinned to v" + pin + ": keeps showing v" + pin + "; unpinned it would show the draft's"
+                            : "no: shows the new version once published").append("</td></tr>");
+        }
+        return sb.append("</tbody></table>").toString();
+    }
+
+    private static String signed(int z) {
+        return z > 0 ? "+" + z : z < 0 ? "−" + (-z) : "0";
+    }
+}
