@@ -10,14 +10,17 @@ import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.api.Window;
 
-/** The output contract shared by {@code check} and {@code batch}: one JSON object per record. */
-final class AnalysisJson {
+/**
+ * The output contract shared by {@code check}, {@code batch} and the pipeline module: one JSON object per
+ * record. Public for that module; not an exported API.
+ */
+public final class AnalysisJson {
     static final ObjectMapper JSON = new ObjectMapper();
 
     private AnalysisJson() {
     }
 
-    static ObjectNode of(String id, Analysis a) {
+    public static ObjectNode of(String id, Analysis a) {
         return of(id, a, false);
     }
 
@@ -25,7 +28,7 @@ final class AnalysisJson {
      * {@code brief}: the record of {@code Speciation.screen}, which has no species, logP, logD,
      * windows or isoelectric point; those keys are left out and {@code "brief": true} says why.
      */
-    static ObjectNode of(String id, Analysis a, boolean brief) {
+    public static ObjectNode of(String id, Analysis a, boolean brief) {
         ObjectNode o = JSON.createObjectNode();
         if (id != null) {
             o.put("id", id);

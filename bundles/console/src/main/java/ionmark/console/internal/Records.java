@@ -9,21 +9,26 @@ import java.util.List;
 
 /**
  * Batch input: SMILES lines ({@code SMILES<TAB>ID}), a TSV whose header starts {@code id<TAB>smiles},
- * or SDF (records end with {@code $$$$}; the id is the title line).
+ * or SDF (records end with {@code $$$$}; the id is the title line). Public for the pipeline module, which
+ * reads its files with the same rules so that its records equal {@code batch}'s.
  */
-final class Records {
-    record Item(String id, String structure, String error) {
+public final class Records {
+    public record Item(String id, String structure, String error) {
     }
 
     private Records() {
     }
 
-    static List<Item> read(Path p) throws IOException {
-        String text = Files.readString(p, StandardCharsets.UTF_8);
+    public static List<Item> read(Path p) throws IOException {
+        return parse(Files.readString(p, StandardCharsets.UTF_8));
+    }
+
+    /** A whole file's text: SDF when it holds a record end or a molfile end, else SMILES lines or TSV. */
+    public static List<Item> parse(String text) {
         return text.contains("$$$$") || text.contains("M  END") ? sdf(text) : lines(text);
     }
 
-    static List<Item> lines(String text) {
+    public static List<Item> lines(String text) {
         List<Item> out = new ArrayList<>();
         boolean idFirst = false;
         int n = 0;
@@ -47,7 +52,7 @@ final class Records {
         return out;
     }
 
-    static List<Item> sdf(String text) {
+    public static List<Item> sdf(String text) {
         List<Item> out = new ArrayList<>();
         int k = 0;
         for (String rec : text.split("\\$\\$\\$\\$\r?\n?")) {

@@ -1,0 +1,61 @@
+package ionmark.pipeline;
+
+import java.util.List;
+
+import org.apache.beam.sdk.io.FileIO;
+import org.apache.beam.sdk.metrics.Counter;
+import org.apache.beam.sdk.metrics.Distribution;
+import org.apache.beam.sdk.metrics.Metrics;
+import org.apache.beam.sdk.transforms.DoFn;
+
+import ionmark.console.internal.Records;
+
+/**
+ * Turns each matched file into its structures: Markdown entries ({@code .md}) through
+ * {@link MarkdownStructureReader}, everything else by {@code batch}'s own rules ({@link Records}), so
+ * ids and reading errors are the same. A file that cannot be read becomes one record with the error.
+ */
+final class ReadFiles extends DoFn<FileIO.ReadableFile, Structure> {
+    private static final long serialVersionUID = 1L;
+    static final String NS = "ionmark";
+    private final Counter files = Metrics.counter(NS, "files");
+    private final Counter structures = Metrics.counter(NS, "structures");
+    private final Distribution readMicros = Metrics.distribution(NS, "read-us-per-file");
+    private final List<Double> phs;
+
+    /** @param phs the pH values for structures that state none (empty: no pH) */
+    ReadFiles(List<Double> phs) {
+        this.phs = List.copyOf(phs);
+    }
+
+    @ProcessElement
+    public void process(@Element FileIO.ReadableFile file, OutputReceiver<Structure> out) {
+        long t0 = System.nanoTime();
+        String name = file.getMetadata().resourceId().toString();
+        files.inc();
+        String text;
+        try {
+            text = file.readFullyAsUTF8String();
+        } catch (Exception e) {
+            out.output(new Structure(name, name, "", "cannot read " + name + ": " + e.getMessage(), phs, 0));
+            return;
+        }
+        int n = 0;
+        if (name.endsWith(".md")) {
+            String entry = file.getMetadata().resourceId().getFilename().replaceFirst("\\.md$", "");
+            MarkdownStructureReader.Entry e = MarkdownStructureReader.read(text);
+            for (MarkdownStructureReader.Block b : e.blocks()) {
+                out.output(new Structure(name, entry + "#" + b.number(), b.text(), null,
+                        b.ph() != null ? List.of(b.ph()) : phs, e.pinnedVersion()));
+                n++;
+            }
+        } else {
+            for (Records.Item it : Records.parse(text)) {
+                out.output(new Structure(name, it.id(), it.structure(), it.error(), phs, 0));
+                n++;
+            }
+        }
+        structures.inc(n);
+        readMicros.update((System.nanoTime() - t0) / 1000);
+    }
+}

@@ -1,0 +1,91 @@
+package ionmark.pipeline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.Map;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+
+import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.speciation.api.Conditions;
+
+/**
+ * The impact job against a table whose aliphatic carboxylic-acid class moves two units up: lauric acid (no
+ * measured value in the table, so it follows the class) at pH 5 goes from mostly anion to mostly neutral and is
+ * reported with the changed derivation lines; acetic acid keeps its measured 4.76 (CRC, from memory), and ethanol
+ * and pyridine have no such site; a pinned entry is reported apart.
+ */
+class ImpactJobTest {
+    @TempDir
+    Path dir;
+
+    @Test
+    void aMovedClassValueReportsTheStructuresItFlipsWithTheChangedLines() throws Exception {
+        Path changed = changedTable("CCCCCCCCCCCC(=O)O", 2.0);
+        Files.writeString(dir.resolve("set.smi"), "CCCCCCCCCCCC(=O)O lauric-acid\nCC(=O)O acetic-acid\nCCO ethanol\nc1ccncc1 pyridine\n");
+        Path entries = Files.createDirectories(dir.resolve("entries"));
+        Files.writeString(entries.resolve("pinned.md"), "# Old work-up\nTable version: v2\n\nAt pH 5 the acid "
+                + "stays in water.\n\n```smiles\nCCCCCCCCCCCC(=O)O\n```\n");
+        Files.writeString(entries.resolve("open.md"), "# Buffer\n\nSet to pH 5.\n\n```smiles\nOC(=O)CCCCCCCCCCC\n```\n");
+        Path out = dir.resolve("out");
+        List<String> lines = Fixtures.pipeline(out, "impact", "impact", "--in=" + dir.resolve("set.smi") + ","
+                + entries, "--out=" + out, "--ph=5", "--before=shipped", "--after=" + changed);
+        Map<String, JsonNode> got = byId(lines);
+        assertEquals(java.util.Set.of("lauric-acid", "open#1"), got.keySet());
+        JsonNode lauric = got.get("lauric-acid");
+        assertEquals(-1, lauric.path("before").path("dominantCharge").asInt());
+        assertEquals(0, lauric.path("after").path("dominantCharge").asInt());
+        assertTrue(lauric.path("deltaFractionNeutral").asDouble() > 0.5, lauric.toString());
+        assertTrue(lauric.path("derivationChanges").toString().contains("+ pKa 6."), lauric.toString());
+        Map<String, JsonNode> pinned = byId(Fixtures.pipeline(out, "impact-pinned", "impact", "--in=" + entries,
+                "--out=" + out, "--before=shipped", "--after=" + changed));
+        assertEquals(java.util.Set.of("pinned#1"), pinned.keySet());
+        assertEquals(2, pinned.get("pinned#1").path("pinnedTableVersion").asInt());
+    }
+
+    @Test
+    void theSameTableOnBothSidesChangesNothing() throws Exception {
+        Files.writeString(dir.resolve("set.smi"), "CC(=O)O acetic-acid\nNCCC(=O)O beta-alanine\n");
+        Path out = dir.resolve("out");
+        assertEquals(List.of(), Fixtures.pipeline(out, "impact", "impact", "--in=" + dir.resolve("set.smi"),
+                "--out=" + out, "--ph=2,5,7.4,10", "--before=shipped", "--after=shipped"));
+    }
+
+    /** The shipped table with the class that takes {@code smiles}'s first site moved by {@code shift}. */
+    private Path changedTable(String smiles, double shift) throws Exception {
+        String group = Engines.get(EngineSpec.of("shipped", 300, 60_000)).analyse(smiles, Conditions.atPh(5)).sites()
+                .get(0).group();
+        String json;
+        try (InputStream in = TableSnapshotService.class.getResourceAsStream(
+                "/ionmark/acidity/internal/default-table.json")) {
+            json = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+        }
+        JsonNode root = Fixtures.JSON.readTree(json);
+        for (JsonNode g : root.path("groups")) {
+            if (g.path("id").asText().equals(group)) {
+                ((ObjectNode) g).put("pka", g.path("pka").asDouble() + shift);
+            }
+        }
+        ((ObjectNode) root.path("version")).put("hash", "");
+        return Files.writeString(dir.resolve("changed.json"), Fixtures.JSON.writeValueAsString(root));
+    }
+
+    private static Map<String, JsonNode> byId(List<String> lines) throws Exception {
+        Map<String, JsonNode> out = new java.util.TreeMap<>();
+        for (String l : lines) {
+            JsonNode n = Fixtures.JSON.readTree(l);
+            out.put(n.path("id").asText(), n);
+        }
+        return out;
+    }
+}
