@@ -816,7 +816,9 @@ public final class Engine {
         int t = 0;
         for (EstimatedSite s : p.sites()) {
             if (!s.site().group().permanent()) {
-                out.add(new WaterRange.Site(s.site().group().id(), p.model().base()[t], p.model().pka()[t], s.sd()));
+                boolean alcohol = WaterRange.ALCOHOL.equals(s.site().group().id());
+                out.add(new WaterRange.Site(s.site().group().id(), p.model().base()[t], p.model().pka()[t], s.sd(),
+                        alcohol && WaterRange.vicinalDiol(p.prepared().molecule(), s.site().atom())));
                 t++;
             }
         }

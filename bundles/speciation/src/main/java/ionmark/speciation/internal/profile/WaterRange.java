@@ -4,6 +4,9 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.DoubleUnaryOperator;
 
+import org.openscience.cdk.interfaces.IAtom;
+import org.openscience.cdk.interfaces.IAtomContainer;
+
 /**
  * What titrates in water between pH 0 and 14, for the macroscopic constants a card lists and for the
  * isoelectric point.
@@ -11,15 +14,20 @@ import java.util.function.DoubleUnaryOperator;
  * <p>An aliphatic alcohol O–H (class {@value #ALCOHOL}) is a very weak acid: methanol 15.5, ethanol 15.9
  * (CRC, from memory). Its class value is fitted lower, and a β-amino or β-aryloxy alcohol then reads near
  * 13, which would list a constant and make a β-blocker an "ampholyte" with an isoelectric point near 11.
- * Such a site counts as titrating in water only when its estimate lies below 14 by more than its sd.
+ * Such a site counts as titrating in water only when its estimate lies below 14 by more than its sd, or
+ * when it is one O–H of a 1,2-diol: sugars and ribonucleosides are measured between 12 and 13.5 (glucose
+ * 12.3, the 2',3'-diol of ribonucleosides 12.2–12.9, from memory).
  */
 public final class WaterRange {
     public static final String ALCOHOL = "alcohol";
     public static final double TOP = 14;
     public static final double BOTTOM = 0;
 
-    /** One titratable site as the rule reads it. */
-    public record Site(String group, boolean base, double pka, double sd) {
+    /** One titratable site as the rule reads it; {@code diol}: an O–H of a 1,2-diol. */
+    public record Site(String group, boolean base, double pka, double sd, boolean diol) {
+        public Site(String group, boolean base, double pka, double sd) {
+            this(group, base, pka, sd, false);
+        }
     }
 
     private WaterRange() {
@@ -27,7 +35,26 @@ public final class WaterRange {
 
     /** Whether an alcohol O–H site is held out: its estimate is not below 14 by more than its sd. */
     public static boolean heldOut(Site s) {
-        return !s.base() && ALCOHOL.equals(s.group()) && s.pka() + s.sd() > TOP;
+        return !s.base() && !s.diol() && ALCOHOL.equals(s.group()) && s.pka() + s.sd() > TOP;
+    }
+
+    /** Whether the O–H on {@code atom} sits on a carbon next to a carbon that carries another O–H. */
+    public static boolean vicinalDiol(IAtomContainer mol, int atom) {
+        IAtom o = mol.getAtom(atom);
+        for (IAtom c : mol.getConnectedAtomsList(o)) {
+            for (IAtom c2 : mol.getConnectedAtomsList(c)) {
+                if (c2.equals(o) || c2.getAtomicNumber() != 6) {
+                    continue;
+                }
+                for (IAtom o2 : mol.getConnectedAtomsList(c2)) {
+                    if (o2.getAtomicNumber() == 8 && mol.getConnectedBondsCount(o2) == 1
+                            && o2.getImplicitHydrogenCount() != null && o2.getImplicitHydrogenCount() == 1) {
+                        return true;
+                    }
+                }
+            }
+        }
+        return false;
     }
 
     /**
