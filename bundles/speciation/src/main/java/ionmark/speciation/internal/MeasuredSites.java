@@ -1,29 +1,41 @@
 package ionmark.speciation.internal;
 
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 
+import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.Term;
+import ionmark.speciation.api.MacroPairing;
 import ionmark.speciation.internal.estimate.AnalogCorrection;
 import ionmark.speciation.internal.estimate.AnalogSettings;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.estimate.SiteEnvironment;
+import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.structure.StructureException;
 
 /**
- * Builds the {@link SiteAnalogIndex} of an engine's table: each measured compound goes through the
- * engine as an exact match, whose fit gives every site that carries a measured value its residual
- * (the fitted shift: measured − model).
+ * Builds the {@link SiteAnalogIndex} of an engine's table. Each measured compound goes through the
+ * engine as an exact match, which assigns its values to sites (the k sites nearest the k values, in
+ * order). A site's residual is its measured value minus the model's macroscopic constant paired with
+ * that value ({@link MacroPairing}), the model being the table without measured compounds: the error
+ * the model makes there. (The fitted site shift is not used: where another site dominates the same
+ * macroscopic step, the fit moves a site by several units to move the constant by a few tenths.)
  */
 final class MeasuredSites {
     private MeasuredSites() {
     }
 
     static SiteAnalogIndex index(Engine engine, List<MeasuredCompound> measured, AnalogSettings settings) {
+        if (measured.isEmpty()) {
+            return new SiteAnalogIndex(List.of(), settings);
+        }
+        AcidityTable t = engine.table();
+        Engine bare = new Engine(new AcidityTable(t.version(), t.references(), t.groups(), t.substituents(), List.of(),
+                t.interaction(), t.pairs()), 1000);
         List<SiteAnalogIndex.MeasuredSite> out = new ArrayList<>();
         for (MeasuredCompound m : measured) {
             try {
@@ -31,20 +43,33 @@ final class MeasuredSites {
                 if (p.measured().isEmpty() || !p.measured().get().id().equals(m.id())) {
                     continue; // a duplicate structure: the first record of it is the one that counts
                 }
+                List<EstimatedSite> fitted = p.sites().stream().filter(s -> "measured".equals(s.basis()))
+                        .sorted(Comparator.comparingDouble(MeasuredSites::beforeFit)).toList();
+                if (fitted.size() != m.pka().size()) {
+                    continue;
+                }
+                List<Double> model = MacroConstants.of(bare.prepare(m.smiles(), Conditions.noPh()).polynomial()).stream()
+                        .filter(v -> v >= Engine.MACRO_LOW && v <= Engine.MACRO_HIGH).sorted().toList();
                 RootedPattern.Target target = new RootedPattern.Target(p.prepared().molecule());
-                for (EstimatedSite s : p.sites()) {
-                    if (!"measured".equals(s.basis()) || s.terms().isEmpty() || AnalogCorrection.heldByPairRule(s)) {
+                for (int[] pair : MacroPairing.assign(m.pka(), model)) {
+                    EstimatedSite s = fitted.get(pair[0]);
+                    if (AnalogCorrection.heldByPairRule(s)) {
                         continue;
                     }
-                    Term fit = s.terms().get(s.terms().size() - 1);
+                    double residual = m.pka().get(pair[0]) - model.get(pair[1]);
                     out.add(new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
-                            SiteEnvironment.of(target, s.site(), settings.radius()), s.pka() - fit.value(),
-                            fit.value(), engine.table().citation(m.source())));
+                            SiteEnvironment.of(target, s.site(), settings.radius()), model.get(pair[1]), residual,
+                            engine.table().citation(m.source())));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has read every measured structure; one that fails here serves as no analog
             }
         }
         return new SiteAnalogIndex(out, settings);
+    }
+
+    /** The site's value before the measured fit: the fit is its derivation's last line. */
+    private static double beforeFit(EstimatedSite s) {
+        return s.pka() - s.terms().get(s.terms().size() - 1).value();
     }
 }

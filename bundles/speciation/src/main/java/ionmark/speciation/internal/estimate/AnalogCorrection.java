@@ -92,7 +92,7 @@ public final class AnalogCorrection {
     private static Term term(Used u, double part, double denom, AnalogSettings cfg) {
         SiteAnalogIndex.MeasuredSite m = u.site();
         String label = String.format(Locale.ROOT,
-                "measured analog %s (%s, measured pKa %s at %.0f °C, %s): site residual %+.2f against the model's %.2f, "
+                "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant %.2f, "
                         + "local similarity %.2f, weight %.2f of %.2f (prior %.1f)",
                 m.compound().name(), m.group(), values(m.compound().pka()), m.compound().temperature(),
                 m.compound().method().isBlank() ? "method not stated" : m.compound().method(), m.residual(), m.model(),
