@@ -52,9 +52,11 @@ record Card(AnnotatedStructure s) {
             sb.append("</ul><p class=\"im-small\">Fraction in the organic layer from logD (octanol/water, used for the "
                     + "named solvent) and the phase ratio; partition estimates are for planning.</p></div>");
         }
-        if (!first.warnings().isEmpty()) {
+        // one caution line per card: the solver's own planning caution is the card's last line already
+        List<String> warnings = first.warnings().stream().filter(w -> !w.contains("for planning")).toList();
+        if (!warnings.isEmpty()) {
             sb.append("<ul class=\"im-warn\">");
-            for (String w : first.warnings()) {
+            for (String w : warnings) {
                 sb.append("<li>").append(Html.esc(AtomNumbers.solverText(w))).append("</li>");
             }
             sb.append("</ul>");
