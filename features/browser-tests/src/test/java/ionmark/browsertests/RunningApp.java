@@ -46,7 +46,7 @@ final class RunningApp implements AutoCloseable {
         while (System.currentTimeMillis() < deadline) {
             try {
                 HttpURLConnection c = (HttpURLConnection) URI.create(base + path).toURL().openConnection();
-                if (c.getResponseCode() == 200 && new String(c.getInputStream().readAllBytes()).contains("im-card")) {
+                if (c.getResponseCode() == 200 && new String(c.getInputStream().readAllBytes()).contains("class=\"im-card\"")) {
                     return;
                 }
             } catch (IOException e) {

@@ -72,8 +72,7 @@ final class Pages {
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
             switch (b.kind()) {
-                case STRUCTURE -> sb.append("<pre class=\"structure\">").append(esc(b.content().strip()))
-                        .append(b.ph() == null ? "" : "  [pH " + b.ph() + "]").append("</pre>");
+                case STRUCTURE -> structure(sb, b);
                 case TABLE -> sb.append("<pre class=\"table\">").append(esc(b.content())).append("</pre>");
                 default -> {
                     String c = b.content();
@@ -91,6 +90,20 @@ final class Pages {
             }
         }
         return sb.toString();
+    }
+
+    /** A structure block: SMILES as written; a molfile or RXN block folded under its title line. */
+    private static void structure(StringBuilder sb, Block b) {
+        String c = b.content().strip();
+        String ph = b.ph() == null ? "" : "  [pH " + b.ph() + "]";
+        if (c.contains("\n")) {
+            String title = b.content().lines().findFirst().orElse("").strip();
+            sb.append("<details class=\"structure\"><summary>").append(esc(title.isEmpty() ? "structure block" : title))
+                    .append(esc(ph)).append("</summary><pre class=\"structure\">").append(esc(b.content()))
+                    .append("</pre></details>");
+        } else {
+            sb.append("<pre class=\"structure\">").append(esc(c)).append(esc(ph)).append("</pre>");
+        }
     }
 
     static String editor(String id, String text, String token) {

@@ -159,10 +159,10 @@ final class Depiction {
             // at the usual bond length, so a small molecule is drawn small and a large one is given room
             // (shrunk only when it would not fit)
             int heavy = mol.getAtomCount();
-            int w = Math.max(220, Math.min(620, 110 + 26 * heavy));
-            int h = Math.max(170, Math.min(420, 110 + 14 * heavy));
-            String svg = new DepictionGenerator().withSize(w, h).withMargin(18)
-                    .withAnnotationScale(0.6).withAnnotationColor(new Color(0x1D, 0x24, 0x33))
+            int w = Math.max(260, Math.min(640, 140 + 30 * heavy));
+            int h = Math.max(200, Math.min(440, 130 + 16 * heavy));
+            String svg = new DepictionGenerator().withSize(w, h).withMargin(18).withZoom(1.9)
+                    .withAnnotationScale(0.75).withAnnotationColor(new Color(0x1D, 0x24, 0x33))
                     .withHighlight(acids, ACID).withHighlight(bases, BASE)
                     .depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             return trim(svg);
@@ -181,7 +181,7 @@ final class Depiction {
     static String species(String smiles) {
         try {
             IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
-            String svg = new DepictionGenerator().withSize(180, 120).withFillToFit().depict(mol)
+            String svg = new DepictionGenerator().withSize(190, 130).withZoom(1.3).depict(mol)
                     .toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             return trim(svg);
         } catch (Exception | LinkageError e) {
