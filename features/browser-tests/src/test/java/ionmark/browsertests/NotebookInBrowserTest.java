@@ -89,8 +89,19 @@ class NotebookInBrowserTest {
         shot("buffer-entry");
     }
 
+    /** Signs in as the workspace's first administrator (an editing role). */
+    static void signIn() throws IOException {
+        browser.get(base + "/signin");
+        browser.findElement(By.name("user")).sendKeys("admin");
+        browser.findElement(By.name("password")).sendKeys(Files.readString(workspace.resolve(".ionmark/admin-password.txt"))
+                .strip());
+        browser.findElement(By.cssSelector("form button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(10)).until(d -> d.getPageSource().contains("Sign out"));
+    }
+
     @Test
     void typingAStructureAndPhUpdatesTheCard() throws IOException {
+        signIn();
         browser.get(base + "/entry/06-stability-ph12/edit");
         WebElement text = browser.findElement(By.id("text"));
         text.clear();

@@ -21,10 +21,15 @@ final class RunningApp implements AutoCloseable {
 
     /** Starts the application and waits until the demo entry carries annotations. */
     static RunningApp start(Path workspace, String logName) throws Exception {
+        return start(workspace, logName, 0);
+    }
+
+    /** Starts the application on a given port (0: any free one). */
+    static RunningApp start(Path workspace, String logName, int fixedPort) throws Exception {
         Path jar = Path.of(System.getProperty("ionmark.app.jar", "../app/target/ionmark.jar"));
         assertTrue(Files.isRegularFile(jar), "build the application first: " + jar);
         int port;
-        try (ServerSocket s = new ServerSocket(0)) {
+        try (ServerSocket s = new ServerSocket(fixedPort)) {
             port = s.getLocalPort();
         }
         Process p = new ProcessBuilder("java", "-Dorg.osgi.service.http.port=" + port, "-Dgosh.args=--nointeractive",
@@ -41,7 +46,7 @@ final class RunningApp implements AutoCloseable {
         while (System.currentTimeMillis() < deadline) {
             try {
                 HttpURLConnection c = (HttpURLConnection) URI.create(base + path).toURL().openConnection();
-                if (c.getResponseCode() == 200 && new String(c.getInputStream().readAllBytes()).contains("im-card")) {
+                if (c.getResponseCode() == 200 && new String(c.getInputStream().readAllBytes()).contains("class=\"im-card\"")) {
                     return;
                 }
             } catch (IOException e) {

@@ -72,8 +72,7 @@ final class Pages {
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
             switch (b.kind()) {
-                case STRUCTURE -> sb.append("<pre class=\"structure\">").append(esc(b.content().strip()))
-                        .append(b.ph() == null ? "" : "  [pH " + b.ph() + "]").append("</pre>");
+                case STRUCTURE -> structure(sb, b);
                 case TABLE -> sb.append("<pre class=\"table\">").append(esc(b.content())).append("</pre>");
                 default -> {
                     String c = b.content();
@@ -91,6 +90,20 @@ final class Pages {
             }
         }
         return sb.toString();
+    }
+
+    /** A structure block: SMILES as written; a molfile or RXN block folded under its title line. */
+    private static void structure(StringBuilder sb, Block b) {
+        String c = b.content().strip();
+        String ph = b.ph() == null ? "" : "  [pH " + b.ph() + "]";
+        if (c.contains("\n")) {
+            String title = b.content().lines().findFirst().orElse("").strip();
+            sb.append("<details class=\"structure\"><summary>").append(esc(title.isEmpty() ? "structure block" : title))
+                    .append(esc(ph)).append("</summary><pre class=\"structure\">").append(esc(b.content()))
+                    .append("</pre></details>");
+        } else {
+            sb.append("<pre class=\"structure\">").append(esc(c)).append(esc(ph)).append("</pre>");
+        }
     }
 
     static String editor(String id, String text, String token) {
@@ -112,9 +125,9 @@ final class Pages {
             + "--accent:#234e70;--acid:#6a3d9a;--base:#1b7837;--warn:#8a4b00;--err:#9b1c1c}"
             + "*{box-sizing:border-box}body{font:15px/1.5 'DejaVu Sans','Segoe UI',system-ui,sans-serif;max-width:1320px;"
             + "margin:0 auto;padding:0 1.2em 3em;color:var(--ink);background:var(--wash)}"
-            + "header{display:flex;gap:1.2em;align-items:center;padding:.7em 0;border-bottom:3px solid var(--accent);"
-            + "margin-bottom:1em}header a{color:var(--accent);font-weight:600;text-decoration:none}"
-            + "header a:first-child{font-size:1.15em;letter-spacing:.02em}.im-right{margin-left:auto}"
+            + "body>header{display:flex;gap:1.2em;align-items:center;padding:.7em 0;border-bottom:3px solid var(--accent);"
+            + "margin-bottom:1em}body>header a{color:var(--accent);font-weight:600;text-decoration:none}"
+            + "body>header a:first-child{font-size:1.15em;letter-spacing:.02em}.im-right{margin-left:auto}"
             + "main{background:var(--paper);border:1px solid var(--line);border-radius:4px;padding:1em 1.6em}"
             + "h1{font-size:1.6em;margin:.3em 0 .5em;font-weight:600}h2{font-size:1.2em;margin:1.2em 0 .4em;"
             + "border-bottom:1px solid var(--line);padding-bottom:.2em}a{color:var(--accent)}"
@@ -160,5 +173,5 @@ final class Pages {
             + ".im-quick .im-wide{display:block}.im-quick textarea{width:100%;font-family:'DejaVu Sans Mono',monospace}"
             + "[aria-invalid=true]{border:2px solid var(--err)}"
             + "@media print{.im-card{break-inside:avoid;box-shadow:none}}"
-            + "@media print{header,.im-search,.im-button{display:none}body{background:#fff}main{border:0}}";
+            + "@media print{body>header,.im-search,.im-button{display:none}body{background:#fff}main{border:0}}";
 }

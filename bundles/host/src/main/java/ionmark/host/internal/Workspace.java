@@ -21,7 +21,7 @@ import ionmark.host.api.Entry;
 final class Workspace {
     private static final Pattern ID = Pattern.compile("[A-Za-z0-9][A-Za-z0-9_-]{0,80}");
     static final List<String> DEMO = List.of("01-workup-extraction", "02-salt-screen", "03-hplc-mobile-phase",
-            "04-buffer-preparation", "05-assay-ph74", "06-stability-ph12");
+            "04-buffer-preparation", "05-assay-ph74", "06-stability-ph12", "07-coupling-workup");
 
     private final Path folder;
 

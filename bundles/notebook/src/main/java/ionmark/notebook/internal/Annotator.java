@@ -3,11 +3,13 @@ package ionmark.notebook.internal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import java.util.concurrent.atomic.AtomicReference;
 
 import org.osgi.service.component.annotations.Activate;
 import org.osgi.service.component.annotations.Component;
 import org.osgi.service.component.annotations.Reference;
 import org.osgi.service.component.annotations.ReferenceCardinality;
+import org.osgi.service.component.annotations.ReferencePolicy;
 import org.osgi.service.component.annotations.ReferencePolicyOption;
 
 import ionmark.acidity.api.TableService;
@@ -30,35 +32,55 @@ import ionmark.store.api.TableStore;
 @Component(service = {EntryDecorator.class, EntryAnnotation.class})
 public final class Annotator implements EntryDecorator, EntryAnnotation {
     private final Speciation speciation;
-    private final TableStore store;
-    private final TableService tables;
-    private final SeenEntries seen;
+    private final AtomicReference<TableStore> store = new AtomicReference<>();
+    private final AtomicReference<TableService> tables = new AtomicReference<>();
+    private final AtomicReference<SeenEntries> seen = new AtomicReference<>();
 
-    public Annotator(Speciation speciation) {
-        this(speciation, null, null, null);
-    }
-
-    public Annotator(Speciation speciation, TableStore store, TableService tables) {
-        this(speciation, store, tables, null);
-    }
-
-    /**
-     * With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version.
-     * Greedy: a store that starts after this component still gets bound (a reluctant optional reference stayed
-     * unbound, and pinned entries silently showed the head).
-     */
+    /** Without a table store: pinned entries are annotated with the current table, and their cards say so. */
     @Activate
-    public Annotator(@Reference Speciation speciation,
-            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
-            TableStore store,
-            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
-            TableService tables,
-            @Reference(cardinality = ReferenceCardinality.OPTIONAL, policyOption = ReferencePolicyOption.GREEDY)
-            SeenEntries seen) {
+    public Annotator(@Reference Speciation speciation) {
         this.speciation = speciation;
-        this.store = store;
-        this.tables = tables;
-        this.seen = seen;
+    }
+
+    /** With a table store, an entry pinned to a table version ("Table version: v3") is annotated with that version. */
+    public Annotator(Speciation speciation, TableStore store, TableService tables) {
+        this(speciation);
+        this.store.set(store);
+        this.tables.set(tables);
+    }
+
+    // Dynamic and greedy: a store that starts after this component is still used (a static reluctant optional
+    // reference stayed unbound, and pinned entries silently showed the head), without taking the cards away
+    // while the component is rebuilt.
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    void setStore(TableStore s) {
+        store.set(s);
+    }
+
+    void unsetStore(TableStore s) {
+        store.compareAndSet(s, null);
+    }
+
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    void setTables(TableService t) {
+        tables.set(t);
+    }
+
+    void unsetTables(TableService t) {
+        tables.compareAndSet(t, null);
+    }
+
+    /** The entries this notebook has annotated: what the table admin's report of affected entries covers. */
+    @Reference(cardinality = ReferenceCardinality.OPTIONAL, policy = ReferencePolicy.DYNAMIC,
+            policyOption = ReferencePolicyOption.GREEDY)
+    void setSeen(SeenEntries s) {
+        seen.set(s);
+    }
+
+    void unsetSeen(SeenEntries s) {
+        seen.compareAndSet(s, null);
     }
 
     /** The speciation for an entry and what the reader must know about the table it uses. */
@@ -70,6 +92,8 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
         if (v <= 0) {
             return new Bound(speciation, List.of());
         }
+        TableStore store = this.store.get();
+        TableService tables = this.tables.get();
         if (store == null || tables == null) {
             return new Bound(speciation, List.of("This entry is pinned to table v" + v + ", but no table store is "
                     + "available: annotated with the current table instead."));
@@ -95,8 +119,9 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
 
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
-        if (seen != null) {
-            seen.record(entry);
+        SeenEntries s = seen.get();
+        if (s != null) {
+            s.record(entry);
         }
         AnnotatedEntry a = annotate(entry);
         List<Decoration> out = new ArrayList<>();

@@ -32,18 +32,19 @@ record Card(AnnotatedStructure s) {
         }
         Analysis first = s.analyses().get(0);
         sb.append("<div class=\"im-cardgrid\"><figure class=\"im-drawing\">").append(Depiction.svg(first))
-                .append("<figcaption class=\"im-legend\"><span class=\"im-acid\">■ acid site</span> "
-                        + "<span class=\"im-base\">● base site</span> numbers are the rows of the site table</figcaption>"
-                        + "</figure><div class=\"im-numbers\">");
+                .append(first.sites().isEmpty() ? "" : "<figcaption class=\"im-legend\"><span class=\"im-acid\">■ acid "
+                        + "site</span> <span class=\"im-base\">● base site</span> numbers are the rows of the site table"
+                        + "</figcaption>").append("</figure><div class=\"im-numbers\">");
         for (Analysis a : s.analyses()) {
             sb.append(sites(a)).append(summary(a));
         }
         sb.append("</div></div>");
-        sb.append(species(s.analyses()));
+        sb.append("<div class=\"im-cardgrid\">");
         if (s.curve() != null) {
             sb.append("<figure class=\"im-plotfig\">").append(Plot.svg(s.curve(), first.sites(), s.conditions().ph(),
                     s.conditions().phHigh())).append("</figure>");
         }
+        sb.append("<div>").append(species(s.analyses())).append("</div></div>");
         if (!s.phases().isEmpty()) {
             sb.append("<div class=\"im-workup\"><h4>Work-up</h4><ul>");
             for (Partition p : s.phases()) {
@@ -52,9 +53,11 @@ record Card(AnnotatedStructure s) {
             sb.append("</ul><p class=\"im-small\">Fraction in the organic layer from logD (octanol/water, used for the "
                     + "named solvent) and the phase ratio; partition estimates are for planning.</p></div>");
         }
-        if (!first.warnings().isEmpty()) {
+        // one caution line per card: the solver's own planning caution is the card's last line already
+        List<String> warnings = first.warnings().stream().filter(w -> !w.contains("for planning")).toList();
+        if (!warnings.isEmpty()) {
             sb.append("<ul class=\"im-warn\">");
-            for (String w : first.warnings()) {
+            for (String w : warnings) {
                 sb.append("<li>").append(Html.esc(AtomNumbers.solverText(w))).append("</li>");
             }
             sb.append("</ul>");
@@ -106,6 +109,11 @@ record Card(AnnotatedStructure s) {
     }
 
     private static String sites(Analysis a) {
+        if (a.sites().isEmpty()) {
+            return "<p class=\"im-nosites\">No ionizable site the table covers"
+                    + (a.conditions().hasPh() ? " (at pH " + StatedConditions.format(a.conditions().ph()) + ")" : "")
+                    + ": neutral over the aqueous range.</p>";
+        }
         StringBuilder sb = new StringBuilder("<table class=\"im-sites\"><caption>")
                 .append(a.conditions().hasPh() ? "Sites at pH " + StatedConditions.format(a.conditions().ph())
                         : "Sites (no pH)")

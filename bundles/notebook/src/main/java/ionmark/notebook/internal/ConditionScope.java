@@ -96,7 +96,13 @@ final class ConditionScope {
                         sameSentence = s;
                     }
                 } else if (p.before(at)) {
-                    before = s;
+                    // a reagent named in the same sentence as a stated pH does not override it ("acidified to
+                    // pH 2.5 with 1 M HCl" is at pH 2.5)
+                    boolean keep = before != null && before.place().block() == p.block()
+                            && before.place().sentence() == p.sentence() && !implied(before) && implied(s);
+                    if (!keep) {
+                        before = s;
+                    }
                 }
             } else if (p.section() == 0 && p.before(at)) {
                 opening = s;
@@ -115,6 +121,10 @@ final class ConditionScope {
         long elsewhere = found.stream().filter(s -> s.place().section() != at.section()).count();
         return new Pick<>(null, elsewhere == 0 ? null : "no " + what + " is stated in this section; " + elsewhere
                 + " stated in other sections " + (elsewhere == 1 ? "was" : "were") + " not applied here");
+    }
+
+    private static boolean implied(Stated<?> s) {
+        return s.value() instanceof PhFound f && f.implied();
     }
 
     /** Statements in the structure's section before it (or in its sentence) that are out of range. */

@@ -156,29 +156,34 @@ final class Depiction {
                 atom.setProperty(StandardGenerator.ANNOTATION_LABEL, label);
                 (acid ? acids : bases).add(atom);
             }
+            // at the usual bond length, so a small molecule is drawn small and a large one is given room
+            // (shrunk only when it would not fit)
             int heavy = mol.getAtomCount();
-            // scaled to the molecule: a small one is not blown up, a large one gets room
-            int w = Math.max(260, Math.min(560, 150 + 22 * heavy));
-            int h = Math.max(200, Math.min(380, 130 + 12 * heavy));
-            String svg = new DepictionGenerator().withSize(w, h).withFillToFit().withZoom(1.0)
-                    .withAnnotationScale(0.55).withAnnotationColor(new Color(0x1D, 0x24, 0x33))
-                    .withHighlight(acids, ACID).withHighlight(bases, BASE).withOuterGlowHighlight(4.0)
+            int w = Math.max(260, Math.min(640, 140 + 30 * heavy));
+            int h = Math.max(200, Math.min(440, 130 + 16 * heavy));
+            String svg = new DepictionGenerator().withSize(w, h).withMargin(18).withZoom(1.9)
+                    .withAnnotationScale(0.75).withAnnotationColor(new Color(0x1D, 0x24, 0x33))
+                    .withHighlight(acids, ACID).withHighlight(bases, BASE)
                     .depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
-            int start = svg.indexOf("<svg");
-            return start >= 0 ? svg.substring(start) : svg;
+            return trim(svg);
         } catch (Exception | LinkageError e) {
             return "<p class=\"im-nodepict\">(no drawing: " + Html.esc(String.valueOf(e.getMessage())) + ")</p>";
         }
+    }
+
+    /** The SVG element alone, without the XML prolog and the generator's description. */
+    private static String trim(String svg) {
+        int start = svg.indexOf("<svg");
+        return (start >= 0 ? svg.substring(start) : svg).replaceAll("(?s)<desc>.*?</desc>", "");
     }
 
     /** A small drawing of one species (charged forms as written by the solver). */
     static String species(String smiles) {
         try {
             IAtomContainer mol = new SmilesParser(SilentChemObjectBuilder.getInstance()).parseSmiles(smiles);
-            String svg = new DepictionGenerator().withSize(180, 120).withFillToFit().depict(mol)
+            String svg = new DepictionGenerator().withSize(190, 130).withZoom(1.3).depict(mol)
                     .toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
-            int start = svg.indexOf("<svg");
-            return start >= 0 ? svg.substring(start) : svg;
+            return trim(svg);
         } catch (Exception | LinkageError e) {
             return "<code>" + Html.esc(smiles) + "</code>";
         }

@@ -133,8 +133,9 @@ final class EntryReader {
             if (pt.value().note() != null) {
                 notes.add(pt.value().note());
             }
-        } else if (pt.note() != null) {
-            notes.add(pt.note() + " (25 °C used)");
+            if (pt.note() != null) {
+                notes.add(pt.note());
+            }
         }
         double is = 0;
         ConditionScope.Pick<StatedConditions.Value> pi = scope.pick(scope.ionic, at, "ionic strength");
@@ -145,8 +146,9 @@ final class EntryReader {
             if (pi.value().note() != null) {
                 notes.add(pi.value().note());
             }
-        } else if (pi.note() != null) {
-            notes.add(pi.note() + " (I = 0 used)");
+            if (pi.note() != null) {
+                notes.add(pi.note());
+            }
         }
         notes.addAll(scope.flaggedAt(at));
         ConditionsUsed used = new ConditionsUsed(ph, phHigh, phWords, implied, t, tWords, is, iWords, notes);

@@ -15,6 +15,9 @@ import java.util.regex.Pattern;
 final class ReagentSolutions {
     /** An implied pH, the words it was read from, where they stand and how it was obtained. */
     record Implied(double ph, String words, int start, String how) {
+        Implied {
+            ph = Math.round(ph * 100) / 100.0 + 0.0; // two decimals, and never a negative zero
+        }
     }
 
     // pKa values at 25 °C, I = 0 (CRC Handbook of Chemistry and Physics, dissociation constants of inorganic and

@@ -92,8 +92,9 @@ final class WorkupPhases {
                     for (Window c : analyses.get(j).chargedWindows()) {
                         double from = Math.max(n.from(), c.from());
                         double to = Math.min(n.to(), c.to());
-                        if (to - from >= 0.5) {
-                            out.add(new Separation(words.get(i), words.get(j), from, to));
+                        Separation s = new Separation(words.get(i), words.get(j), from, to);
+                        if (to - from >= 0.5 && !out.contains(s)) {
+                            out.add(s);
                         }
                     }
                 }

@@ -64,6 +64,13 @@ class ReadingTest {
         assertEquals(8.0, a.structures().get(0).conditions().ph(), 1e-9);
     }
 
+    @Test
+    void aReagentUsedToReachAStatedPhDoesNotOverrideIt() {
+        AnnotatedEntry a = annotate(new Block(Block.Kind.TEXT, "Acidified to pH 2.5 with 1 M HCl and the layers "
+                + "separated.", null, 1), new Block(Block.Kind.STRUCTURE, "CCN", null, 1));
+        assertEquals(2.5, a.structures().get(0).conditions().ph(), 1e-9);
+    }
+
     @ParameterizedTest(name = "\"{0}\" → pH {1}")
     @CsvSource(delimiter = '|', value = {"pH 7,4 | 7.4", "pH > 10 | 10", "pH < 2 | 2", "pH above 12 | 12"})
     void otherPhWritings(String text, double ph) {
