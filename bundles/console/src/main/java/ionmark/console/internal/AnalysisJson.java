@@ -24,6 +24,15 @@ public final class AnalysisJson {
         return of(id, a, false);
     }
 
+    /** The answer when there is no analysis at all (a usage problem, an unreadable file): still one JSON object. */
+    static ObjectNode error(String message) {
+        ObjectNode o = JSON.createObjectNode();
+        o.put("error", message);
+        o.putArray("sites");
+        o.putArray("macroPka");
+        return o;
+    }
+
     /**
      * {@code brief}: the record of {@code Speciation.screen}, which has no species, logP, logD,
      * windows or isoelectric point; those keys are left out and {@code "brief": true} says why.

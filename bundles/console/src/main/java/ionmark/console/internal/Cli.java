@@ -39,6 +39,9 @@ public final class Cli {
                    ionmark table publish FILE --base N --comment TEXT [--author NAME]
                    ionmark table rollback N --base M --comment TEXT [--author NAME]""";
 
+    /** Ionic strength above this is refused (mol/L): the Davies equation is a rough guide from 0.5 mol/L on. */
+    static final double MAX_IONIC_STRENGTH = 1.0;
+
     private final Speciation speciation;
     private final TableService tables;
     private final TableCalibration calibration;
@@ -126,11 +129,20 @@ public final class Cli {
             Double ph = flags.containsKey("--ph") ? number("--ph") : null;
             double t = flags.containsKey("--temp") ? number("--temp") : Conditions.STANDARD_TEMPERATURE;
             double i = flags.containsKey("--ionic") ? number("--ionic") : 0.0;
+            if (i > MAX_IONIC_STRENGTH) {
+                throw new UsageException("--ionic " + v("--ionic") + " mol/L is above " + MAX_IONIC_STRENGTH
+                        + " mol/L: the activity correction (Davies equation) does not hold there; above 0.5 mol/L it"
+                        + " is only a rough guide");
+            }
             try {
                 return new Conditions(ph, t, i);
             } catch (IllegalArgumentException e) {
                 throw new UsageException(e.getMessage());
             }
+        }
+
+        String v(String flag) {
+            return flags.get(flag);
         }
 
         double number(String flag) {
@@ -144,6 +156,22 @@ public final class Cli {
     }
 
     private int check(List<String> raw) {
+        boolean json = raw.contains("--format") && raw.indexOf("--format") + 1 < raw.size()
+                && raw.get(raw.indexOf("--format") + 1).equals("json");
+        if (!json) {
+            return checkParsed(raw);
+        }
+        try {
+            return checkParsed(raw);
+        } catch (UsageException e) {
+            // --format json: a usage problem is an answer in JSON too, so that a script never reads text
+            out.println(AnalysisJson.error(e.getMessage()));
+            err.println("ionmark: " + e.getMessage());
+            return 2;
+        }
+    }
+
+    private int checkParsed(List<String> raw) {
         Args a = Args.parse(raw, java.util.Set.of("--ph", "--temp", "--ionic", "--format"));
         if (a.positional().size() != 1) {
             throw new UsageException("check takes one structure (SMILES or file)");
@@ -154,11 +182,19 @@ public final class Cli {
         }
         Conditions c = a.conditions();
         String input = a.positional().get(0);
-        Path p = Path.of(input.length() < 250 && !input.contains("\n") ? input : ".");
+        Path p = Path.of(".");
+        try {
+            p = Path.of(input.length() < 250 && !input.contains("\n") ? input : ".");
+        } catch (java.nio.file.InvalidPathException e) {
+            // not a file name (a NUL, say): the text is the structure
+        }
         if (!input.isBlank() && Files.isRegularFile(p)) {
             try {
                 input = Files.readString(p, StandardCharsets.UTF_8);
             } catch (IOException e) {
+                if (format.equals("json")) {
+                    out.println(AnalysisJson.error("cannot read " + p + ": " + e.getMessage()));
+                }
                 err.println("ionmark: cannot read " + p + ": " + e.getMessage());
                 return 1;
             }

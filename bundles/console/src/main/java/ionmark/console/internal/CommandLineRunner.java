@@ -27,26 +27,43 @@ public final class CommandLineRunner {
     static final long STORE_WAIT_MS = 20_000;
 
     /**
-     * The table store, once it has opened and installed its head (its activation does both), so that
-     * commands see the department's table; null with a warning when it is not available in time.
+     * The table store service, once its activation has put the right table in use (the store's head, the
+     * head file, or the shipped table with a note); null when it did not come up in time or failed to
+     * activate: then the command does not run (see {@link #run}).
      */
-    static TableStore store(BundleContext ctx) {
+    static org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> storeTracker(BundleContext ctx) {
         org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> t = new org.osgi.util.tracker.ServiceTracker<>(ctx,
                 TableStore.class, null);
         t.open();
-        try {
-            TableStore s = t.waitForService(STORE_WAIT_MS);
-            if (s == null) {
-                System.err.println("ionmark: the table store is not available: using the table in the bundle");
-            }
-            return s;
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            return null;
+        return t;
+    }
+
+    /** Arguments as the launcher wrote them: each followed by NUL; an empty argument stays an argument. */
+    static List<String> split(String raw) {
+        List<String> args = new java.util.ArrayList<>(Arrays.asList(raw.split("\0", -1)));
+        if (!args.isEmpty() && args.get(args.size() - 1).isEmpty()) {
+            args.remove(args.size() - 1);
         }
+        return args;
     }
 
     static final String ARGS_FILE = "ionmark.args.file";
+
+    /**
+     * Stops the store's bundle before the process ends: its deactivation closes the database, so nothing the
+     * command wrote depends on the process ending cleanly (each commit is also forced to disk when made).
+     */
+    static void closeStore(org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> tracker) {
+        try {
+            var ref = tracker.getServiceReference();
+            tracker.close();
+            if (ref != null && ref.getBundle() != null) {
+                ref.getBundle().stop();
+            }
+        } catch (Exception e) {
+            System.err.println("ionmark: closing the table store: " + e.getMessage());
+        }
+    }
 
     @Activate
     public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
@@ -57,14 +74,24 @@ public final class CommandLineRunner {
         }
         Thread t = new Thread(() -> {
             int code;
+            org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> tracker = storeTracker(ctx);
             try {
-                String raw = Files.readString(Path.of(file), StandardCharsets.UTF_8);
-                List<String> args = Arrays.stream(raw.split("\0", -1)).filter(s -> !s.isEmpty()).toList();
-                code = new Cli(speciation, tables, calibration, store(ctx), System.out, System.err).run(args);
+                List<String> args = split(Files.readString(Path.of(file), StandardCharsets.UTF_8));
+                TableStore store = tracker.waitForService(STORE_WAIT_MS);
+                if (store == null && ctx.getProperty("ionmark.table.file") == null) {
+                    // the store component failed to activate (its error is above) or hung: no silent fallback
+                    System.err.println("ionmark: the table store did not start (see the message above); nothing was run");
+                    code = 1;
+                } else {
+                    code = new Cli(speciation, tables, calibration, store, System.out, System.err).run(args);
+                }
             } catch (IOException | RuntimeException e) {
-                System.err.println("ionmark: " + e);
+                System.err.println("ionmark: " + (e.getMessage() == null ? e.toString() : e.getMessage()));
+                code = 1;
+            } catch (InterruptedException e) {
                 code = 1;
             }
+            closeStore(tracker);
             System.out.flush();
             System.err.flush();
             Runtime.getRuntime().halt(code);

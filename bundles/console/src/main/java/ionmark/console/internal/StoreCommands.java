@@ -35,8 +35,8 @@ final class StoreCommands {
             switch (cmd) {
                 case "history" -> {
                     for (VersionInfo v : store.history()) {
-                        out.println(String.format(Locale.ROOT, "v%-4d %s  %-16s %s  %s", v.number(), v.time(), v.author(),
-                                v.hash().substring(0, 8), v.comment()));
+                        out.println(String.format(Locale.ROOT, "v%-4d %s  %-16s %s  %s", v.number(), v.time(),
+                                Printable.of(v.author()), v.hash().substring(0, 8), Printable.of(v.comment())));
                     }
                     return 0;
                 }
@@ -44,14 +44,16 @@ final class StoreCommands {
                     if (a.positional().size() != 2) {
                         throw new Cli.UsageException("table diff takes two version numbers");
                     }
-                    store.diff(number(a.positional().get(0)), number(a.positional().get(1))).forEach(out::println);
+                    store.diff(number(a.positional().get(0)), number(a.positional().get(1)))
+                            .forEach(l -> out.println(Printable.of(l)));
                     return 0;
                 }
                 case "audit" -> {
                     int limit = a.flags().containsKey("--limit") ? number(a.flags().get("--limit")) : 50;
                     for (AuditEvent e : store.audit(limit)) {
-                        out.println(String.format(Locale.ROOT, "%s  %-12s %-9s v%-4d %-9s %s", e.time(), e.user(),
-                                e.action(), e.version(), e.outcome(), e.detail()));
+                        out.println(String.format(Locale.ROOT, "%s  %-12s %-9s v%-4d %-9s %s", e.time(),
+                                Printable.of(e.user()), Printable.of(e.action()), e.version(), Printable.of(e.outcome()),
+                                Printable.of(e.detail())));
                     }
                     return 0;
                 }

@@ -23,8 +23,8 @@ import ionmark.host.api.HostUser;
 
 /**
  * The reference host's users: one line per user in a file, {@code name = role,role : pbkdf2-sha256$iterations$salt$hash}
- * (Base64), hashed with the JDK's PBKDF2. After three failed sign-ins a name must wait, 2 s doubling
- * per further failure up to 5 minutes.
+ * (Base64), hashed with the JDK's PBKDF2. After three failed sign-ins from one address a name must wait there,
+ * 2 s doubling per further failure up to 5 minutes; an address that fails twenty times over any names waits too.
  */
 final class Users {
     static final int ITERATIONS = 310_000;
@@ -33,7 +33,8 @@ final class Users {
 
     private final Path file;
     private final Map<String, String[]> users = new LinkedHashMap<>(); // name -> {roles, hash}
-    private final Map<String, long[]> failures = new ConcurrentHashMap<>(); // name -> {count, locked until}
+    // "n" name NUL address, or "a" address -> {count, locked until, last failure}
+    private final Map<String, long[]> failures = new ConcurrentHashMap<>();
     private final SecureRandom random = new SecureRandom();
 
     Users(Path file) throws IOException {
@@ -60,7 +61,7 @@ final class Users {
 
     /** Adds or replaces a user and rewrites the file (owner-only permissions where the file system has them). */
     synchronized void put(String name, Set<String> roles, char[] password) throws IOException {
-        if (!name.matches("[A-Za-z0-9._-]{1,64}")) {
+        if (!NAME.matcher(name).matches()) {
             throw new IllegalArgumentException("user names are letters, digits, '.', '_' or '-': " + name);
         }
         users.put(name, new String[] {String.join(",", roles), hash(password)});
@@ -79,26 +80,85 @@ final class Users {
     record Attempt(Optional<HostUser> user, String outcome, long retryAfterMs) {
     }
 
+    /** The names a user may have; anything else is never stored, compared or printed as a name. */
+    static final java.util.regex.Pattern NAME = java.util.regex.Pattern.compile("[A-Za-z0-9._-]{1,64}");
+    /** Failures an address may make (over all names) before it must wait as well. */
+    static final int FREE_FAILURES_PER_ADDRESS = 20;
+    /** Most throttle entries kept; the oldest are dropped beyond this, so the map cannot grow without bound. */
+    static final int MAX_TRACKED = 10_000;
+    /** A throttle entry is forgotten this long after its last failure (and after its lock ran out). */
+    static final long FORGET_MS = 15 * 60_000L;
+
+    /** A sign-in name as it may be printed or audited: the name itself when allowed, else a fixed marker. */
+    static String printable(String name) {
+        return name != null && NAME.matcher(name).matches() ? name : "(invalid name)";
+    }
+
+    /** Without an address (tests, the shell): one address for every caller. */
     Attempt signIn(String name, char[] password) {
+        return signIn(name, password, "local");
+    }
+
+    /**
+     * A sign-in. Failures are counted per name and address (so that one visitor cannot lock a user out
+     * everywhere) and per address over all names; after the free failures each waits, 2 s doubling up to 5
+     * minutes. An unknown or invalid name costs one password derivation like a known one.
+     */
+    Attempt signIn(String name, char[] password, String address) {
         long now = System.currentTimeMillis();
-        long[] f = failures.computeIfAbsent(name == null ? "" : name, k -> new long[2]);
-        synchronized (f) {
-            if (now < f[1]) {
-                return new Attempt(Optional.empty(), "locked", f[1] - now);
+        prune(now);
+        String who = NAME.matcher(name == null ? "" : name).matches() ? name : "";
+        String addr = address == null ? "" : address;
+        long[] byName = failures.computeIfAbsent("n" + who + "\u0000" + addr, k -> new long[3]);
+        long[] byAddress = failures.computeIfAbsent("a" + addr, k -> new long[3]);
+        synchronized (byAddress) {
+            synchronized (byName) {
+                long wait = Math.max(byName[1], byAddress[1]) - now;
+                if (wait > 0) {
+                    return new Attempt(Optional.empty(), "locked", wait);
+                }
+                String[] u = who.isEmpty() ? null : users.get(who);
+                boolean ok = verify(password, u == null ? DUMMY : u[1]) && u != null;
+                if (ok) {
+                    byName[0] = 0;
+                    byName[1] = 0;
+                    return new Attempt(Optional.of(new HostUser(who, Set.of(u[0].split("\\s*,\\s*")))), "ok", 0);
+                }
+                fail(byName, FREE_FAILURES, now);
+                fail(byAddress, FREE_FAILURES_PER_ADDRESS, now);
+                return new Attempt(Optional.empty(), "failed", Math.max(0, Math.max(byName[1], byAddress[1]) - now));
             }
-            String[] u = users.get(name);
-            if (u != null && verify(password, u[1])) {
-                f[0] = 0;
-                f[1] = 0;
-                return new Attempt(Optional.of(new HostUser(name, Set.of(u[0].split("\\s*,\\s*")))), "ok", 0);
-            }
-            f[0]++;
-            if (f[0] >= FREE_FAILURES) {
-                f[1] = now + Math.min(MAX_DELAY_MS, 2000L << Math.min(20, f[0] - FREE_FAILURES));
-            }
-            return new Attempt(Optional.empty(), "failed", Math.max(0, f[1] - now));
         }
     }
+
+    private static void fail(long[] f, int free, long now) {
+        f[0]++;
+        f[2] = now;
+        if (f[0] >= free) {
+            f[1] = now + Math.min(MAX_DELAY_MS, 2000L << Math.min(20, f[0] - free));
+        }
+    }
+
+    /** Drops entries whose lock ran out and whose last failure is old; beyond the cap, the oldest. */
+    private void prune(long now) {
+        if (failures.size() < MAX_TRACKED / 2) {
+            return;
+        }
+        failures.entrySet().removeIf(e -> e.getValue()[1] < now && e.getValue()[2] < now - FORGET_MS);
+        if (failures.size() >= MAX_TRACKED) {
+            failures.entrySet().stream().sorted(java.util.Comparator.comparingLong(e -> e.getValue()[2]))
+                    .limit(failures.size() - MAX_TRACKED / 2L).map(Map.Entry::getKey).toList()
+                    .forEach(failures::remove);
+        }
+    }
+
+    int tracked() {
+        return failures.size();
+    }
+
+    /** A hash no password matches, compared against when the name is unknown (same cost as a real one). */
+    private static final String DUMMY = "pbkdf2-sha256$" + ITERATIONS + "$AAAAAAAAAAAAAAAAAAAAAA==$"
+            + "AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA=";
 
     String hash(char[] password) {
         byte[] salt = new byte[16];

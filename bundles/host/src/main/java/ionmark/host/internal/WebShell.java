@@ -49,6 +49,7 @@ public final class WebShell extends HttpServlet {
     private final transient List<SidePanel> panels = new CopyOnWriteArrayList<>();
     private final transient List<AdminPage> adminPages = new CopyOnWriteArrayList<>();
     private final transient List<HostAuditor> auditors = new CopyOnWriteArrayList<>();
+    private final transient RequestGuard guard = new RequestGuard();
     private final transient Users users;
     private final transient Sessions sessions = new Sessions();
 
@@ -154,13 +155,21 @@ public final class WebShell extends HttpServlet {
         if (p == null) {
             fail(resp, w, 404, "There is no administration page '" + id + "'.");
         } else if (!w.user().has(p.requiredRole())) {
-            audit(w.user().name(), "request", "denied", (post ? "POST " : "GET ") + path + " needs " + p.requiredRole());
-            fail(resp, w, 403, "The page needs the role " + p.requiredRole() + ".");
+            audit(RequestGuard.actor(w.session() != null, w.user().name(), req), "request", "denied",
+                    (post ? "POST " : "GET ") + path + " needs " + p.requiredRole());
+            fail(resp, w, 403, "The page needs the role " + p.requiredRole() + (w.session() == null
+                    ? ": sign in first." : "."));
         } else {
             page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, w.user(),
                     w.csrf()));
         }
         return true;
+    }
+
+    /** Every request runs under the limits and error rules of {@link RequestGuard}. */
+    @Override
+    protected void service(HttpServletRequest req, HttpServletResponse resp) throws IOException {
+        guard.run(req, resp, (r, s) -> super.service(r, s));
     }
 
     @Override
@@ -225,7 +234,8 @@ public final class WebShell extends HttpServlet {
         // sign-in forms carry the local token; everything else the token of the request's session
         String expected = path.equals("/signin") ? csrf : w.csrf();
         if (!expected.equals(req.getHeader("X-Ionmark-Token")) && !expected.equals(req.getParameter("token"))) {
-            audit(w.user().name(), "request", "denied", "POST " + path + " without a valid CSRF token");
+            audit(RequestGuard.actor(w.session() != null, w.user().name(), req), "request", "denied",
+                    "POST " + path + " without a valid CSRF token");
             fail(resp, w, 403, "The form was stale or came from elsewhere (missing or wrong CSRF token): reload "
                     + "the page and try again.");
             return;
@@ -269,8 +279,8 @@ public final class WebShell extends HttpServlet {
     private void signIn(HttpServletRequest req, HttpServletResponse resp, Who w) throws IOException {
         String name = req.getParameter("user") == null ? "" : req.getParameter("user").strip();
         String pw = req.getParameter("password") == null ? "" : req.getParameter("password");
-        Users.Attempt a = users.signIn(name, pw.toCharArray());
-        audit(name, "sign-in", a.outcome(), req.getRemoteAddr());
+        Users.Attempt a = users.signIn(name, pw.toCharArray(), req.getRemoteAddr());
+        audit(Users.printable(name), "sign-in", a.outcome(), req.getRemoteAddr());
         if (a.user().isPresent()) {
             resp.setHeader("Set-Cookie", Sessions.cookie(sessions.open(a.user().get()), Sessions.LIFETIME_MS / 1000));
             resp.sendRedirect("/");
@@ -359,7 +369,8 @@ public final class WebShell extends HttpServlet {
     private static void send(HttpServletResponse resp, String html) throws IOException {
         resp.setContentType("text/html; charset=UTF-8");
         resp.setHeader("Content-Security-Policy", "default-src 'self'; img-src 'self' data:; style-src 'self' "
-                + "'unsafe-inline'; script-src 'self' 'unsafe-inline'");
+                + "'unsafe-inline'; script-src 'self' 'unsafe-inline'; " + RequestGuard.FRAME_ANCESTORS);
+        resp.setHeader("X-Frame-Options", "DENY");
         resp.setHeader("X-Content-Type-Options", "nosniff");
         resp.getOutputStream().write(html.getBytes(StandardCharsets.UTF_8));
     }

@@ -19,10 +19,19 @@ final class HeadFollower implements AutoCloseable {
     private final TableService tables;
     private final ScheduledExecutorService poller;
     private volatile int installed;
+    private final java.nio.file.Path headFile;
+    /** The head last refused, so that a refused head is reported once, not at every poll. */
+    private volatile int refused;
 
     HeadFollower(JdbcTableStore store, TableService tables, int pollSeconds) {
+        this(store, tables, pollSeconds, null);
+    }
+
+    /** {@code headFile}: where to write each installed head for command-line runs (null: nowhere). */
+    HeadFollower(JdbcTableStore store, TableService tables, int pollSeconds, java.nio.file.Path headFile) {
         this.store = store;
         this.tables = tables;
+        this.headFile = headFile;
         follow();
         this.poller = Executors.newSingleThreadScheduledExecutor(r -> {
             Thread t = new Thread(r, "ionmark-store-head");
@@ -44,8 +53,23 @@ final class HeadFollower implements AutoCloseable {
             if (r.ok()) {
                 tables.install(r.table().orElseThrow());
                 installed = head.get().number();
+                if (headFile != null) {
+                    CliTable.write(headFile, json);
+                }
             } else {
                 System.err.println("ionmark: store head v" + head.get().number() + " does not validate: " + r.errors());
+            }
+        } catch (StoreIntegrityException e) {
+            int head = store.snapshot().head();
+            if (refused != head) {
+                refused = head;
+                System.err.println("ionmark: " + e.getMessage() + "; the notebook keeps the table it has in use"
+                        + (installed == 0 ? "" : " (v" + installed + ")"));
+                try {
+                    store.audit("ionmark", "verify", head, "refused", e.getMessage());
+                } catch (RuntimeException ignored) {
+                    // the audit trail is in the same store; the message above is the report
+                }
             }
         } catch (RuntimeException e) {
             System.err.println("ionmark: cannot follow the table store: " + e.getMessage());

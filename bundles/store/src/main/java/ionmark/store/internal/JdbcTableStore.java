@@ -31,6 +31,9 @@ import ionmark.store.api.VersionInfo;
  */
 public final class JdbcTableStore implements TableStore, AutoCloseable {
     static final int SCHEMA_VERSION = 1;
+    /** Longest publish comment and author name accepted (checked before the database is touched). */
+    static final int MAX_COMMENT = 2000;
+    static final int MAX_AUTHOR = 200;
 
     private final TableService tables;
     private final String url;
@@ -43,11 +46,18 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
         // H2 closes a database when its last connection closes; reopening runs recovery again after an unclean
         // stop. Keep it open while this JVM runs, so recovery happens once, at the first open.
         // Also wait up to 30 s for the head-row lock (H2's default of 1 s fails busy publishers; PostgreSQL waits).
+        // WRITE_DELAY=0: H2 otherwise writes a commit to its file up to 0.5 s later, and a killed process lost
+        // publishes it had already confirmed; with 0 every commit is in the file before commit() returns.
         String u = url;
         if (u.startsWith("jdbc:h2:")) {
             String upper = u.toUpperCase(java.util.Locale.ROOT);
+            if (upper.contains("AUTO_SERVER") || (upper.contains("WRITE_DELAY") && !upper.contains("WRITE_DELAY=0"))) {
+                throw new IllegalArgumentException("the H2 store URL must not set AUTO_SERVER (it opens a network port)"
+                        + " or WRITE_DELAY (commits must reach the file before they are confirmed): " + url);
+            }
             u += upper.contains("DB_CLOSE_DELAY") ? "" : ";DB_CLOSE_DELAY=-1";
             u += upper.contains("LOCK_TIMEOUT") ? "" : ";LOCK_TIMEOUT=30000";
+            u += upper.contains("WRITE_DELAY") ? "" : ";WRITE_DELAY=0";
         }
         this.url = u;
         this.credentials = new Properties();
@@ -191,16 +201,98 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
         }
     }
 
+    /**
+     * The content of a version, checked: its version block must name this number and the hash recorded in
+     * the row, and the hash must be the hash of the content. A version that fails is refused with
+     * {@link StoreIntegrityException}; it is never handed out.
+     */
     @Override
     public Optional<String> content(int version) {
+        String content;
+        String hash;
         try (Connection c = connect(); PreparedStatement p = c.prepareStatement(
-                "select content from ionmark_version where number = ?")) {
+                "select content, hash from ionmark_version where number = ?")) {
             p.setInt(1, version);
             try (ResultSet r = p.executeQuery()) {
-                return r.next() ? Optional.of(r.getString(1)) : Optional.empty();
+                if (!r.next()) {
+                    return Optional.empty();
+                }
+                content = r.getString(1);
+                hash = r.getString(2).strip();
             }
         } catch (SQLException e) {
             throw new IllegalStateException("cannot read version " + version + ": " + e.getMessage(), e);
+        }
+        VersionCheck.verify(tables, version, hash, content);
+        return Optional.of(content);
+    }
+
+    /**
+     * Starts an empty store from a table (the one shipped with the application): its first version keeps the
+     * table's own number, so one version number means one content everywhere. Does nothing when the store
+     * has a version already.
+     *
+     * @return true when this call seeded the store
+     */
+    boolean seed(String json, String author, String comment) throws StoreRejectedException {
+        ValidationReport r = tables.validate(json);
+        if (!r.ok()) {
+            throw new StoreRejectedException(r.errors().stream().map(Object::toString).toList());
+        }
+        AcidityTable t = r.table().orElseThrow();
+        int number = Math.max(1, t.version().number());
+        synchronized (WRITE_LOCKS.computeIfAbsent(url, k -> new Object())) {
+            try (Connection c = connect()) {
+                c.setAutoCommit(false);
+                try {
+                    try (PreparedStatement p = c.prepareStatement("select number from ionmark_head where id = 1 for update");
+                            ResultSet rs = p.executeQuery()) {
+                        rs.next();
+                        if (rs.getInt(1) != 0) {
+                            c.rollback();
+                            return false;
+                        }
+                    }
+                    try (Statement s = c.createStatement(); ResultSet rs = s.executeQuery("select count(*) from ionmark_version")) {
+                        rs.next();
+                        if (rs.getInt(1) != 0) {
+                            c.rollback();
+                            return false;
+                        }
+                    }
+                    Instant now = Instant.now();
+                    String content = tables.toJson(t.withVersion(new TableVersion(number, author, t.version().time(),
+                            t.version().comment(), "", t.version().parent())));
+                    String hash = tables.validate(content).table().orElseThrow().version().hash();
+                    try (PreparedStatement p = c.prepareStatement("insert into ionmark_version (number, author, created,"
+                            + " comment, hash, parent, content) values (?, ?, ?, ?, ?, ?, ?)")) {
+                        p.setInt(1, number);
+                        p.setString(2, author);
+                        p.setTimestamp(3, Timestamp.from(now));
+                        p.setString(4, comment);
+                        p.setString(5, hash);
+                        p.setInt(6, 0);
+                        p.setString(7, content);
+                        p.executeUpdate();
+                    }
+                    try (PreparedStatement p = c.prepareStatement("update ionmark_head set number = ? where id = 1 and number = 0")) {
+                        p.setInt(1, number);
+                        p.executeUpdate();
+                    }
+                    insertAudit(c, author, "seed", number, "ok", comment);
+                    c.commit();
+                    forceToDisk(c);
+                    return true;
+                } catch (SQLException | RuntimeException e) {
+                    c.rollback();
+                    if (e instanceof SQLException se && isDuplicate(se)) {
+                        return false; // another instance seeded it first
+                    }
+                    throw e;
+                }
+            } catch (SQLException e) {
+                throw new IllegalStateException("cannot seed the table store: " + e.getMessage(), e);
+            }
         }
     }
 
@@ -237,9 +329,17 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
     private VersionInfo writeLocked(String action, String json, int basedOn, String author, String comment)
             throws StoreConflictException, StoreRejectedException {
         String who = author == null || author.isBlank() ? "unknown" : author;
+        if (who.length() > MAX_AUTHOR) {
+            throw new StoreRejectedException(List.of("an author name has at most " + MAX_AUTHOR + " characters"));
+        }
         if (comment == null || comment.isBlank()) {
             audit(who, action, basedOn, "rejected", "a comment is required");
             throw new StoreRejectedException(List.of("a comment saying why is required"));
+        }
+        if (comment.length() > MAX_COMMENT) {
+            audit(who, action, basedOn, "rejected", "comment of " + comment.length() + " characters");
+            throw new StoreRejectedException(List.of("a comment has at most " + MAX_COMMENT + " characters, not "
+                    + comment.length()));
         }
         ValidationReport r = tables.validate(json);
         if (!r.ok()) {
@@ -293,6 +393,7 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
                 }
                 insertAudit(c, who, action, number, "ok", comment);
                 c.commit();
+                forceToDisk(c);
                 return new VersionInfo(number, who, now, comment, hash, head);
             } catch (SQLException e) {
                 c.rollback();
@@ -315,9 +416,22 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
     @Override
     public void audit(String user, String action, int version, String outcome, String detail) {
         try (Connection c = connect()) {
-            insertAudit(c, user, action, version, outcome, detail);
+            insertAudit(c, user, action, version, outcome, detail); // in the file at commit (WRITE_DELAY=0)
         } catch (SQLException e) {
             throw new IllegalStateException("cannot write the audit trail: " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * After a commit on H2: the commit is in the file (WRITE_DELAY=0), which survives the process; CHECKPOINT
+     * SYNC also forces the operating system's buffers to the device, so it survives a power cut. PostgreSQL
+     * does both at commit (synchronous_commit, fsync: its defaults; do not turn them off for a store).
+     */
+    private void forceToDisk(Connection c) throws SQLException {
+        if (!postgres) {
+            try (Statement s = c.createStatement()) {
+                s.execute("checkpoint sync");
+            }
         }
     }
 

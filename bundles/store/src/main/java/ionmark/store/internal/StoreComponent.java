@@ -21,39 +21,66 @@ import ionmark.store.api.TableStore;
 import ionmark.store.api.VersionInfo;
 
 /**
- * The table store as a service. An empty store is seeded with the table in use as version 1. Every
- * instance polls the head and installs a new head into the table service, so that all notebooks on
- * one database show a publish within the poll interval.
+ * The table store as a service. In the notebook: an empty store is seeded with the shipped table under that
+ * table's own number; the head is polled and installed into the table service, and written to
+ * {@code .ionmark/head.json} (owner-only) for command-line runs. In a command-line run ({@code ionmark.args.file}
+ * set): the store is never created; the table in use is {@code head.json} when there (no database opened), else
+ * the store's head; the database is opened only for commands that need it. See {@link CliTable}.
  */
 @Component(service = TableStore.class, immediate = true, configurationPid = "ionmark.store")
 @Designate(ocd = StoreConfiguration.class)
 public final class StoreComponent implements TableStore {
-    private final JdbcTableStore store;
     private final TableService tables;
-    /** Null when this run was given its own table file. */
+    /** Null when this run was given its own table file, or in a command-line run. */
     private final HeadFollower follower;
+    private final StoreConfiguration config;
+    private final String url;
+    private final String password;
+    /** Why the database cannot be used in this run (command line without a store), else null. */
+    private final String unavailable;
+    private volatile JdbcTableStore store;
+    /** The workspace's .ionmark folder (default H2 store), else null. */
+    private final Path dir;
     /** The launcher's table file (IONMARK_TABLE), the same property the table service reads. */
     static final String LOCAL_TABLE_PROPERTY = "ionmark.table.file";
+    static final String CLI_PROPERTY = "ionmark.args.file";
 
     @Activate
     public StoreComponent(@Reference TableService tables, StoreConfiguration config, BundleContext ctx) throws IOException {
         this.tables = tables;
+        this.config = config;
         if (config.pollSeconds() < 1) {
             throw new IllegalArgumentException("pollSeconds must be at least 1, not " + config.pollSeconds());
         }
-        String url = config.jdbcUrl().strip();
-        if (url.isEmpty()) {
-            String ws = ctx.getProperty("ionmark.workspace");
-            Path dir = Path.of(ws == null || ws.isBlank() ? "workspace" : ws, ".ionmark").toAbsolutePath();
-            Files.createDirectories(dir);
-            // AUTO_SERVER lets a command-line run open the store while the notebook has it open
-            url = "jdbc:h2:file:" + dir.resolve("table-store") + ";AUTO_SERVER=TRUE";
-        }
-        String password = config.passwordFile().isBlank() ? "" : Files.readAllLines(Path.of(config.passwordFile()))
+        boolean cli = ctx.getProperty(CLI_PROPERTY) != null && !ctx.getProperty(CLI_PROPERTY).isBlank();
+        String configured = config.jdbcUrl().strip();
+        this.dir = configured.isEmpty() ? StoreOpener.folder(ctx.getProperty("ionmark.workspace")) : null;
+        this.url = dir == null ? configured : StoreOpener.h2Url(dir);
+        this.password = config.passwordFile().isBlank() ? "" : Files.readAllLines(Path.of(config.passwordFile()))
                 .stream().findFirst().orElse("").strip();
-        this.store = new JdbcTableStore(tables, url, config.user(), password);
         String localFile = ctx.getProperty(LOCAL_TABLE_PROPERTY);
-        if (localFile != null && !localFile.isBlank()) {
+        boolean ownTable = localFile != null && !localFile.isBlank();
+        if (cli) {
+            this.unavailable = dir != null && !StoreOpener.exists(dir) ? "there is no table store in the workspace "
+                    + dir.getParent() + " (`./ionmark serve --workspace DIR` creates one; give the command the same"
+                    + " --workspace)" : null;
+            this.follower = null;
+            if (!ownTable) {
+                try {
+                    new CliTable(tables, dir, unavailable, this::db).install();
+                } catch (RuntimeException e) {
+                    // fail fast, one line, non-zero: a command must not run on a table other than the one asked for
+                    System.err.println("ionmark: " + e.getMessage());
+                    deactivate();
+                    System.err.flush();
+                    Runtime.getRuntime().halt(1);
+                }
+            }
+            return;
+        }
+        this.unavailable = null;
+        this.store = StoreOpener.open(tables, url, config.user(), password, StoreOpener.DEFAULT_WAIT_MS);
+        if (ownTable) {
             // a run given its own table file (IONMARK_TABLE: a draft, a calibration or cross-validation
             // fold) uses that file; following the shared head would silently replace it
             System.err.println("ionmark: using the table file " + localFile + "; the table store's head is not "
@@ -61,19 +88,32 @@ public final class StoreComponent implements TableStore {
             this.follower = null;
         } else {
             seed();
-            this.follower = new HeadFollower(store, tables, config.pollSeconds());
+            this.follower = new HeadFollower(store, tables, config.pollSeconds(),
+                    dir == null ? null : dir.resolve(CliTable.HEAD_FILE));
         }
+    }
+
+    /** The database, opened on first use in a command-line run (waiting for the notebook's file lock). */
+    JdbcTableStore db() {
+        return db(StoreOpener.DEFAULT_WAIT_MS);
+    }
+
+    private synchronized JdbcTableStore db(long waitMs) {
+        if (store == null) {
+            if (unavailable != null) {
+                throw new IllegalStateException(unavailable);
+            }
+            store = StoreOpener.open(tables, url, config.user(), password, waitMs);
+        }
+        return store;
     }
 
     private void seed() {
         if (store.head().isEmpty()) {
             try {
-                // the store numbers its own versions from 1; say which table it started from, so that "v1"
-                // in a notebook can be traced to the shipped table's own number
-                store.publish(tables.toJson(tables.current()), 0, "ionmark", "initial version: the table in use when the "
-                        + "store was created (its own version block: v" + tables.current().version().number() + ")");
-            } catch (StoreConflictException e) {
-                // another instance seeded it first
+                // the first version keeps the shipped table's own number: "v29" means one content everywhere
+                store.seed(tables.toJson(tables.current()), "ionmark", "initial version: the table in use when the "
+                        + "store was created");
             } catch (StoreRejectedException e) {
                 throw new IllegalStateException("the table in use does not validate: " + e.problems(), e);
             }
@@ -83,6 +123,10 @@ public final class StoreComponent implements TableStore {
     private void follow() {
         if (follower != null) {
             follower.follow();
+        } else if (dir != null && store != null) {
+            // a command-line publish: the next command-line run reads the new head from the head file
+            store.head().flatMap(h -> store.content(h.number()))
+                    .ifPresent(json -> CliTable.write(dir.resolve(CliTable.HEAD_FILE), json));
         }
     }
 
@@ -91,28 +135,31 @@ public final class StoreComponent implements TableStore {
         if (follower != null) {
             follower.close();
         }
-        store.close();
+        JdbcTableStore s = store;
+        if (s != null) {
+            s.close();
+        }
     }
 
     @Override
     public Optional<VersionInfo> head() {
-        return store.head();
+        return db().head();
     }
 
     @Override
     public List<VersionInfo> history() {
-        return store.history();
+        return db().history();
     }
 
     @Override
     public Optional<String> content(int version) {
-        return store.content(version);
+        return db().content(version);
     }
 
     @Override
     public VersionInfo publish(String json, int basedOn, String author, String comment)
             throws StoreConflictException, StoreRejectedException {
-        VersionInfo v = store.publish(json, basedOn, author, comment);
+        VersionInfo v = db().publish(json, basedOn, author, comment);
         follow();
         return v;
     }
@@ -120,23 +167,34 @@ public final class StoreComponent implements TableStore {
     @Override
     public VersionInfo rollback(int toVersion, int basedOn, String author, String comment)
             throws StoreConflictException, StoreRejectedException {
-        VersionInfo v = store.rollback(toVersion, basedOn, author, comment);
+        VersionInfo v = db().rollback(toVersion, basedOn, author, comment);
         follow();
         return v;
     }
 
     @Override
     public void audit(String user, String action, int version, String outcome, String detail) {
-        store.audit(user, action, version, outcome, detail);
+        if (store == null && unavailable != null) {
+            return; // a command-line run without a store: nothing to append to (the command itself says so)
+        }
+        try {
+            db(1000).audit(user, action, version, outcome, detail);
+        } catch (IllegalStateException e) {
+            if (follower != null || store != null) {
+                throw e;
+            }
+            // a command-line validate or export while a notebook holds the store: say it, do not fail the command
+            System.err.println("ionmark: note: no audit line written for this " + action + ": " + e.getMessage());
+        }
     }
 
     @Override
     public List<AuditEvent> audit(int limit) {
-        return store.audit(limit);
+        return db().audit(limit);
     }
 
     @Override
     public List<String> diff(int from, int to) {
-        return store.diff(from, to);
+        return db().diff(from, to);
     }
 }

@@ -34,7 +34,7 @@ class CrashTest {
                     System.getenv("IONMARK_PG_PASSWORD")});
         }
         for (String[] t : targets) {
-            for (int round = 0; round < 4; round++) {
+            for (int round = 0; round < 2; round++) {
                 Process p = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
                         System.getProperty("java.class.path"), PublishLoop.class.getName(), t[0], t[1], t[2])
                         .redirectErrorStream(true).start();

@@ -1,0 +1,147 @@
+package ionmark.store.internal;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.BufferedReader;
+import java.io.InputStreamReader;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.ThreadLocalRandom;
+import java.util.concurrent.TimeUnit;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * A publish confirmed to its caller survives the publisher's death. A child JVM publishes in a loop and
+ * prints each confirmed version; it is killed with SIGKILL at a random point; the store is reopened and
+ * every confirmed version must be there with the content its hash names. The second test ends the child
+ * with {@code Runtime.halt} right after one confirmed publish (what the command line did), then reads the
+ * history. Rounds per backend: {@code IONMARK_KILL_ROUNDS} (default 3; {@code 50} for the full figure).
+ */
+class ConfirmedPublishKillTest {
+    @TempDir
+    Path dir;
+
+    static int rounds() {
+        String r = System.getenv("IONMARK_KILL_ROUNDS");
+        return r == null || r.isBlank() ? 3 : Integer.parseInt(r.strip());
+    }
+
+    private List<String[]> targets() throws Exception {
+        List<String[]> targets = new ArrayList<>();
+        targets.add(new String[] {Backends.h2(dir), "sa", ""});
+        if (Backends.pgUrl() != null) {
+            Backends.fresh(dir.resolve("pg")); // empties the PostgreSQL schema
+            targets.add(new String[] {Backends.pgUrl(), System.getenv("IONMARK_PG_USER"),
+                    System.getenv("IONMARK_PG_PASSWORD")});
+        }
+        return targets;
+    }
+
+    private static Process child(String mode, String[] t) throws Exception {
+        return new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
+                System.getProperty("java.class.path"), ConfirmingPublisher.class.getName(), mode, t[0], t[1], t[2])
+                .redirectErrorStream(true).start();
+    }
+
+    @Test
+    void everyConfirmedPublishSurvivesAKill() throws Exception {
+        for (String[] t : targets()) {
+            Map<Integer, String> confirmed = new LinkedHashMap<>();
+            for (int round = 0; round < rounds(); round++) {
+                Process p = child("loop", t);
+                BufferedReader out = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8));
+                assertEquals("ready", out.readLine(), "child did not start");
+                int before;
+                synchronized (confirmed) {
+                    before = confirmed.size();
+                }
+                Thread reader = new Thread(() -> read(out, confirmed));
+                reader.start();
+                // kill at a random point after the child's first confirmed publish of this round
+                long until = System.currentTimeMillis() + 60_000;
+                while (System.currentTimeMillis() < until) {
+                    synchronized (confirmed) {
+                        if (confirmed.size() > before) {
+                            break;
+                        }
+                    }
+                    Thread.sleep(5);
+                }
+                Thread.sleep(ThreadLocalRandom.current().nextInt(1000));
+                p.destroyForcibly(); // SIGKILL
+                assertTrue(p.waitFor(30, TimeUnit.SECONDS));
+                reader.join(10_000);
+                int known;
+                synchronized (confirmed) {
+                    known = confirmed.size();
+                }
+                assertTrue(known > before, "the child confirmed nothing within 60 s");
+                try (JdbcTableStore s = new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2])) {
+                    verify(s, confirmed, t[0] + " round " + round);
+                }
+            }
+        }
+    }
+
+    @Test
+    void aPublishThenHaltIsInTheHistory() throws Exception {
+        for (String[] t : targets()) {
+            Map<Integer, String> confirmed = new LinkedHashMap<>();
+            for (int round = 0; round < rounds(); round++) {
+                Process p = child("once", t);
+                BufferedReader out = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8));
+                assertEquals("ready", out.readLine(), "child did not start");
+                read(out, confirmed);
+                assertTrue(p.waitFor(30, TimeUnit.SECONDS));
+                assertEquals(round + 1, confirmed.size(), "one confirmed publish per run");
+                try (JdbcTableStore s = new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2])) {
+                    verify(s, confirmed, t[0] + " run " + round);
+                    int last = confirmed.keySet().stream().mapToInt(Integer::intValue).max().orElseThrow();
+                    assertEquals(last, s.head().orElseThrow().number(), "history after the run names its publish as head");
+                }
+            }
+        }
+    }
+
+    private static void read(BufferedReader out, Map<Integer, String> confirmed) {
+        try {
+            for (String line; (line = out.readLine()) != null;) {
+                if (line.startsWith("confirmed ")) {
+                    String[] f = line.split(" ");
+                    synchronized (confirmed) {
+                        String before = confirmed.put(Integer.parseInt(f[1]), f[2]);
+                        if (before != null && !before.equals(f[2])) {
+                            confirmed.put(-Integer.parseInt(f[1]), "reused"); // a number given twice
+                        }
+                    }
+                }
+            }
+        } catch (java.io.IOException e) {
+            // the child died mid-line: the line was not a confirmation
+        }
+    }
+
+    private static void verify(JdbcTableStore s, Map<Integer, String> confirmed, String where) {
+        synchronized (confirmed) {
+            assertTrue(confirmed.keySet().stream().allMatch(n -> n > 0), where + ": a version number was confirmed twice");
+            Map<Integer, ionmark.store.api.VersionInfo> history = new java.util.HashMap<>();
+            s.history().forEach(v -> history.put(v.number(), v));
+            for (Map.Entry<Integer, String> e : confirmed.entrySet()) {
+                var info = java.util.Optional.ofNullable(history.get(e.getKey()));
+                assertTrue(info.isPresent(), where + ": confirmed version " + e.getKey() + " is lost; head "
+                        + s.head().map(v -> v.number()).orElse(0));
+                assertEquals(e.getValue(), info.get().hash(), where + ": version " + e.getKey() + " has other content");
+                String content = s.content(e.getKey()).orElseThrow();
+                assertEquals(e.getValue(), Backends.TABLES.validate(content).table().orElseThrow().version().hash(),
+                        where + ": version " + e.getKey() + " content matches the confirmed hash");
+            }
+        }
+    }
+}
