@@ -106,20 +106,15 @@ public final class StructureReader {
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
-        int[] moved = Normaliser.toAromaticLactam(mol);
-        String[] what = {"hydroxy group(s) ortho or para to the ring nitrogen of a pyridine ring (2- or "
-                + "4-hydroxypyridine type); analysed as the pyridone",
-                "mercapto group(s) ortho or para to the ring nitrogen of a pyridine ring (2- or 4-mercaptopyridine "
-                        + "type); analysed as the pyridinethione",
-                "hydroxy group(s) between the two nitrogens of an imidazole-type ring (2-hydroxybenzimidazole type); "
-                        + "analysed as the imidazolone"};
-        for (int k = 0; k < what.length; k++) {
-            if (moved[k] > 0) {
-                notes.add("input had " + moved[k] + " " + what[k] + " tautomer, the form that dominates in water");
-            }
-        }
-        if (moved[0] + moved[1] + moved[2] > 0) {
+        Tautomers.Moved moved = Tautomers.toReference(mol);
+        if (moved.any()) {
+            notes.add("input was drawn as another tautomer (" + moved.describe() + "); analysed as the reference "
+                    + "tautomer: amide and lactam over iminol and lactim, thione over thiol, amino over imino, benzene "
+                    + "rings kept");
             SmartsPattern.prepare(mol);
+        }
+        if (moved.capped() > 0) {
+            notes.add("too many tautomers to compare in " + moved.capped() + " conjugated system(s); analysed as drawn");
         }
         String asRead = !molfile && stripped.isEmpty() && notes.isEmpty() ? firstToken(text.strip()) : null;
         return new Prepared(mol, asRead, stripped, notes);
