@@ -119,9 +119,9 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
 
     @Override
     public List<Decoration> decorate(Entry entry, HostUser user) {
-        SeenEntries s = seen.get();
-        if (s != null) {
-            s.record(entry);
+        SeenEntries known = seen.get();
+        if (known != null) {
+            known.record(entry);
         }
         AnnotatedEntry a = annotate(entry);
         List<Decoration> out = new ArrayList<>();
