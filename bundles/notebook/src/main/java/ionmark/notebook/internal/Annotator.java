@@ -46,8 +46,7 @@ public final class Annotator implements EntryDecorator {
             ionmark.store.api.TableStore store,
             @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
             ionmark.acidity.api.TableService tables,
-            @Reference(cardinality = org.osgi.service.component.annotations.ReferenceCardinality.OPTIONAL)
-            SeenEntries seen) {
+            @Reference SeenEntries seen) { // mandatory: an optional static reference can stay unbound for good
         this.speciation = speciation;
         this.store = store;
         this.tables = tables;
