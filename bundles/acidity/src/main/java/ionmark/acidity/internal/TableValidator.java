@@ -55,6 +55,7 @@ final class TableValidator {
         checkInteraction(t.interaction(), refIds, out);
         checkExempt(t, out);
         checkPairs(t, refIds, out);
+        checkFits(t, refIds, out);
         if (!t.version().hash().isEmpty() && !t.version().hash().equals(TableCodec.hash(t))) {
             out.add(warn("$.version.hash", "content hash does not match the content (edited by hand?); "
                     + "it is recomputed when the table is written"));
@@ -289,6 +290,22 @@ final class TableValidator {
     }
 
     /** Each class the distance rule leaves out exists and is an acid (only an anion's charge can sit in σ). */
+    /** A fit's provenance cites a reference of the table and belongs to a record the table has. */
+    private static void checkFits(AcidityTable t, Set<String> refIds, List<Problem> out) {
+        for (int i = 0; i < t.groups().size(); i++) {
+            var f = t.fit(t.groups().get(i).id());
+            if (f.isPresent() && !refIds.contains(f.get().source())) {
+                out.add(err("$.groups[" + i + "].fit.source", "unknown reference '" + f.get().source() + "'"));
+            }
+        }
+        for (int i = 0; i < t.pairs().size(); i++) {
+            var f = t.fit("pair:" + t.pairs().get(i).id());
+            if (f.isPresent() && !refIds.contains(f.get().source())) {
+                out.add(err("$.pairs[" + i + "].fit.source", "unknown reference '" + f.get().source() + "'"));
+            }
+        }
+    }
+
     private static void checkExempt(AcidityTable t, List<Problem> out) {
         List<String> ex = t.interaction().exempt();
         for (int i = 0; i < ex.size(); i++) {

@@ -116,13 +116,18 @@ final class AdminReports {
         List<MeasuredCompound> ms = new ArrayList<>();
         for (MeasuredCompound m : t.measured()) {
             boolean cited = a.sites().stream().flatMap(s -> s.derivation().stream()).map(Term::label)
-                    .anyMatch(l -> l.contains(m.name()) || l.contains(m.id()));
+                    .anyMatch(l -> cites(l, m));
             if (cited) {
                 ms.add(m);
             }
         }
         sb.append(measured(ms, csrf, base));
         return sb.append("</div>").toString();
+    }
+
+    /** A derivation line that rests on a measured compound: its exact match or its use as an analog. */
+    static boolean cites(String label, MeasuredCompound m) {
+        return label.startsWith("measured compound " + m.name() + ":") || label.startsWith("analog " + m.name() + " (");
     }
 
     static String sites(List<Site> sites) {
@@ -165,7 +170,7 @@ final class AdminReports {
                 a.sites().stream().map(Site::group).filter(touched::contains).forEach(classes::add);
                 for (MeasuredCompound m : added) {
                     if (a.sites().stream().flatMap(x -> x.derivation().stream()).map(Term::label)
-                            .anyMatch(l -> l.contains(m.name()))) {
+                            .anyMatch(l -> cites(l, m))) {
                         classes.add("measured " + m.name());
                     }
                 }

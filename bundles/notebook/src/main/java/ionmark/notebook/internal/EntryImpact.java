@@ -66,11 +66,11 @@ final class EntryImpact {
     }
 
     static String html(List<Row> rows, int entriesSeen, double threshold) {
-        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "<h3 id=\"entries-heading\">Notebook entries "
-                + "that change</h3><p>%d entries seen by the notebook; structures whose main charge state changes or "
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "<div id=\"entries-heading-block\"><h3 "
+                + "id=\"entries-heading\">Notebook entries that change</h3><p>%d entries seen by the notebook; structures whose main charge state changes or "
                 + "whose fraction neutral moves by more than %.2f at the entry's stated pH:</p>", entriesSeen, threshold));
         if (rows.isEmpty()) {
-            return sb.append("<p id=\"entries-none\">None.</p>").toString();
+            return sb.append("<p id=\"entries-none\">None.</p></div>").toString();
         }
         sb.append("<table class=\"im-sites\" id=\"entries\"><thead><tr><th data-sort>entry</th><th>structure</th>"
                 + "<th>pH</th><th>main charge head → draft</th><th data-sort>fraction neutral head → draft</th>"
@@ -88,7 +88,7 @@ final class EntryImpact {
                     .append(pin > 0 ? "pinned to v" + pin + ": keeps showing v" + pin + "; unpinned it would show the draft's"
                             : "no: shows the new version once published").append("</td></tr>");
         }
-        return sb.append("</tbody></table>").toString();
+        return sb.append("</tbody></table></div>").toString();
     }
 
     private static String signed(int z) {

@@ -15,7 +15,7 @@ import ionmark.host.api.Entry;
  * as the notebook has seen it since it started: what the table admin's report of affected entries
  * covers. Bounded, so a host with very many entries keeps memory in check.
  */
-@Component(service = SeenEntries.class)
+@Component(service = SeenEntries.class, immediate = true) // immediate: a delayed one is disposed, with what it saw, whenever its users rebind
 public final class SeenEntries {
     static final int LIMIT = 5_000;
     private final Map<String, Entry> entries = new ConcurrentHashMap<>();
