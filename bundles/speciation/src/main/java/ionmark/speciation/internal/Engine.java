@@ -31,6 +31,7 @@ import ionmark.speciation.internal.estimate.LferEstimator;
 import ionmark.speciation.internal.estimate.Overrides;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.SpeciesActivity;
+import ionmark.speciation.internal.profile.ClassProvenance;
 import ionmark.speciation.internal.profile.Partition;
 import ionmark.speciation.internal.profile.WaterRange;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
@@ -730,6 +731,8 @@ public final class Engine {
             Double pr = null;
             double pka = s.pka();
             List<Term> terms = new ArrayList<>(s.terms());
+            ClassProvenance.annotate(g, terms);
+            ClassProvenance.thinWarning(g).filter(w -> !warnings.contains(w)).ifPresent(warnings::add);
             if (!g.permanent()) {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];
