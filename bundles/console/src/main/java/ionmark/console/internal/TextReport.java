@@ -35,9 +35,10 @@ final class TextReport {
         }
         sb.append("macro pKa  ").append(a.macroPka()).append('\n');
         if (a.netCharge() != null) {
-            sb.append(String.format(Locale.ROOT, "net charge %.2f; neutral %.1f %%%s%n", a.netCharge(),
-                    100 * a.fractionNeutral(), a.logD() == null ? "" : String.format(Locale.ROOT, "; logD %.2f",
-                            a.logD())));
+            sb.append(String.format(Locale.ROOT, "net charge %.2f; neutral %.1f %% (uncharged %.1f %%, the rest "
+                    + "zwitterions)%s%n", a.netCharge(), 100 * a.fractionNeutral(),
+                    100 * (a.fractionUncharged() == null ? a.fractionNeutral() : a.fractionUncharged()),
+                    a.logD() == null ? "" : String.format(Locale.ROOT, "; logD %.2f", a.logD())));
             for (Species s : a.species()) {
                 if (s.fraction() >= 0.01) {
                     sb.append(String.format(Locale.ROOT, "  %5.1f %%  %+d  %s%n", 100 * s.fraction(), s.charge(),

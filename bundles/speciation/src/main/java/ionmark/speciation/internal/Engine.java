@@ -34,6 +34,7 @@ import ionmark.speciation.internal.estimate.Overrides;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.SpeciesActivity;
+import ionmark.speciation.internal.profile.ClassProvenance;
 import ionmark.speciation.internal.profile.Partition;
 import ionmark.speciation.internal.profile.WaterRange;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
@@ -698,7 +699,7 @@ public final class Engine {
         }
         List<Double> macro = MacroConstants.of(p.polynomial()).stream()
                 .filter(v -> v >= MACRO_LOW && v <= MACRO_HIGH).map(v -> Math.round(v * 100) / 100.0).toList();
-        List<WaterRange.Site> inWater = waterSites(p);
+        List<WaterRange.Site> inWater = WaterRange.sites(p.sites(), p.model(), p.prepared().molecule());
         if (p.measured().isPresent() && measuredFit(p)) {
             macro = p.measuredHere().stream().map(v -> Math.round(v * 100) / 100.0).toList();
         } else {
@@ -736,7 +737,8 @@ public final class Engine {
             }
             netCharge = mean;
             neutral = chargeStates.getOrDefault(0, 0.0);
-            uncharged = neutral * unchargedShare(p, c);
+            uncharged = neutral * Partition.unchargedShareOfNeutral(p.model(), p.polynomial(), p.permanentCharge(),
+                    Conditioning.davies(c.ionicStrength(), c.temperature()));
             logD = Partition.logD(logP, chargeStates, uncharged);
             species = brief ? List.of() : species(mol, titr, pop, p.permanentCharge());
             if (!brief && p.measured().isPresent() && measuredFit(p)) {
@@ -755,6 +757,8 @@ public final class Engine {
             Double pr = null;
             double pka = s.pka();
             List<Term> terms = new ArrayList<>(s.terms());
+            ClassProvenance.annotate(g, terms);
+            ClassProvenance.thinWarning(g).filter(w -> !warnings.contains(w)).ifPresent(warnings::add);
             if (!g.permanent()) {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];
@@ -808,31 +812,6 @@ public final class Engine {
             }
         }
         return new Curve(ph, mean, site, states);
-    }
-
-    /** The titratable sites as {@link WaterRange} reads them (model values at the conditions). */
-    private static List<WaterRange.Site> waterSites(Problem p) {
-        List<WaterRange.Site> out = new ArrayList<>();
-        int t = 0;
-        for (EstimatedSite s : p.sites()) {
-            if (!s.site().group().permanent()) {
-                boolean alcohol = WaterRange.ALCOHOL.equals(s.site().group().id());
-                out.add(new WaterRange.Site(s.site().group().id(), p.model().base()[t], p.model().pka()[t], s.sd(),
-                        alcohol && WaterRange.vicinalDiol(p.prepared().molecule(), s.site().atom())));
-                t++;
-            }
-        }
-        return out;
-    }
-
-    /** {@link Partition#unchargedShareOfNeutral} for the problem's model, ionic-strength terms taken back out. */
-    private static double unchargedShare(Problem p, Conditions c) {
-        double k = Conditioning.davies(c.ionicStrength(), c.temperature());
-        double[] pka = p.model().pka().clone();
-        for (int i = 0; i < pka.length; i++) {
-            pka[i] += p.model().base()[i] ? -k : k;
-        }
-        return Partition.unchargedShareOfNeutral(pka, p.model().base(), p.polynomial(), p.permanentCharge());
     }
 
     private double meanCharge(Problem p, double ph) {

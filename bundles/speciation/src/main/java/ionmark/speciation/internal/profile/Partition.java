@@ -2,6 +2,8 @@ package ionmark.speciation.internal.profile;
 
 import java.util.Map;
 
+import ionmark.speciation.internal.microstates.SiteModel;
+
 /**
  * Octanol/water distribution over all species. Rule (common practice, from memory: the "diff 3–4"
  * rule for octanol/water with 0.15 M background salt, where an ion goes over as an ion pair): the
@@ -28,6 +30,19 @@ public final class Partition {
         }
         double sum = fractionUncharged + Math.max(0, total - fractionUncharged) * Math.pow(10, -ION_DROP);
         return logP + Math.log10(Math.max(sum, 1e-300));
+    }
+
+    /**
+     * {@link #unchargedShareOfNeutral(double[], boolean[], double[], int)} for a solver model that carries the
+     * whole-species ionic-strength term {@code k} (see {@code SpeciesActivity}): the term is taken back out of
+     * the site values first, since the uncharged species has none.
+     */
+    public static double unchargedShareOfNeutral(SiteModel model, double[] poly, int permanentCharge, double k) {
+        double[] pka = model.pka().clone();
+        for (int i = 0; i < pka.length; i++) {
+            pka[i] += model.base()[i] ? -k : k;
+        }
+        return unchargedShareOfNeutral(pka, model.base(), poly, permanentCharge);
     }
 
     /**

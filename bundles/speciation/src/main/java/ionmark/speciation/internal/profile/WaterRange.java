@@ -7,6 +7,9 @@ import java.util.function.DoubleUnaryOperator;
 import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 
+import ionmark.speciation.internal.estimate.EstimatedSite;
+import ionmark.speciation.internal.microstates.SiteModel;
+
 /**
  * What titrates in water between pH 0 and 14, for the macroscopic constants a card lists and for the
  * isoelectric point.
@@ -31,6 +34,21 @@ public final class WaterRange {
     }
 
     private WaterRange() {
+    }
+
+    /** The titratable sites of an analysis as the rule reads them: values from the model at the conditions. */
+    public static List<Site> sites(List<EstimatedSite> est, SiteModel model, IAtomContainer mol) {
+        List<Site> out = new ArrayList<>();
+        int t = 0;
+        for (EstimatedSite s : est) {
+            if (!s.site().group().permanent()) {
+                String id = s.site().group().id();
+                out.add(new Site(id, model.base()[t], model.pka()[t], s.sd(),
+                        ALCOHOL.equals(id) && vicinalDiol(mol, s.site().atom())));
+                t++;
+            }
+        }
+        return out;
     }
 
     /** Whether an alcohol O–H site is held out: its estimate is not below 14 by more than its sd. */
