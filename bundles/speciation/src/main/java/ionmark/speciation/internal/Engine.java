@@ -757,8 +757,9 @@ public final class Engine {
             Double pr = null;
             double pka = s.pka();
             List<Term> terms = new ArrayList<>(s.terms());
-            ClassProvenance.annotate(g, terms);
-            ClassProvenance.thinWarning(g).filter(w -> !warnings.contains(w)).ifPresent(warnings::add);
+            ClassProvenance.Record record = ClassProvenance.of(g, table().fit(g.id()));
+            ClassProvenance.annotate(g, record, terms);
+            ClassProvenance.thinWarning(g, record).filter(w -> !warnings.contains(w)).ifPresent(warnings::add);
             if (!g.permanent()) {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];

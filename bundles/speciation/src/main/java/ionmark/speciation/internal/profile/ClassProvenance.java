@@ -8,6 +8,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import ionmark.acidity.api.ClassFit;
 import ionmark.acidity.api.GroupClass;
 import ionmark.speciation.api.Term;
 
@@ -41,6 +42,23 @@ public final class ClassProvenance {
         return CACHE.computeIfAbsent(g.id() + '|' + g.pka() + '|' + g.note().hashCode(), k -> parse(g.note()));
     }
 
+    /**
+     * The record of a class from the fit provenance the table keeps beside it (the curated value the calibration
+     * started from, and the compounds it used); from the class note where the table has none for it.
+     */
+    public static Record of(GroupClass g, Optional<ClassFit> fit) {
+        if (fit.isEmpty()) {
+            return of(g);
+        }
+        ClassFit f = fit.get();
+        return CACHE.computeIfAbsent(g.id() + '|' + g.pka() + "|fit|" + f.n() + '|' + f.log().hashCode(), k -> {
+            Double start = f.before().get("pka");
+            Record fromLog = parse(f.log());
+            return new Record(start != null ? start : fromLog.compilationPka(),
+                    f.n() > 0 ? Integer.valueOf(f.n()) : fromLog.compounds());
+        });
+    }
+
     static Record parse(String note) {
         Double start = first(BEFORE, note);
         if (start == null) {
@@ -59,8 +77,7 @@ public final class ClassProvenance {
     }
 
     /** The derivation line for an effective fitted class value, inserted right after the class term. */
-    public static void annotate(GroupClass g, List<Term> terms) {
-        Record r = of(g);
+    public static void annotate(GroupClass g, Record r, List<Term> terms) {
         if (r.compilationPka() == null || Math.abs(g.pka() - r.compilationPka()) < FAR || terms.isEmpty()) {
             return;
         }
@@ -71,8 +88,7 @@ public final class ClassProvenance {
     }
 
     /** A warning for a class fitted on fewer than {@link #THIN} compounds. */
-    public static Optional<String> thinWarning(GroupClass g) {
-        Record r = of(g);
+    public static Optional<String> thinWarning(GroupClass g, Record r) {
         if (r.compounds() == null || r.compounds() >= THIN) {
             return Optional.empty();
         }
