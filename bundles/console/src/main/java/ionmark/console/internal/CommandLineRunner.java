@@ -50,7 +50,8 @@ public final class CommandLineRunner {
 
     @Activate
     public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
-            @Reference TableCalibration calibration, BundleContext ctx) {
+            @Reference TableCalibration calibration, @Reference ionmark.speciation.measured.MeasuredImport imports,
+            BundleContext ctx) {
         String file = ctx.getProperty(ARGS_FILE);
         if (file == null || file.isBlank()) {
             return;
@@ -60,7 +61,7 @@ public final class CommandLineRunner {
             try {
                 String raw = Files.readString(Path.of(file), StandardCharsets.UTF_8);
                 List<String> args = Arrays.stream(raw.split("\0", -1)).filter(s -> !s.isEmpty()).toList();
-                code = new Cli(speciation, tables, calibration, store(ctx), System.out, System.err).run(args);
+                code = new Cli(speciation, tables, calibration, store(ctx), imports, System.out, System.err).run(args);
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + e);
                 code = 1;
