@@ -31,10 +31,12 @@ public final class Cli {
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M] [--brief]
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N] [--subset open|frozen]
+                   ionmark accuracy --series --truth FILE [--radius R] [--threshold T] [--prior P]
                    ionmark annotate ENTRY.md [--format json|text]
                    ionmark table validate FILE | table export [--out FILE]
-                   ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N]
+                   ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N] [--margin M]
                    ionmark table check DRAFT      (validation and the regression report against the head)
+                   ionmark table add-measured FILE --out DRAFT [--format tsv|sdf] [--author NAME]
                    ionmark table history | table diff A B | table audit [--limit N]
                    ionmark table publish FILE --base N --comment TEXT [--author NAME]
                    ionmark table rollback N --base M --comment TEXT [--author NAME]""";
@@ -47,11 +49,19 @@ public final class Cli {
     private final TableCalibration calibration;
     private final TableStore store;
     private final TableRegression regression;
+    private final ionmark.speciation.measured.MeasuredImport imports;
     private final PrintStream out;
     private final PrintStream err;
 
     public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
             PrintStream out, PrintStream err) {
+        this(speciation, tables, calibration, store, null, out, err);
+    }
+
+    /** With the bulk import of measured values ({@code table add-measured}). */
+    public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
+            ionmark.speciation.measured.MeasuredImport imports, PrintStream out, PrintStream err) {
+        this.imports = imports;
         this.speciation = speciation;
         this.tables = tables;
         this.calibration = calibration;
@@ -321,6 +331,9 @@ public final class Cli {
             case "check" -> {
                 return checkDraft(raw.subList(1, raw.size()));
             }
+            case "add-measured" -> {
+                return addMeasured(raw.subList(1, raw.size()));
+            }
             case "history", "publish", "rollback", "diff", "audit" -> {
                 if (store == null) {
                     err.println("ionmark: no table store is available for '" + raw.get(0) + "'");
@@ -363,7 +376,27 @@ public final class Cli {
                     sh.head(), sh.draft(), sh.sitesGained().isEmpty() ? "" : "  gained " + sh.sitesGained(),
                     sh.sitesLost().isEmpty() ? "" : "  lost " + sh.sitesLost()));
         }
+        if (imports != null) {
+            new AddMeasured(imports, tables, out, err).printMoves(tables.current(), r.table().orElseThrow());
+        }
         return 0;
+    }
+
+    private int addMeasured(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--out", "--format", "--author"));
+        if (a.positional().size() != 1 || !a.flags().containsKey("--out")) {
+            throw new UsageException("table add-measured takes one FILE (TSV or SDF) and --out DRAFT");
+        }
+        String format = a.flags().get("--format");
+        if (format != null && !format.equals("tsv") && !format.equals("sdf")) {
+            throw new UsageException("--format must be tsv or sdf, not '" + format + "'");
+        }
+        if (imports == null) {
+            err.println("ionmark: the measured-values import is not available");
+            return 1;
+        }
+        return new AddMeasured(imports, tables, out, err).run(Path.of(a.positional().get(0)), Path.of(a.flags().get(
+                "--out")), format, a.flags().getOrDefault("--author", System.getProperty("user.name", "unknown")));
     }
 
     /** "K/N" → {k, n}, or null when absent. */
@@ -396,6 +429,9 @@ public final class Cli {
     }
 
     private int accuracy(List<String> raw) {
+        if (raw.contains("--series")) {
+            return series(raw);
+        }
         Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--fold", "--subset"));
         int[] f = fold(a.flags().get("--fold"));
         String subset = a.flags().get("--subset");
@@ -440,8 +476,26 @@ public final class Cli {
         return 0;
     }
 
+    /** The series experiment ({@link SeriesExperiment}); the analog settings go in as system properties. */
+    private int series(List<String> raw) {
+        Args a = Args.parse(raw, java.util.Set.of("--truth", "--radius", "--threshold", "--prior"),
+                java.util.Set.of("--series", "--detail"));
+        java.util.Map<String, String> settings = new java.util.TreeMap<>();
+        for (String k : List.of("radius", "threshold", "prior")) {
+            if (a.flags().containsKey("--" + k)) {
+                double v = a.number("--" + k);
+                settings.put("ionmark.analog." + k, k.equals("radius") ? Integer.toString((int) v) : Double.toString(v));
+            }
+        }
+        if (a.flags().containsKey("--detail")) {
+            settings.put("ionmark.series.detail", "true");
+        }
+        List<Observation> data = truth(a).stream().filter(o -> !SeriesExperiment.frozen(o.id())).toList();
+        return new SeriesExperiment(speciation, tables.current(), out, err).run(data, settings);
+    }
+
     private int calibrate(List<String> raw) {
-        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--ref", "--citation", "--fold"));
+        Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--ref", "--citation", "--fold", "--margin"));
         if (!a.flags().containsKey("--out")) {
             throw new UsageException("table calibrate needs --out FILE");
         }
@@ -462,6 +516,10 @@ public final class Cli {
                     fit.rhoAfter(), fit.rmse(), fit.rejected() ? "  REJECTED (moves too far; class unchanged)"
                             : fit.wholeModelN() > 0 ? String.format(Locale.ROOT, "  (one-site %.2f, whole model on %d)",
                                     fit.pkaSingleSite(), fit.wholeModelN()) : ""));
+        }
+        if (regression != null && !CalibrationGuard.report(speciation, regression, tables.current(), r.table(), data,
+                a.flags().containsKey("--margin") ? a.number("--margin") : CalibrationGuard.MARGIN, out, err).accepted()) {
+            return 1;
         }
         try {
             Files.writeString(Path.of(a.flags().get("--out")), tables.toJson(r.table()), StandardCharsets.UTF_8);

@@ -67,7 +67,8 @@ public final class CommandLineRunner {
 
     @Activate
     public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
-            @Reference TableCalibration calibration, BundleContext ctx) {
+            @Reference TableCalibration calibration, @Reference ionmark.speciation.measured.MeasuredImport imports,
+            BundleContext ctx) {
         String file = ctx.getProperty(ARGS_FILE);
         if (file == null || file.isBlank()) {
             return;
@@ -83,7 +84,7 @@ public final class CommandLineRunner {
                     System.err.println("ionmark: the table store did not start (see the message above); nothing was run");
                     code = 1;
                 } else {
-                    code = new Cli(speciation, tables, calibration, store, System.out, System.err).run(args);
+                    code = new Cli(speciation, tables, calibration, store, imports, System.out, System.err).run(args);
                 }
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + (e.getMessage() == null ? e.toString() : e.getMessage()));

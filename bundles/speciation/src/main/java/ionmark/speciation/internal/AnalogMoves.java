@@ -14,7 +14,7 @@ import ionmark.speciation.measured.MeasuredImport;
 /**
  * The part of a draft's regression report that says what new measurements move through their analogs:
  * site values of reference-set compounds and given structures that differ between head and draft while
- * the draft's derivation names measured analogs, with those analogs' names.
+ * the draft's derivation names measured analogs it did not name with the head, with those analogs' names.
  */
 final class AnalogMoves {
     /** Smaller moves are not listed. */
@@ -40,8 +40,9 @@ final class AnalogMoves {
             for (int i = 0; i < b.sites().size(); i++) {
                 Site sa = a.sites().get(i);
                 Site sb = b.sites().get(i);
-                List<String> by = analogs(sb);
-                if (Math.abs(sb.pka() - sa.pka()) >= LISTED && !by.isEmpty() && !by.equals(analogs(sa))) {
+                List<String> by = new ArrayList<>(analogs(sb));
+                by.removeAll(analogs(sa)); // the measured compounds new to this site: what moved it
+                if (Math.abs(sb.pka() - sa.pka()) >= LISTED && !by.isEmpty()) {
                     out.add(new MeasuredImport.Move(t[0], t[1], sb.group() + " on atom " + (sb.atom() + 1), sa.pka(),
                             sb.pka(), by));
                 }

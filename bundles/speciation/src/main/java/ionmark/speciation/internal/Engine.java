@@ -163,6 +163,17 @@ public final class Engine {
         return new Problem(prep, est, uncovered, model, poly, permanentCharge(est), notes, measured, measuredHere);
     }
 
+    /** The model's macroscopic constants at 25 °C, I = 0, with no measured value or analog applied (for the analog index). */
+    List<Double> modelConstants(String input) throws StructureException {
+        RootedPattern.Target target = new RootedPattern.Target(reader.read(input).molecule());
+        List<EstimatedSite> est = LferEstimator.estimate(table, target.molecule(), target,
+                SitePerceiver.perceive(table, target));
+        double[][] inter = interactions(distances(target.adjacency(), est), est);
+        est = heldPairs(target, est, inter, new java.util.HashSet<>());
+        return MacroConstants.of(MacroConstants.polynomial(model(inter, est, Conditions.noPh()),
+                table.table().interaction().cutoff()));
+    }
+
     /**
      * Measured macroscopic constants moved to the stated conditions: each by the model's own shift of
      * the matching constant between 25 °C, I = 0 and the stated temperature and ionic strength

@@ -4,7 +4,6 @@ import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 
-import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.MacroPairing;
@@ -13,7 +12,6 @@ import ionmark.speciation.internal.estimate.AnalogSettings;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.estimate.SiteEnvironment;
-import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.structure.StructureException;
 
@@ -21,8 +19,8 @@ import ionmark.speciation.internal.structure.StructureException;
  * Builds the {@link SiteAnalogIndex} of an engine's table. Each measured compound goes through the
  * engine as an exact match, which assigns its values to sites (the k sites nearest the k values, in
  * order). A site's residual is its measured value minus the model's macroscopic constant paired with
- * that value ({@link MacroPairing}), the model being the table without measured compounds: the error
- * the model makes there. (The fitted site shift is not used: where another site dominates the same
+ * that value ({@link MacroPairing}), the model being the estimates without measured values
+ * ({@code Engine.modelConstants}): the error the model makes there. (The fitted site shift is not used: where another site dominates the same
  * macroscopic step, the fit moves a site by several units to move the constant by a few tenths.)
  */
 final class MeasuredSites {
@@ -33,9 +31,6 @@ final class MeasuredSites {
         if (measured.isEmpty()) {
             return new SiteAnalogIndex(List.of(), settings);
         }
-        AcidityTable t = engine.table();
-        Engine bare = new Engine(new AcidityTable(t.version(), t.references(), t.groups(), t.substituents(), List.of(),
-                t.interaction(), t.pairs()), 1000);
         List<SiteAnalogIndex.MeasuredSite> out = new ArrayList<>();
         for (MeasuredCompound m : measured) {
             try {
@@ -48,7 +43,7 @@ final class MeasuredSites {
                 if (fitted.size() != m.pka().size()) {
                     continue;
                 }
-                List<Double> model = MacroConstants.of(bare.prepare(m.smiles(), Conditions.noPh()).polynomial()).stream()
+                List<Double> model = engine.modelConstants(m.smiles()).stream()
                         .filter(v -> v >= Engine.MACRO_LOW && v <= Engine.MACRO_HIGH).sorted().toList();
                 RootedPattern.Target target = new RootedPattern.Target(p.prepared().molecule());
                 for (int[] pair : MacroPairing.assign(m.pka(), model)) {

@@ -1,0 +1,155 @@
+package ionmark.notebook.internal;
+
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+import org.osgi.service.component.annotations.Activate;
+import org.osgi.service.component.annotations.Component;
+import org.osgi.service.component.annotations.Reference;
+
+import ionmark.acidity.api.AcidityTable;
+import ionmark.acidity.api.TableService;
+import ionmark.host.api.AdminPage;
+import ionmark.host.api.HostUser;
+import ionmark.speciation.measured.MeasuredImport;
+import ionmark.store.api.StoreConflictException;
+import ionmark.store.api.StoreRejectedException;
+import ionmark.store.api.TableStore;
+import ionmark.store.api.VersionInfo;
+
+/**
+ * The admin page for measured values in bulk: paste or load a TSV or SDF file, see every row checked
+ * (its problems with the row number, the sites its values go to, the head's prediction), see which
+ * predictions the new values move through their analogs, then publish the draft with a comment.
+ */
+@Component(service = AdminPage.class)
+public final class MeasuredImportPage implements AdminPage {
+    private final TableStore store;
+    private final TableService tables;
+    private final MeasuredImport imports;
+
+    @Activate
+    public MeasuredImportPage(@Reference TableStore store, @Reference TableService tables,
+            @Reference MeasuredImport imports) {
+        this.store = store;
+        this.tables = tables;
+        this.imports = imports;
+    }
+
+    @Override
+    public String id() {
+        return "measured";
+    }
+
+    @Override
+    public String title() {
+        return "Import measured values";
+    }
+
+    @Override
+    public String requiredRole() {
+        return "admin";
+    }
+
+    @Override
+    public String handle(Map<String, String> params, boolean post, HostUser user, String csrf) {
+        VersionInfo head = store.head().orElseThrow(() -> new IllegalStateException("the store has no version"));
+        String text = params.getOrDefault("data", "");
+        MeasuredImport.Format format = "sdf".equals(params.get("format")) ? MeasuredImport.Format.SDF
+                : MeasuredImport.Format.TSV;
+        StringBuilder sb = new StringBuilder();
+        String action = params.getOrDefault("action", "");
+        if (post && !text.isBlank() && (action.equals("preview") || action.equals("publish"))) {
+            AcidityTable current = tables.validate(store.content(head.number()).orElseThrow()).table().orElseThrow();
+            MeasuredImport.Result r = imports.read(text, format, current, user.name());
+            store.audit(user.name(), "validate", head.number(), r.ok() ? "ok" : "rejected",
+                    "measured import: " + r.rows().size() + " rows, " + r.rows().stream().filter(x -> !x.ok()).count()
+                            + " with problems");
+            if (action.equals("publish") && r.ok()) {
+                sb.append(publish(r, head, params, user));
+                text = "";
+            } else {
+                sb.append(preview(r, current));
+            }
+        }
+        return sb.append(form(head, text, format, csrf)).toString();
+    }
+
+    static String rows(MeasuredImport.Result r) {
+        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT,
+                "<p id=\"import-summary\">%d rows: %d ready, %d with problems.</p>", r.rows().size(),
+                r.rows().stream().filter(MeasuredImport.Row::ok).count(), r.rows().stream().filter(x -> !x.ok()).count()));
+        sb.append("<table class=\"im-sites\" id=\"import-rows\"><caption>Rows of the file</caption><thead><tr>"
+                + "<th>row</th><th>id</th><th>name</th><th>measured pKa</th><th>sites</th><th>predicted now</th>"
+                + "<th>status</th></tr></thead><tbody>");
+        for (MeasuredImport.Row row : r.rows()) {
+            var m = row.compound();
+            sb.append("<tr class=\"").append(row.ok() ? "im-ok" : "im-error").append("\"><td>").append(row.line())
+                    .append("</td><td>").append(m == null ? "" : Html.esc(m.id())).append("</td><td>")
+                    .append(m == null ? "" : Html.esc(m.name())).append("</td><td>")
+                    .append(m == null ? "" : Html.esc(m.pka().toString())).append("</td><td>")
+                    .append(Html.esc(String.join(", ", row.sites()))).append("</td><td>")
+                    .append(Html.esc(row.predicted().stream().map(v -> String.format(Locale.ROOT, "%.2f", v)).toList()
+                            .toString())).append("</td><td>");
+            row.problems().forEach(p -> sb.append("✖ ").append(Html.esc(p)).append("<br>"));
+            row.notes().forEach(p -> sb.append("△ ").append(Html.esc(p)).append("<br>"));
+            sb.append(row.ok() && row.notes().isEmpty() ? "ready" : "").append("</td></tr>");
+        }
+        return sb.append("</tbody></table>").toString();
+    }
+
+    private String preview(MeasuredImport.Result r, AcidityTable current) {
+        StringBuilder sb = new StringBuilder("<h2>Preview</h2>").append(rows(r));
+        if (!r.ok()) {
+            return sb.append("<p class=\"im-error\" role=\"alert\">Correct the rows marked ✖ and preview again; "
+                    + "nothing goes into the draft until every row is ready.</p>").toString();
+        }
+        List<MeasuredImport.Move> moves = imports.analogMoves(current, r.draft(), List.of());
+        sb.append("<table class=\"im-sites\" id=\"import-moves\"><caption>Predictions the new values move through "
+                + "their analogs (reference set)</caption><thead><tr><th>compound</th><th>site</th><th>head</th>"
+                + "<th>draft</th><th>moved by</th></tr></thead><tbody>");
+        for (MeasuredImport.Move m : moves) {
+            sb.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%s</td><td>%.2f</td><td>%.2f</td><td>%s</td></tr>",
+                    Html.esc(m.name()), Html.esc(m.site()), m.head(), m.draft(), Html.esc(String.join(", ", m.movedBy()))));
+        }
+        return sb.append("</tbody></table>").append(moves.isEmpty() ? "<p>No reference compound moves.</p>" : "")
+                .toString();
+    }
+
+    private String publish(MeasuredImport.Result r, VersionInfo head, Map<String, String> params, HostUser user) {
+        try {
+            VersionInfo v = store.publish(tables.toJson(r.draft()), Integer.parseInt(params.getOrDefault("base", "-1")),
+                    user.name(), params.getOrDefault("comment", ""));
+            return "<p class=\"im-ok\" role=\"status\">Published v" + v.number() + " with " + r.rows().size()
+                    + " measured compounds. Every notebook uses it from now on.</p>";
+        } catch (StoreConflictException e) {
+            return "<p class=\"im-error\" role=\"alert\">" + Html.esc(e.getMessage()) + "</p>";
+        } catch (StoreRejectedException e) {
+            return "<p class=\"im-error\" role=\"alert\">Not published:</p><ul>" + String.join("", e.problems().stream()
+                    .map(p -> "<li>" + Html.esc(p) + "</li>").toList()) + "</ul>";
+        } catch (NumberFormatException e) {
+            return "<p class=\"im-error\">The base version is missing.</p>";
+        }
+    }
+
+    private static String form(VersionInfo head, String text, MeasuredImport.Format format, String csrf) {
+        String t = Html.esc(csrf);
+        boolean sdf = format == MeasuredImport.Format.SDF;
+        return "<h2>Measured values for a draft based on v" + head.number() + "</h2>"
+                + "<p>TSV columns: id, smiles, pka_values (separated by ';', ascending), temperature (°C), "
+                + "ionic_strength (mol/L), method, source (a reference id of the table, or the citation of a new one), "
+                + "name. SDF: the same names as data fields.</p>"
+                + "<form method=\"post\" action=\"/admin/measured\"><input type=\"hidden\" name=\"token\" value=\"" + t
+                + "\"><input type=\"hidden\" name=\"base\" value=\"" + head.number() + "\">"
+                + "<p><label>Format <select name=\"format\"><option value=\"tsv\"" + (sdf ? "" : " selected")
+                + ">TSV</option><option value=\"sdf\"" + (sdf ? " selected" : "") + ">SDF</option></select></label> "
+                + "<label>Load a file <input type=\"file\" id=\"measured-file\" accept=\".tsv,.txt,.sdf,.sd\"></label></p>"
+                + "<textarea id=\"measured-data\" name=\"data\" rows=\"14\" cols=\"110\" spellcheck=\"false\">" + Html.esc(text)
+                + "</textarea><p><label>Why (required to publish) <input name=\"comment\" size=\"70\"></label></p>"
+                + "<p><button name=\"action\" value=\"preview\">Check rows and preview</button> "
+                + "<button name=\"action\" value=\"publish\">Publish (only when every row is ready)</button></p></form>"
+                + "<script>document.getElementById('measured-file').addEventListener('change',e=>{const f=e.target.files[0];"
+                + "if(f){f.text().then(x=>{document.getElementById('measured-data').value=x;});}});</script>";
+    }
+}
