@@ -40,6 +40,7 @@ import ionmark.speciation.internal.profile.WaterRange;
 import ionmark.speciation.internal.microstates.MicrostateSolver;
 import ionmark.speciation.internal.microstates.Populations;
 import ionmark.speciation.internal.microstates.SiteModel;
+import ionmark.speciation.internal.microstates.SitePaths;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.PerceivedSite;
 import ionmark.speciation.internal.sites.RootedPattern;
@@ -144,7 +145,7 @@ public final class Engine {
         List<String> notes = new ArrayList<>(prep.notes());
         Optional<MeasuredCompound> measured = overrides.exact(target);
         // the sites keep their order from here on: one interaction matrix serves every model below
-        double[][] inter = interactions(distances(adj, est), est);
+        double[][] inter = interactions(distances(target, est), est);
         est = heldPairs(target, est, inter, new java.util.HashSet<>());
         if (measured.isPresent()) {
             est = fitToMeasured(mol, adj, inter, est, measured.get());
@@ -214,7 +215,7 @@ public final class Engine {
             List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(), target,
                     SitePerceiver.perceive(table, target));
             java.util.Set<String> used = new java.util.TreeSet<>();
-            heldPairs(target, est, interactions(distances(target.adjacency(), est), est), used);
+            heldPairs(target, est, interactions(distances(target, est), est), used);
             return used;
         } catch (StructureException | RuntimeException e) {
             return java.util.Set.of();
@@ -528,7 +529,7 @@ public final class Engine {
      * pair with a site of a class the table exempts (its charge is already in the substituent constants),
      * times both sites' reach factors.
      */
-    private double[][] interactions(int[][] dist, List<EstimatedSite> est) {
+    private double[][] interactions(int[][][] dist, List<EstimatedSite> est) {
         SiteInteraction rule = table.table().interaction();
         int k = dist.length;
         double[] reach = new double[k];
@@ -539,7 +540,7 @@ public final class Engine {
         double[][] w = new double[k][k];
         for (int i = 0; i < k; i++) {
             for (int j = 0; j < k; j++) {
-                w[i][j] = i == j || reach[i] == 0 || reach[j] == 0 ? 0 : rule.at(dist[i][j]) * reach[i] * reach[j];
+                w[i][j] = i == j || reach[i] == 0 || reach[j] == 0 ? 0 : SitePaths.interaction(rule, dist[i][j]) * reach[i] * reach[j];
             }
         }
         return w;
@@ -613,7 +614,8 @@ public final class Engine {
      * plus any pair rule) and the potential of permanent charges. They are why the macroscopic constants
      * differ from the site values.
      */
-    private void couplings(SiteModel model, double davies, int q0, int i, List<EstimatedSite> titr, List<Term> terms) {
+    private void couplings(SiteModel model, double davies, int q0, int i, List<EstimatedSite> titr, int[][][] paths,
+            List<Term> terms) {
         double cutoff = table.table().interaction().cutoff();
         String source = table.table().citation(table.table().interaction().source());
         for (int j = 0; j < model.size(); j++) {
@@ -623,8 +625,9 @@ public final class Engine {
             }
             EstimatedSite other = titr.get(j);
             terms.add(new Term(String.format(Locale.ROOT, "coupling with the %s site on atom %d: %.2f pKa units while "
-                    + "both are charged (distance rule × both reach factors, with any pair rule); applied in the "
-                    + "microstate model, not in this value", other.site().group().id(), other.site().atom(), w), 0.0,
+                    + "both are charged (distance rule at %s, × both reach factors, with any pair rule); applied in "
+                    + "the microstate model, not in this value", other.site().group().id(), other.site().atom(), w,
+                    SitePaths.describe(paths[i][j])), 0.0,
                     source + reachSources(titr.get(i).site().group(), other.site().group())));
         }
         double phi = model.background()[i] + 2 * davies * q0;
@@ -660,32 +663,23 @@ public final class Engine {
         return out;
     }
 
-    /** Bond distances between the sites' atoms, in {@link #inDistanceOrder}. */
-    private static int[][] distances(int[][] adj, List<EstimatedSite> est) {
+    /** The bond paths between the sites' atoms ({@link SitePaths#between}), in {@link #inDistanceOrder}. */
+    private static int[][][] distances(RootedPattern.Target target, List<EstimatedSite> est) {
         int k = est.size();
-        int[] atoms = new int[k];
         List<EstimatedSite> ordered = inDistanceOrder(est);
-        for (int i = 0; i < k; i++) {
-            atoms[i] = ordered.get(i).site().atom();
-        }
-        int[][] out = new int[k][k];
-        int[] d = new int[adj.length];
-        int[] queue = new int[adj.length];
-        for (int i = 0; i < k; i++) {
-            Arrays.fill(d, -1);
-            d[atoms[i]] = 0;
-            queue[0] = atoms[i];
-            for (int head = 0, tail = 1; head < tail; head++) {
-                int u = queue[head];
-                for (int v : adj[u]) {
-                    if (d[v] < 0) {
-                        d[v] = d[u] + 1;
-                        queue[tail++] = v;
-                    }
-                }
+        int[][] adj = target.adjacency();
+        boolean[] saturated = new boolean[adj.length];
+        for (int i = 0; i < adj.length; i++) {
+            saturated[i] = !target.aromatic(i);
+            for (int n = 0; n < adj[i].length; n++) {
+                saturated[i] &= target.bondCode(i, n) == 1;
             }
-            for (int j = 0; j < k; j++) {
-                out[i][j] = d[atoms[j]];
+        }
+        int[][][] out = new int[k][k][];
+        for (int i = 0; i < k; i++) {
+            for (int j = i; j < k; j++) {
+                out[i][j] = SitePaths.between(adj, saturated, ordered.get(i).site().atom(), ordered.get(j).site().atom());
+                out[j][i] = out[i][j];
             }
         }
         return out;
@@ -762,6 +756,7 @@ public final class Engine {
         }
         List<Site> sites = new ArrayList<>();
         List<EstimatedSite> titrNow = p.sites().stream().filter(x -> !x.site().group().permanent()).toList();
+        int[][][] paths = brief ? null : distances(new RootedPattern.Target(mol), p.sites());
         int t = 0;
         for (EstimatedSite s : p.sites()) {
             GroupClass g = s.site().group();
@@ -775,8 +770,8 @@ public final class Engine {
                 pka = p.model().pka()[t];
                 pr = prot == null ? null : prot[t];
                 if (!brief) {
-                    couplings(p.model(), Conditioning.davies(c.ionicStrength(), c.temperature()), p.permanentCharge(), t, titrNow,
-                            terms);
+                    couplings(p.model(), Conditioning.davies(c.ionicStrength(), c.temperature()), p.permanentCharge(), t,
+                            titrNow, paths, terms);
                 }
                 t++;
             }
