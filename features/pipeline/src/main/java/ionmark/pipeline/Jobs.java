@@ -47,12 +47,12 @@ public final class Jobs {
         out.get(ImpactFn.PINNED).apply("WritePinned", write(o, "impact-pinned"));
     }
 
-    private static PCollection<Structure> structures(Pipeline p, IonmarkOptions o) {
+    private static PCollection<Chunk> structures(Pipeline p, IonmarkOptions o) {
         return p.apply("Patterns", Create.of(patterns(o.getIn())))
                 .apply("Match", FileIO.matchAll())
                 .apply("Open", FileIO.readMatches())
                 .apply("Read", ParDo.of(new ReadFiles(phs(o.getPh()))))
-                // one file holds many structures: spread them over the workers
+                // one file holds many structures: spread its chunks over the workers
                 .apply("Spread", Reshuffle.viaRandomKey());
     }
 
