@@ -18,7 +18,7 @@ import ionmark.speciation.api.Speciation;
  * comes from {@link Engines} in {@code @Setup}, once per worker JVM. A failure is a record with {@code error};
  * the run goes on.
  */
-final class AnnotateFn extends DoFn<Structure, String> {
+final class AnnotateFn extends DoFn<Chunk, String> {
     private static final long serialVersionUID = 1L;
     private final Counter records = Metrics.counter(ReadFiles.NS, "records");
     private final Counter errors = Metrics.counter(ReadFiles.NS, "errors");
@@ -43,7 +43,13 @@ final class AnnotateFn extends DoFn<Structure, String> {
     }
 
     @ProcessElement
-    public void process(@Element Structure s, OutputReceiver<String> out) {
+    public void process(@Element Chunk chunk, OutputReceiver<String> out) {
+        for (Structure s : chunk.structures()) {
+            annotate(s, out);
+        }
+    }
+
+    private void annotate(Structure s, OutputReceiver<String> out) {
         for (Conditions c : conditions(s, temperature, ionicStrength)) {
             long t0 = System.nanoTime();
             Analysis a;

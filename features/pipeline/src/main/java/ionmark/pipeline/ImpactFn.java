@@ -14,7 +14,7 @@ import ionmark.speciation.api.Speciation;
  * to a table version to {@link #PINNED}, the rest to {@link #CHANGED}. A structure without a pH cannot change
  * its charge state and is only counted.
  */
-final class ImpactFn extends DoFn<Structure, String> {
+final class ImpactFn extends DoFn<Chunk, String> {
     private static final long serialVersionUID = 1L;
     static final TupleTag<String> CHANGED = new TupleTag<>() {
         private static final long serialVersionUID = 1L;
@@ -50,7 +50,13 @@ final class ImpactFn extends DoFn<Structure, String> {
     }
 
     @ProcessElement
-    public void process(@Element Structure s, MultiOutputReceiver out) {
+    public void process(@Element Chunk chunk, MultiOutputReceiver out) {
+        for (Structure s : chunk.structures()) {
+            compare(s, out);
+        }
+    }
+
+    private void compare(Structure s, MultiOutputReceiver out) {
         if (s.phs().isEmpty()) {
             noPh.inc();
             return;

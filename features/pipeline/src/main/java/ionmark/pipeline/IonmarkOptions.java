@@ -57,6 +57,12 @@ public interface IonmarkOptions extends PipelineOptions {
 
     void setShards(int v);
 
+    @Description("Keys the structures are spread over; 0: four per thread on the direct runner, random keys elsewhere")
+    @Default.Integer(0)
+    int getBuckets();
+
+    void setBuckets(int v);
+
     @Description("Impact job: the table before the change (file or 'shipped')")
     @Default.String("")
     String getBefore();

@@ -47,13 +47,28 @@ public final class Jobs {
         out.get(ImpactFn.PINNED).apply("WritePinned", write(o, "impact-pinned"));
     }
 
-    private static PCollection<Structure> structures(Pipeline p, IonmarkOptions o) {
+    private static PCollection<Chunk> structures(Pipeline p, IonmarkOptions o) {
         return p.apply("Patterns", Create.of(patterns(o.getIn())))
                 .apply("Match", FileIO.matchAll())
                 .apply("Open", FileIO.readMatches())
                 .apply("Read", ParDo.of(new ReadFiles(phs(o.getPh()))))
-                // one file holds many structures: spread them over the workers
-                .apply("Spread", Reshuffle.viaRandomKey());
+                // one file holds many structures: spread its chunks over the workers
+                .apply("Spread", Reshuffle.<Chunk>viaRandomKey().withNumBuckets(buckets(o)));
+    }
+
+    /**
+     * The direct runner keeps a grouped key's values in memory and copies them for every bundle, and the write
+     * groups records per bundle of the spread: a few buckets per thread keep that small. Other runners spread
+     * over random keys (null).
+     */
+    static Integer buckets(IonmarkOptions o) {
+        if (o.getBuckets() > 0) {
+            return o.getBuckets();
+        }
+        if (!o.getRunner().getSimpleName().equals("DirectRunner")) {
+            return null;
+        }
+        return 4 * Math.max(1, o.as(org.apache.beam.runners.direct.DirectOptions.class).getTargetParallelism());
     }
 
     private static TextIO.Write write(IonmarkOptions o, String prefix) {

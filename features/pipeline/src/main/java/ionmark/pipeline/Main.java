@@ -48,6 +48,8 @@ public final class Main {
             o.as(DirectOptions.class).setEnforceImmutability(false);
             o.as(DirectOptions.class).setEnforceEncodability(false);
         }
+        // run() returns at once, so that the progress line can be printed while the direct runner works
+        o.as(DirectOptions.class).setBlockOnRun(false);
         Pipeline p = Pipeline.create(o);
         try {
             if (job.equals("impact")) {

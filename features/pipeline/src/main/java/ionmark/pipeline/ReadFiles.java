@@ -15,7 +15,7 @@ import ionmark.console.internal.Records;
  * {@link MarkdownStructureReader}, everything else by {@code batch}'s own rules ({@link Records}), so
  * ids and reading errors are the same. A file that cannot be read becomes one record with the error.
  */
-final class ReadFiles extends DoFn<FileIO.ReadableFile, Structure> {
+final class ReadFiles extends DoFn<FileIO.ReadableFile, Chunk> {
     private static final long serialVersionUID = 1L;
     static final String NS = "ionmark";
     private final Counter files = Metrics.counter(NS, "files");
@@ -29,15 +29,24 @@ final class ReadFiles extends DoFn<FileIO.ReadableFile, Structure> {
     }
 
     @ProcessElement
-    public void process(@Element FileIO.ReadableFile file, OutputReceiver<Structure> out) {
+    public void process(@Element FileIO.ReadableFile file, OutputReceiver<Chunk> receiver) {
         long t0 = System.nanoTime();
         String name = file.getMetadata().resourceId().toString();
         files.inc();
+        List<Structure> chunk = new java.util.ArrayList<>();
+        java.util.function.Consumer<Structure> out = x -> {
+            chunk.add(x);
+            if (chunk.size() == Chunk.SIZE) {
+                receiver.output(new Chunk(chunk));
+                chunk.clear();
+            }
+        };
         String text;
         try {
             text = file.readFullyAsUTF8String();
         } catch (Exception e) {
-            out.output(new Structure(name, name, "", "cannot read " + name + ": " + e.getMessage(), phs, 0));
+            receiver.output(new Chunk(List.of(new Structure(name, name, "", "cannot read " + name + ": "
+                    + e.getMessage(), phs, 0))));
             return;
         }
         int n = 0;
@@ -45,15 +54,18 @@ final class ReadFiles extends DoFn<FileIO.ReadableFile, Structure> {
             String entry = file.getMetadata().resourceId().getFilename().replaceFirst("\\.md$", "");
             MarkdownStructureReader.Entry e = MarkdownStructureReader.read(text);
             for (MarkdownStructureReader.Block b : e.blocks()) {
-                out.output(new Structure(name, entry + "#" + b.number(), b.text(), null,
+                out.accept(new Structure(name, entry + "#" + b.number(), b.text(), null,
                         b.ph() != null ? List.of(b.ph()) : phs, e.pinnedVersion()));
                 n++;
             }
         } else {
             for (Records.Item it : Records.parse(text)) {
-                out.output(new Structure(name, it.id(), it.structure(), it.error(), phs, 0));
+                out.accept(new Structure(name, it.id(), it.structure(), it.error(), phs, 0));
                 n++;
             }
+        }
+        if (!chunk.isEmpty()) {
+            receiver.output(new Chunk(chunk));
         }
         structures.inc(n);
         readMicros.update((System.nanoTime() - t0) / 1000);
