@@ -970,6 +970,8 @@ public final class Engine {
             try {
                 IAtomContainer copy = mol.clone();
                 int z = permanent;
+                List<Integer> cations = new ArrayList<>();
+                List<Integer> anions = new ArrayList<>();
                 for (int i = 0; i < titr.size(); i++) {
                     IAtom a = copy.getAtom(titr.get(i).site().atom());
                     boolean base = titr.get(i).site().group().type() == SiteType.BASE;
@@ -977,11 +979,13 @@ public final class Engine {
                     int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
                     int q = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
                     if (base && !dep) {
+                        cations.add(titr.get(i).site().atom());
                         a.setImplicitHydrogenCount(h + 1);
                         a.setFormalCharge(q + 1);
                         z++;
                     } else if (!base && dep) {
                         if (h > 0) {
+                            anions.add(titr.get(i).site().atom());
                             a.setImplicitHydrogenCount(h - 1);
                         } else {
                             IAtom o = copy.getBuilder().newInstance(IAtom.class, "O");
@@ -993,6 +997,7 @@ public final class Engine {
                         z--;
                     }
                 }
+                SpeciesForms.cancelRingPairs(copy, cations, anions); // [nH+]...[n-] in one ring is the neutral form
                 String key = Overrides.canonical(copy);
                 int at = -1;
                 for (int j = 0; j < out.size(); j++) {

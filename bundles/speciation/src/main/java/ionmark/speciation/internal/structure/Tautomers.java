@@ -501,38 +501,56 @@ public final class Tautomers {
         long[] inv = invariants();
         rings();
         Integer[] order = Arrays.stream(atoms).boxed().toArray(Integer[]::new);
-        Arrays.sort(order, (a, b) -> Long.compare(inv[a], inv[b]));
+        Arrays.sort(order, (x, y) -> Long.compare(inv[x], inv[y]));
+        int[][] tryOrder = new int[n][];
+        for (int i : atoms) {
+            final int u = i;
+            tryOrder[i] = java.util.stream.IntStream.range(0, nbr[i].length).boxed().sorted((x, y) -> {
+                int rx = (ringMask[u] & ringMask[nbr[u][x]]) != 0 ? 0 : 1;
+                int ry = (ringMask[u] & ringMask[nbr[u][y]]) != 0 ? 0 : 1;
+                return rx != ry ? Integer.compare(rx, ry) : Long.compare(inv[nbr[u][x]], inv[nbr[u][y]]);
+            }).mapToInt(Integer::intValue).toArray();
+        }
         boolean[] used = new boolean[mol.getBondCount()];
         int[] steps = {0};
-        return match(order, need, used, steps) ? used : null;
+        return match(order, tryOrder, need, used, steps) ? used : null;
     }
 
-    private boolean match(Integer[] order, int[] need, boolean[] used, int[] steps) {
+    /** Bonds atom u could still make double: partner needs one, bond free, not triple. */
+    private int open(int u, int[] need, boolean[] used) {
+        int open = 0;
+        for (int k = 0; k < nbr[u].length; k++) {
+            if (need[nbr[u][k]] > 0 && !used[mol.indexOf(nbrBond[u][k])]
+                    && nbrBond[u][k].getOrder() != IBond.Order.TRIPLE) {
+                open++;
+            }
+        }
+        return open;
+    }
+
+    private boolean match(Integer[] order, int[][] tryOrder, int[] need, boolean[] used, int[] steps) {
         if (++steps[0] > MAX_STEPS) {
             return false;
         }
+        // the most constrained atom first (fewest free bonds for what it needs); a dead end fails at once
         int u = -1;
+        int slack = Integer.MAX_VALUE;
         for (int i : order) {
             if (need[i] > 0) {
-                u = i;
-                break;
+                int s = open(i, need, used) - need[i];
+                if (s < 0) {
+                    return false;
+                }
+                if (s < slack) {
+                    slack = s;
+                    u = i;
+                }
             }
         }
         if (u < 0) {
             return true;
         }
-        long[] inv = invariant;
-        Integer[] ks = new Integer[nbr[u].length];
-        for (int k = 0; k < ks.length; k++) {
-            ks[k] = k;
-        }
-        final int uu = u;
-        Arrays.sort(ks, (a, b) -> {
-            int ra = (ringMask[uu] & ringMask[nbr[uu][a]]) != 0 ? 0 : 1;
-            int rb = (ringMask[uu] & ringMask[nbr[uu][b]]) != 0 ? 0 : 1;
-            return ra != rb ? Integer.compare(ra, rb) : Long.compare(inv[nbr[uu][a]], inv[nbr[uu][b]]);
-        });
-        for (int k : ks) {
+        for (int k : tryOrder[u]) {
             int v = nbr[u][k];
             int bi = mol.indexOf(nbrBond[u][k]);
             if (need[v] <= 0 || used[bi] || nbrBond[u][k].getOrder() == IBond.Order.TRIPLE) {
@@ -541,7 +559,7 @@ public final class Tautomers {
             used[bi] = true;
             need[u]--;
             need[v]--;
-            if (match(order, need, used, steps)) {
+            if (match(order, tryOrder, need, used, steps)) {
                 return true;
             }
             used[bi] = false;
