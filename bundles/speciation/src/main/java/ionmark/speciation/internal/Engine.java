@@ -169,7 +169,7 @@ public final class Engine {
         RootedPattern.Target target = new RootedPattern.Target(reader.read(input).molecule());
         List<EstimatedSite> est = LferEstimator.estimate(table, target.molecule(), target,
                 SitePerceiver.perceive(table, target));
-        double[][] inter = interactions(distances(target.adjacency(), est), est);
+        double[][] inter = interactions(distances(target, est), est);
         est = heldPairs(target, est, inter, new java.util.HashSet<>());
         return MacroConstants.of(MacroConstants.polynomial(model(inter, est, Conditions.noPh()),
                 table.table().interaction().cutoff()));
