@@ -59,12 +59,13 @@ public final class TableSnapshotService implements TableService {
         }
         if (!file.isEmpty()) {
             Path path = Path.of(file);
-            if (config.pollSeconds() < 1) {
-                throw new IllegalArgumentException("pollSeconds must be at least 1, not " + config.pollSeconds());
+            // without a configuration (the command line's lean path) the file is read once and polled every 2 s
+            int poll = config == null ? 2 : config.pollSeconds();
+            if (poll < 1) {
+                throw new IllegalArgumentException("pollSeconds must be at least 1, not " + poll);
             }
             reloadFrom(path);
-            worker.scheduleWithFixedDelay(() -> reloadFrom(path), config.pollSeconds(), config.pollSeconds(),
-                    TimeUnit.SECONDS);
+            worker.scheduleWithFixedDelay(() -> reloadFrom(path), poll, poll, TimeUnit.SECONDS);
         }
     }
 

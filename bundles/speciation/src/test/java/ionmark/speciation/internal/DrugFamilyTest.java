@@ -28,15 +28,17 @@ class DrugFamilyTest {
     void aCyanoguanidineIsNotBasicInEitherDrawing() {
         for (String cimetidine : new String[] {"CNC(=NC#N)NCCSCc1nc[nH]c1C", "CN=C(NC#N)NCCSCc1nc[nH]c1C"}) {
             Analysis a = at(cimetidine, 7.4);
-            // only the imidazole titrates between 2 and 12, so the compound is mostly neutral at pH 7.4
+            // only the imidazole titrates between 2 and 12, so the compound is mostly neutral at pH 7.4 (at 6.8 the
+            // charge is +0.20; the bound leaves the imidazole class its sd, a basic cyanoguanidine would give +1)
             assertEquals(1, a.macroPka().stream().filter(p -> p > 2 && p < 12).count(), a.macroPka().toString());
-            assertTrue(a.netCharge() < 0.3, cimetidine + ": net charge " + a.netCharge());
+            assertTrue(a.netCharge() < 0.5, cimetidine + ": net charge " + a.netCharge());
         }
     }
 
     @Test
     void aSulfonylguanidineIsNotBasic() {
-        // sulfaguanidine: the only constant above 2 would be the guanidine, which the sulfonyl group suppresses
+        // sulfaguanidine: the only constant above 4 would be the guanidine, which the sulfonyl group suppresses; the
+        // aniline sits near 2 with its para sulfamoyl group, also in the sulfonyl-imine form the reader draws
         Analysis a = at("NC(=N)NS(=O)(=O)c1ccc(N)cc1", 7.4);
         assertTrue(a.macroPka().stream().noneMatch(p -> p > 4 && p < 14), a.macroPka().toString());
     }
