@@ -3,8 +3,6 @@ package ionmark.pipeline;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.io.InputStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -21,7 +19,8 @@ import ionmark.speciation.api.Conditions;
 
 /**
  * The impact job against a table whose aliphatic carboxylic-acid class moves two units up: lauric acid (no
- * measured value in the table, so it follows the class) at pH 5 goes from mostly anion to mostly neutral and is
+ * measured value of its own; its measured analogs pull part of the move back) at pH 5 goes from mostly anion to
+ * mostly neutral and is
  * reported with the changed derivation lines; acetic acid keeps its measured 4.76 (CRC, from memory), and ethanol
  * and pyridine have no such site; a pinned entry is reported apart.
  */
@@ -45,8 +44,11 @@ class ImpactJobTest {
         JsonNode lauric = got.get("lauric-acid");
         assertEquals(-1, lauric.path("before").path("dominantCharge").asInt());
         assertEquals(0, lauric.path("after").path("dominantCharge").asInt());
-        assertTrue(lauric.path("deltaFractionNeutral").asDouble() > 0.5, lauric.toString());
-        assertTrue(lauric.path("derivationChanges").toString().contains("+ pKa 6."), lauric.toString());
+        assertTrue(lauric.path("deltaFractionNeutral").asDouble() > 0.3, lauric.toString());
+        double before = lauric.path("before").path("macroPka").get(0).asDouble();
+        double after = lauric.path("after").path("macroPka").get(0).asDouble();
+        assertTrue(after > before + 0.5, lauric.toString());
+        assertTrue(lauric.path("derivationChanges").toString().contains("+ pKa "), lauric.toString());
         Map<String, JsonNode> pinned = byId(Fixtures.pipeline(out, "impact-pinned", "impact", "--in=" + entries,
                 "--out=" + out, "--before=shipped", "--after=" + changed));
         assertEquals(java.util.Set.of("pinned#1"), pinned.keySet());
@@ -65,11 +67,7 @@ class ImpactJobTest {
     private Path changedTable(String smiles, double shift) throws Exception {
         String group = Engines.get(EngineSpec.of("shipped", 300, 60_000)).analyse(smiles, Conditions.atPh(5)).sites()
                 .get(0).group();
-        String json;
-        try (InputStream in = TableSnapshotService.class.getResourceAsStream(
-                "/ionmark/acidity/internal/default-table.json")) {
-            json = new String(in.readAllBytes(), StandardCharsets.UTF_8);
-        }
+        String json = new TableSnapshotService(null).toJson(TableSnapshotService.shipped());
         JsonNode root = Fixtures.JSON.readTree(json);
         for (JsonNode g : root.path("groups")) {
             if (g.path("id").asText().equals(group)) {
