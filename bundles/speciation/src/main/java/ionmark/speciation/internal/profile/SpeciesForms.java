@@ -1,4 +1,4 @@
-package ionmark.speciation.internal;
+package ionmark.speciation.internal.profile;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -16,7 +16,7 @@ import ionmark.speciation.internal.structure.Tautomers;
  * tautomer, so that the microstate merges with the uncharged species instead of being listed as a
  * second, charged-looking one.
  */
-final class SpeciesForms {
+public final class SpeciesForms {
     private SpeciesForms() {
     }
 
@@ -24,7 +24,7 @@ final class SpeciesForms {
      * Cancels each cation/anion pair of {@code copy} (hydrogens suppressed, Kekulé bonds) whose two atoms share
      * a ring, then takes the result to the reference tautomer; returns how many pairs were cancelled.
      */
-    static int cancelRingPairs(IAtomContainer copy, List<Integer> cations, List<Integer> anions) {
+    public static int cancelRingPairs(IAtomContainer copy, List<Integer> cations, List<Integer> anions) {
         int cancelled = 0;
         List<Integer> free = new ArrayList<>(anions);
         for (int c : cations) {

@@ -1,4 +1,4 @@
-package ionmark.speciation.internal;
+package ionmark.speciation.internal.microstates;
 
 import java.util.List;
 import java.util.Locale;
@@ -9,7 +9,7 @@ import ionmark.speciation.api.Conditions;
  * Temperature (van 't Hoff with each class's ionization enthalpy; water's ion product) and ionic
  * strength (Davies equation) corrections of a site pKa.
  */
-final class Conditioning {
+public final class Conditioning {
     static final double R = 8.314462618;
     static final double LN10 = Math.log(10);
     static final double T0 = 298.15;
@@ -18,7 +18,7 @@ final class Conditioning {
     }
 
     /** ΔpKa on going from 25 °C to t °C for an ionization enthalpy in kJ/mol (van 't Hoff). */
-    static double temperatureShift(double enthalpyKj, double tCelsius) {
+    public static double temperatureShift(double enthalpyKj, double tCelsius) {
         if (Double.isNaN(enthalpyKj)) {
             return 0;
         }
@@ -56,11 +56,11 @@ final class Conditioning {
     }
 
     /** k of the Davies term: log γ(z) = −k·z² (0 at I = 0). */
-    static double davies(double ionicStrength, double tCelsius) {
+    public static double davies(double ionicStrength, double tCelsius) {
         return ionicStrength <= 0 ? 0 : -logGamma(1, ionicStrength, tCelsius);
     }
 
-    static void describe(Conditions c, List<String> out, List<String> warnings) {
+    public static void describe(Conditions c, List<String> out, List<String> warnings) {
         if (c.temperature() != Conditions.STANDARD_TEMPERATURE) {
             out.add(String.format(Locale.ROOT,
                     "temperature %.1f °C: each site pKa moved by van 't Hoff with its class ionization enthalpy; "
