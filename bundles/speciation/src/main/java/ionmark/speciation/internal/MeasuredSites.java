@@ -12,6 +12,7 @@ import ionmark.speciation.internal.estimate.AnalogSettings;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.estimate.SiteEnvironment;
+import ionmark.speciation.internal.microstates.Problem;
 import ionmark.speciation.internal.sites.RootedPattern;
 import ionmark.speciation.internal.structure.StructureException;
 
@@ -34,7 +35,7 @@ final class MeasuredSites {
         List<SiteAnalogIndex.MeasuredSite> out = new ArrayList<>();
         for (MeasuredCompound m : measured) {
             try {
-                Engine.Problem p = engine.prepare(m.smiles(), Conditions.noPh());
+                Problem p = engine.prepare(m.smiles(), Conditions.noPh());
                 if (p.measured().isEmpty() || !p.measured().get().id().equals(m.id())) {
                     continue; // a duplicate structure: the first record of it is the one that counts
                 }
@@ -44,7 +45,7 @@ final class MeasuredSites {
                     continue;
                 }
                 List<Double> model = engine.modelConstants(m.smiles()).stream()
-                        .filter(v -> v >= Engine.MACRO_LOW && v <= Engine.MACRO_HIGH).sorted().toList();
+                        .filter(v -> v >= AnalysisBuilder.MACRO_LOW && v <= AnalysisBuilder.MACRO_HIGH).sorted().toList();
                 RootedPattern.Target target = new RootedPattern.Target(p.prepared().molecule());
                 for (int[] pair : MacroPairing.assign(m.pka(), model)) {
                     EstimatedSite s = fitted.get(pair[0]);

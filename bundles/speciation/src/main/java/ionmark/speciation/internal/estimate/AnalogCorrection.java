@@ -89,7 +89,7 @@ public final class AnalogCorrection {
         return s.terms().stream().anyMatch(t -> t.label().startsWith(PAIR_RULE));
     }
 
-    /** How {@code Engine.heldPairs} starts the derivation line of a pair rule. */
+    /** How {@link PairRules} starts the derivation line of a pair rule. */
     static final String PAIR_RULE = "pair rule ";
 
     private static Term term(Used u, double part, double denom, AnalogSettings cfg) {

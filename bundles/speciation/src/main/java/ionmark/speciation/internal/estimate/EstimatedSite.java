@@ -20,4 +20,17 @@ public record EstimatedSite(PerceivedSite site, double pka, double sd, List<Term
         t.add(why);
         return new EstimatedSite(site, pka + delta, newSd, t, newBasis);
     }
+
+    /**
+     * Position of {@code s} itself in {@code l}. Records compare by value, which walks every derivation
+     * term; the same object is what is meant here.
+     */
+    public static int indexOf(List<EstimatedSite> l, EstimatedSite s) {
+        for (int i = 0; i < l.size(); i++) {
+            if (l.get(i) == s) {
+                return i;
+            }
+        }
+        return -1;
+    }
 }
