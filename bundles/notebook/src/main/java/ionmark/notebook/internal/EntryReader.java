@@ -36,7 +36,7 @@ final class EntryReader {
     }
 
     AnnotatedEntry read(Entry entry, List<String> entryWarnings) {
-        ConditionScope scope = new ConditionScope(entry);
+        ConditionScope scope = new ConditionScope(entry, new SolutionPh(speciation));
         List<AnnotatedStructure> out = new ArrayList<>();
         for (Found f : structures(entry)) {
             out.add(annotate(entry, scope, f));
