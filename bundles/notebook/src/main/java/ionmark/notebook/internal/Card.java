@@ -62,7 +62,7 @@ record Card(AnnotatedStructure s) {
         if (!warnings.isEmpty()) {
             sb.append("<ul class=\"im-warn\">");
             for (String w : warnings) {
-                sb.append("<li>").append(Html.esc(AtomNumbers.solverText(w))).append("</li>");
+                sb.append("<li>").append(Html.esc(w)).append("</li>");
             }
             sb.append("</ul>");
         }
@@ -132,7 +132,7 @@ record Card(AnnotatedStructure s) {
                     .append(AtomNumbers.shown(s.atom())).append("</td><td><details><summary>")
                     .append(Html.esc(s.groupName())).append("</summary><ol>");
             for (Term t : s.derivation()) {
-                sb.append("<li>").append(signed(t.value())).append(' ').append(Html.esc(AtomNumbers.solverText(t.label())))
+                sb.append("<li>").append(signed(t.value())).append(' ').append(Html.esc(t.label()))
                         .append(" <cite>").append(Html.esc(t.source())).append("</cite></li>");
             }
             sb.append("</ol></details></td><td class=\"").append(acid ? "im-acid\">■ acid" : "im-base\">● base")

@@ -176,7 +176,7 @@ final class EntryReader {
         }
         if (!analyses.get(0).ok()) {
             return new AnnotatedStructure(f.block(), f.words(), f.source(), f.structure(), used, analyses, null, List.of(),
-                    AtomNumbers.text(analyses.get(0).error()));
+                    analyses.get(0).error());
         }
         Curve curve;
         try {

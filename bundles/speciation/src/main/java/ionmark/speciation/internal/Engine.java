@@ -603,9 +603,9 @@ public final class Engine {
         double d = base ? rule.singly() : -rule.singly();
         String label = String.format(Locale.ROOT, "pair rule with the %s site on atom %d (%s): singly %s form held "
                 + "by %.2f, doubly %s form dearer by %.2f; the pair's interaction grows by %.2f",
-                partner.site().group().id(), partner.site().atom(), rule.name(), base ? "protonated" : "deprotonated",
+                partner.site().group().id(), AtomText.shown(partner.site().atom()), rule.name(), base ? "protonated" : "deprotonated",
                 rule.singly(), base ? "protonated" : "deprotonated", rule.doubly(), rule.interaction());
-        return s.shifted(d, new Term(label, d, table.table().citation(rule.source())), s.basis(), s.sd());
+        return s.shifted(d, new Term(label, d, table.table().citation(rule.source()), List.of(partner.site().atom())), s.basis(), s.sd());
     }
 
     /**
@@ -626,9 +626,9 @@ public final class Engine {
             EstimatedSite other = titr.get(j);
             terms.add(new Term(String.format(Locale.ROOT, "coupling with the %s site on atom %d: %.2f pKa units while "
                     + "both are charged (distance rule at %s, × both reach factors, with any pair rule); applied in "
-                    + "the microstate model, not in this value", other.site().group().id(), other.site().atom(), w,
+                    + "the microstate model, not in this value", other.site().group().id(), AtomText.shown(other.site().atom()), w,
                     SitePaths.describe(paths[i][j])), 0.0,
-                    source + reachSources(titr.get(i).site().group(), other.site().group())));
+                    source + reachSources(titr.get(i).site().group(), other.site().group()), List.of(other.site().atom())));
         }
         double phi = model.background()[i] + 2 * davies * q0;
         if (Math.abs(phi) >= cutoff) {
@@ -696,8 +696,7 @@ public final class Engine {
             warnings.add("mixture or salt: analysed the parent, stripped " + String.join(", ", p.prepared().stripped()));
         }
         for (int atom : p.uncovered()) {
-            warnings.add("atom " + atom + " (" + mol.getAtom(atom).getSymbol() + "-H) looks ionizable but is outside "
-                    + "the table: not estimated");
+            warnings.add(AtomText.uncovered(atom, mol.getAtom(atom).getSymbol()));
         }
         if (p.measured().isEmpty() && !titr.isEmpty()) {
             warnings.add("pKa values are estimated, not measured");
@@ -792,7 +791,7 @@ public final class Engine {
                 ph -> meanCharge(p, ph));
         return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
                 uncharged, chargeStates, species, pI, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
-                null);
+                null, p.uncovered());
     }
 
     public Curve curve(String input, Conditions c, double from, double to, double step) throws StructureException {
