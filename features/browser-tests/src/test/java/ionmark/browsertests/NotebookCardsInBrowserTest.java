@@ -104,9 +104,10 @@ class NotebookCardsInBrowserTest {
     void theWorkupEntryAnswersWhereEachStructureGoes() throws IOException {
         browser.get(base + "/entry/07-coupling-workup");
         // right after start the page may say that annotations are loading and reload itself
-        new WebDriverWait(browser, Duration.ofSeconds(60)).until(d -> d.findElements(By.cssSelector(".im-card")).size() >= 7);
+        new WebDriverWait(browser, Duration.ofSeconds(60)).until(d -> d.findElements(By.cssSelector(".im-card")).size() >= 8);
         List<WebElement> cards = browser.findElements(By.cssSelector(".im-card"));
-        assertEquals(7, cards.size(), "three reaction components, three work-up structures, one molfile");
+        assertEquals(8, cards.size(), "three reaction components, three work-up structures, one molfile, one name "
+                + "(the compounds that are also drawn get no card from their names)");
         String all = browser.findElement(By.tagName("main")).getText();
         // benzylamine (pKa 9.34, CRC) in the 1 M HCl wash: charged, stays in the aqueous layer
         String amine = cards.get(3).getText();
@@ -125,6 +126,10 @@ class NotebookCardsInBrowserTest {
         assertTrue(molfile.contains("■ acid") && molfile.contains("● base"), molfile);
         assertTrue(java.util.regex.Pattern.compile("\\bO1\\b").matcher(molfile).find(), "the carboxyl OH is atom 1 of the molfile: " + molfile);
         assertTrue(molfile.contains("N10"), "the amine N is atom 10 of the molfile: " + molfile);
+        // the second standard is named only: its structure is read from the name and the card says so
+        String named = cards.get(7).getText();
+        assertTrue(named.toLowerCase(java.util.Locale.ROOT).contains("structure from the name") && named.contains("4-(aminomethyl)benzoic acid"), named);
+        assertTrue(named.contains("Structure read from the chemical name"), named);
         fullShot("workup-entry-1400", 1400);
         fullShot("workup-entry-narrow", 600);
     }

@@ -25,7 +25,7 @@ final class TextReport {
         sb.append(String.format(Locale.ROOT, "%-5s %-4s %-30s %-5s %7s %6s %12s%n", "atom", "el", "group", "type", "pKa",
                 "±sd", "protonated"));
         for (Site s : a.sites()) {
-            sb.append(String.format(Locale.ROOT, "%-5d %-4s %-30s %-5s %7s %6s %12s%n", s.atom(), s.element(),
+            sb.append(String.format(Locale.ROOT, "%-5d %-4s %-30s %-5s %7s %6s %12s%n", s.atom() + 1, s.element(),
                     s.group(), s.type(), s.permanent() ? "fixed" : String.format(Locale.ROOT, "%.2f", s.pka()),
                     s.permanent() ? "" : String.format(Locale.ROOT, "%.2f", s.sd()),
                     s.protonated() == null ? "-" : String.format(Locale.ROOT, "%.1f %%", 100 * s.protonated())));

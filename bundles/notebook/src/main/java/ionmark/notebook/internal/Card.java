@@ -23,6 +23,10 @@ record Card(AnnotatedStructure s) {
         StringBuilder sb = new StringBuilder("<section class=\"im-card\" tabindex=\"0\">");
         sb.append("<header class=\"im-cardhead\"><span class=\"im-src\">").append(Html.esc(sourceName()))
                 .append("</span> <q class=\"im-words\">").append(Html.esc(abbreviate(s.words()))).append("</q></header>");
+        if (s.source().equals("name") && s.error() == null) {
+            sb.append("<p class=\"im-fromname\">Structure read from the chemical name (by OPSIN): <code>")
+                    .append(Html.esc(s.structure())).append("</code>. Check that it is the compound you meant.</p>");
+        }
         sb.append(conditions(s.conditions()));
         if (!s.ok()) {
             String error = s.error() != null ? s.error() : s.analyses().get(0).error();
@@ -58,7 +62,7 @@ record Card(AnnotatedStructure s) {
         if (!warnings.isEmpty()) {
             sb.append("<ul class=\"im-warn\">");
             for (String w : warnings) {
-                sb.append("<li>").append(Html.esc(AtomNumbers.solverText(w))).append("</li>");
+                sb.append("<li>").append(Html.esc(w)).append("</li>");
             }
             sb.append("</ul>");
         }
@@ -71,7 +75,7 @@ record Card(AnnotatedStructure s) {
         return switch (s.source()) {
             case "molfile" -> "molfile";
             case "reaction" -> "reaction component";
-            case "name" -> "name";
+            case "name" -> "structure from the name";
             default -> "SMILES";
         };
     }
@@ -128,7 +132,7 @@ record Card(AnnotatedStructure s) {
                     .append(AtomNumbers.shown(s.atom())).append("</td><td><details><summary>")
                     .append(Html.esc(s.groupName())).append("</summary><ol>");
             for (Term t : s.derivation()) {
-                sb.append("<li>").append(signed(t.value())).append(' ').append(Html.esc(AtomNumbers.solverText(t.label())))
+                sb.append("<li>").append(signed(t.value())).append(' ').append(Html.esc(t.label()))
                         .append(" <cite>").append(Html.esc(t.source())).append("</cite></li>");
             }
             sb.append("</ol></details></td><td class=\"").append(acid ? "im-acid\">■ acid" : "im-base\">● base")

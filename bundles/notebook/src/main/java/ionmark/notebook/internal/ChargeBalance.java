@@ -1,20 +1,19 @@
 package ionmark.notebook.internal;
 
 import java.util.List;
+import java.util.function.DoubleUnaryOperator;
 
 /**
- * The pH of a solution of known composition from its charge balance: strong ions plus weak acid systems
- * with their pKa values, ideal solution (activities taken as concentrations), 25 °C, pKw 14.00.
- * Solved by bisection: the net charge falls monotonically as the pH rises.
+ * The pH of a solution of known composition from its charge balance: strong ions plus weak acid systems, each
+ * given by its mean charge as a function of pH; ideal solution (activities taken as concentrations), 25 °C,
+ * pKw 14.00 (the usual 25 °C value, common practice). Solved by bisection to 0.002 pH units: the net charge falls
+ * monotonically as the pH rises.
  */
 final class ChargeBalance {
     static final double PKW = 14.0;
 
-    /**
-     * A weak acid system: total concentration (M), pKa values ascending, and the charge of its most
-     * protonated form (0 for acetic acid, +1 for ammonium).
-     */
-    record Weak(double molar, double[] pka, int topCharge) {
+    /** A weak acid system: total concentration (M) and its mean charge at a pH. */
+    record Weak(double molar, DoubleUnaryOperator meanCharge) {
     }
 
     private ChargeBalance() {
@@ -26,7 +25,7 @@ final class ChargeBalance {
     static double ph(double strongNet, List<Weak> weak) {
         double lo = -2;
         double hi = 16;
-        for (int i = 0; i < 200; i++) {
+        while (hi - lo > 0.002) { // 14 steps: each may be a call to the solver
             double mid = (lo + hi) / 2;
             if (net(mid, strongNet, weak) > 0) {
                 lo = mid;
@@ -38,15 +37,17 @@ final class ChargeBalance {
     }
 
     static double net(double ph, double strongNet, List<Weak> weak) {
-        double h = Math.pow(10, -ph);
-        double sum = h - Math.pow(10, ph - PKW) + strongNet;
+        double sum = Math.pow(10, -ph) - Math.pow(10, ph - PKW) + strongNet;
         for (Weak w : weak) {
-            sum += w.molar() * meanCharge(ph, w.pka(), w.topCharge());
+            sum += w.molar() * w.meanCharge().applyAsDouble(ph);
         }
         return sum;
     }
 
-    /** Mean charge of one weak system at a pH: topCharge minus the mean number of protons lost. */
+    /**
+     * Mean charge of one weak system from its macroscopic constants: topCharge minus the mean number of protons
+     * lost. Used only for a reagent the table does not hold, with the constants' source named.
+     */
     static double meanCharge(double ph, double[] pka, int topCharge) {
         int n = pka.length;
         double[] logw = new double[n + 1];

@@ -44,7 +44,7 @@ final class ConditionScope {
     final List<Stated<StatedConditions.Value>> flagged = new ArrayList<>();
     private final List<Block> blocks;
 
-    ConditionScope(Entry entry) {
+    ConditionScope(Entry entry, SolutionPh solutions) {
         this.blocks = entry.blocks();
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
@@ -55,7 +55,7 @@ final class ConditionScope {
             int k = i;
             StatedConditions.ph(t).forEach(p -> phs.add(new Stated<>(place(k, p.start()), new PhFound(p.low(), p.high(),
                     p.words(), false, null, p.note()))));
-            ReagentSolutions.find(t).forEach(p -> phs.add(new Stated<>(place(k, p.start()), new PhFound(p.ph(), p.ph(),
+            ReagentSolutions.find(t, solutions).forEach(p -> phs.add(new Stated<>(place(k, p.start()), new PhFound(p.ph(), p.ph(),
                     p.words(), true, p.how(), null))));
             StatedConditions.temperature(t).forEach(p -> temps.add(new Stated<>(place(k, p.start()), p)));
             StatedConditions.ionicStrength(t).forEach(p -> ionic.add(new Stated<>(place(k, p.start()), p)));

@@ -23,7 +23,10 @@ import ionmark.speciation.api.Speciation;
  */
 final class EntryReader {
     /** A structure found in the entry, before analysis. */
-    record Found(int block, int start, String words, String source, String structure) {
+    record Found(int block, int start, String words, String source, String structure, String error) {
+        Found(int block, int start, String words, String source, String structure) {
+            this(block, start, words, source, structure, null);
+        }
     }
 
     private final Speciation speciation;
@@ -33,7 +36,7 @@ final class EntryReader {
     }
 
     AnnotatedEntry read(Entry entry, List<String> entryWarnings) {
-        ConditionScope scope = new ConditionScope(entry);
+        ConditionScope scope = new ConditionScope(entry, new SolutionPh(speciation));
         List<AnnotatedStructure> out = new ArrayList<>();
         for (Found f : structures(entry)) {
             out.add(annotate(entry, scope, f));
@@ -55,12 +58,17 @@ final class EntryReader {
 
     List<Found> structures(Entry entry) {
         List<Found> out = new ArrayList<>();
+        List<Found> names = new ArrayList<>();
         List<Block> blocks = entry.blocks();
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
             if (b.kind() == Block.Kind.TEXT) {
                 for (InlineStructures.Token t : InlineStructures.tokens(b.content())) {
                     out.add(new Found(i, t.start(), t.smiles(), t.reaction() ? "reaction" : "smiles", t.smiles()));
+                }
+                for (ChemicalNames.Name n : ChemicalNames.find(b.content())) {
+                    names.add(n.ok() ? new Found(i, n.start(), n.words(), "name", n.smiles())
+                            : new Found(i, n.start(), n.words(), "name", n.words(), n.error()));
                 }
             } else if (b.kind() == Block.Kind.STRUCTURE && !b.content().isBlank()) {
                 String c = b.content();
@@ -81,6 +89,8 @@ final class EntryReader {
                 }
             }
         }
+        out.addAll(NamedOnce.filter(names, out, blocks));
+        out.sort(java.util.Comparator.comparingInt(Found::block).thenComparingInt(Found::start));
         return out;
     }
 
@@ -89,6 +99,10 @@ final class EntryReader {
     }
 
     private AnnotatedStructure annotate(Entry entry, ConditionScope scope, Found f) {
+        if (f.error() != null) {
+            return failed(f, new ConditionsUsed(null, null, null, false, Conditions.STANDARD_TEMPERATURE, null, 0, null,
+                    List.of()), f.error());
+        }
         Block b = entry.blocks().get(f.block());
         ConditionScope.Place at = scope.place(f.block(), f.start());
         List<String> notes = new ArrayList<>();
@@ -162,7 +176,7 @@ final class EntryReader {
         }
         if (!analyses.get(0).ok()) {
             return new AnnotatedStructure(f.block(), f.words(), f.source(), f.structure(), used, analyses, null, List.of(),
-                    AtomNumbers.text(analyses.get(0).error()));
+                    analyses.get(0).error());
         }
         Curve curve;
         try {

@@ -103,4 +103,14 @@ class CardTest {
         String html = new QuickCheckPanel(SPECIATION).html(java.util.Map.of("structure", "CCN", "ph", "22"), USER);
         assertTrue(html.contains("pH must be"), html);
     }
+
+    @Test
+    void theSolversWordsCountAtomsFromOneWithoutRewriting() {
+        // boric acid OB(O)O: the first O-H is atom 1; cysteamine NCCS: the amine's coupling names the thiol S, atom 4
+        String boric = decorate(text("at pH 7", 0), smiles("OB(O)O", 0)).get(0).html();
+        assertTrue(boric.contains("atom 1 (O-H) looks ionizable"), boric);
+        assertFalse(boric.contains("atom 0 "), boric);
+        String cysteamine = decorate(text("at pH 7", 0), smiles("NCCS", 0)).get(0).html();
+        assertTrue(cysteamine.contains("coupling with the thiol site on atom 4:"), cysteamine);
+    }
 }

@@ -20,30 +20,59 @@ class ReadingTest {
         return CardTest.ANNOTATOR.annotate(new Entry("t", "t", List.of(blocks), 0));
     }
 
-    // Check values: the strong acid and base are −log c and 14 + log c (ideal). Sat. NaHCO3 ≈ 8.3 is
-    // (pKa1 + pKa2)/2 of carbonic acid, the usual figure (common practice). 0.1 % TFA near pH 2 and 0.1 % formic
-    // acid near 2.7 are the figures quoted for LC-MS mobile phases (common practice). 10 mM ammonium acetate near
-    // 7.0 is (4.76 + 9.25)/2 (common practice). 2 M Na2CO3: [OH⁻] = √(Kb·c), Kb = 10^−3.67 → pH 12.3 (worked by hand).
-    // Sat. NH4Cl 5.4 M: ½(9.25 − log 5.4) = 4.3, ideal; measured values read higher (activities). PBS 7.4 and
-    // simulated gastric fluid 1.2 are their formulations' stated pH (USP for SGF).
+    static final SolutionPh SOLVER = new SolutionPh(CardTest.SPECIATION);
+
+    // Check values: the strong acid and base are −log c and 14 + log c (ideal; any general chemistry text). Sat.
+    // NaHCO3 ≈ 8.3 is (pKa1 + pKa2)/2 of carbonic acid, the usual figure (common practice). 0.1 % TFA near pH 2 and
+    // 0.1 % formic acid near 2.7 are the figures quoted for LC-MS mobile phases (common practice). 10 mM ammonium
+    // acetate near 7.0 is (4.76 + 9.25)/2 (common practice). 2 M Na2CO3: [OH⁻] = √(Kb·c), Kb = 10^−3.67 → pH 12.3
+    // (worked by hand). Sat. NH4Cl 5.4 M: ½(9.25 − log 5.4) = 4.3, ideal; measured values read higher
+    // (activities). 0.1 M acetic acid 2.88 and 0.1 M sodium acetate 8.88 are the classic worked examples of
+    // analytical chemistry texts (from memory); 1 M ammonia 11.6 likewise (pKb 4.75, from memory). NaH2PO4 and
+    // Na2HPO4 at 0.1 M: (pKa1 + pKa2)/2 = 4.7 and (pKa2 + pKa3)/2 = 9.8 (the amphiprotic-salt rule, common
+    // practice; measured values read lower by about 0.2–0.3 because of activities). 0.1 M citric acid 2.1
+    // (first dissociation, √(Ka1·c), worked by hand). 0.1 M TRIS base 10.5 (½(14 + 8.07 − 1), worked by hand).
+    // PBS 7.4 and simulated gastric fluid 1.2 are their formulations' stated pH (USP for SGF).
     @ParameterizedTest(name = "\"{0}\" → pH {1}")
     @CsvSource(delimiter = '|', value = {
         "washed with sat. NaHCO3 | 8.34 | 0.05",
         "washed with saturated NaHCO3 | 8.34 | 0.05",
         "acidified with 1 M HCl | 0.0 | 0.01",
+        "0.1 M HCl | 1.0 | 0.01",
         "basified with 0.1 N NaOH | 13.0 | 0.01",
         "2 M Na2CO3 | 12.3 | 0.1",
         "quenched with sat. NH4Cl | 4.3 | 0.1",
         "water with 0.1 % TFA | 1.9 | 0.15",
         "0.1 % formic acid | 2.67 | 0.1",
         "10 mM ammonium acetate | 7.0 | 0.05",
+        "0.1 M acetic acid | 2.88 | 0.03",
+        "0.1 M sodium acetate | 8.88 | 0.03",
+        "1 M aq. NH3 | 11.63 | 0.05",
+        "0.1 M NaH2PO4 | 4.68 | 0.1",
+        "0.1 M Na2HPO4 | 9.78 | 0.1",
+        "0.1 M citric acid | 2.1 | 0.05",
+        "0.1 M Tris | 10.5 | 0.05",
         "dissolved in PBS | 7.4 | 0.001",
         "in simulated gastric fluid | 1.2 | 0.001",
     })
     void reagentSolutionsImplyTheirPh(String text, double ph, double tol) {
-        List<ReagentSolutions.Implied> found = ReagentSolutions.find(text);
+        List<ReagentSolutions.Implied> found = ReagentSolutions.find(text, SOLVER);
         assertEquals(1, found.size(), found.toString());
         assertEquals(ph, found.get(0).ph(), tol);
+    }
+
+    @Test
+    void theImpliedPhNamesTheSolverAndTheTableConstants() {
+        ReagentSolutions.Implied p = ReagentSolutions.find("washed with sat. NaHCO3", SOLVER).get(0);
+        assertTrue(p.how().contains("Ionmark's solver") && p.how().contains("carbonic acid pKa 6.35, 10.33")
+                && p.how().contains("measured") && p.how().contains("1.1 M"), p.how());
+        ReagentSolutions.Implied s = ReagentSolutions.find("0.5 M H2SO4", SOLVER).get(0);
+        assertTrue(s.how().contains("not in the table") && s.how().contains("from memory"), s.how());
+    }
+
+    @Test
+    void aBufferWhoseRatioIsNotStatedImpliesNoPh() {
+        assertEquals(List.of(), ReagentSolutions.find("in 50 mM Tris-HCl and 0.1 M sodium acetate buffer", SOLVER));
     }
 
     @Test

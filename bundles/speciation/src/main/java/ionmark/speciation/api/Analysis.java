@@ -33,14 +33,18 @@ import java.util.Map;
  * @param sampled        true when populations were sampled rather than enumerated
  * @param tableVersion   the table version used, for example "v1 (cafd59fb)"
  * @param error          one-line error for bad input, else null
+ * @param uncoveredAtoms atoms that look ionizable but no class of the table covers, as indices from 0 like
+ *                       {@link Site#atom()}; the warning that names them counts from 1 (since 1.3)
  */
 public record Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
         Conditions conditions, Double netCharge, Double fractionNeutral, Double fractionUncharged,
         Map<Integer, Double> chargeStates,
         List<Species> species, Double isoelectricPoint, double logP, Double logD, List<Window> neutralWindows, List<Window> chargedWindows,
-        List<String> corrections, List<String> warnings, boolean sampled, String tableVersion, String error) {
+        List<String> corrections, List<String> warnings, boolean sampled, String tableVersion, String error,
+        List<Integer> uncoveredAtoms) {
 
     public Analysis {
+        uncoveredAtoms = List.copyOf(uncoveredAtoms == null ? List.of() : uncoveredAtoms);
         stripped = List.copyOf(stripped);
         sites = List.copyOf(sites);
         macroPka = List.copyOf(macroPka);
@@ -50,6 +54,17 @@ public record Analysis(String input, String smiles, List<String> stripped, List<
         chargedWindows = List.copyOf(chargedWindows);
         corrections = List.copyOf(corrections);
         warnings = List.copyOf(warnings);
+    }
+
+    /** The 1.2 form, without {@code uncoveredAtoms} (empty). */
+    public Analysis(String input, String smiles, List<String> stripped, List<Site> sites, List<Double> macroPka,
+            Conditions conditions, Double netCharge, Double fractionNeutral, Double fractionUncharged,
+            Map<Integer, Double> chargeStates, List<Species> species, Double isoelectricPoint, double logP, Double logD,
+            List<Window> neutralWindows, List<Window> chargedWindows, List<String> corrections, List<String> warnings,
+            boolean sampled, String tableVersion, String error) {
+        this(input, smiles, stripped, sites, macroPka, conditions, netCharge, fractionNeutral, fractionUncharged,
+                chargeStates, species, isoelectricPoint, logP, logD, neutralWindows, chargedWindows, corrections, warnings,
+                sampled, tableVersion, error, List.of());
     }
 
     /** The 1.1 form, without {@code fractionUncharged} (null). */

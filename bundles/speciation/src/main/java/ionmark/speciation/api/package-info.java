@@ -11,5 +11,5 @@
  * }</pre>
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.2.0")
+@org.osgi.annotation.versioning.Version("1.3.0")
 package ionmark.speciation.api;

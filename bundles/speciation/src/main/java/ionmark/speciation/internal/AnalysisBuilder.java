@@ -67,8 +67,7 @@ final class AnalysisBuilder {
             warnings.add("mixture or salt: analysed the parent, stripped " + String.join(", ", p.prepared().stripped()));
         }
         for (int atom : p.uncovered()) {
-            warnings.add("atom " + atom + " (" + mol.getAtom(atom).getSymbol() + "-H) looks ionizable but is outside "
-                    + "the table: not estimated");
+            warnings.add(AtomText.uncovered(atom, mol.getAtom(atom).getSymbol()));
         }
         if (p.measured().isEmpty() && !titr.isEmpty()) {
             warnings.add("pKa values are estimated, not measured");
@@ -164,7 +163,7 @@ final class AnalysisBuilder {
                 ph -> ChargeProfile.meanCharge(p, ph));
         return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
                 uncharged, chargeStates, species, pI, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
-                null);
+                null, p.uncovered());
     }
 
     private static double logP(IAtomContainer mol) {

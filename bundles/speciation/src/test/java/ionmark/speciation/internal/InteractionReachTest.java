@@ -70,9 +70,11 @@ class InteractionReachTest {
         SiteInteraction si = SHIPPED.interaction();
         double w = si.at(3) * si.reachOf("amine-primary") * si.reachOf("thiol");
         var amine = full.sites().stream().filter(s -> s.element().equals("N")).findFirst().orElseThrow();
+        // the thiol S is index 3 of NCCS: the words count from 1, the structured index from 0
         var coupling = amine.derivation().stream().filter(x -> x.label().startsWith("coupling with the thiol site on "
-                + "atom 3:")).toList();
+                + "atom 4:")).toList();
         assertEquals(1, coupling.size(), amine.derivation().toString());
+        assertEquals(java.util.List.of(3), coupling.get(0).atoms());
         assertEquals(0.0, coupling.get(0).value(), 0.0);
         assertTrue(coupling.get(0).label().contains(String.format(java.util.Locale.ROOT, "%.2f pKa units", w)),
                 coupling.get(0).label());

@@ -9,6 +9,7 @@ import java.util.Set;
 import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.SiteType;
 import ionmark.speciation.api.Term;
+import ionmark.speciation.internal.AtomText;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.RootedPattern;
 
@@ -80,8 +81,8 @@ public final class PairRules {
         double d = base ? rule.singly() : -rule.singly();
         String label = String.format(Locale.ROOT, "pair rule with the %s site on atom %d (%s): singly %s form held "
                 + "by %.2f, doubly %s form dearer by %.2f; the pair's interaction grows by %.2f",
-                partner.site().group().id(), partner.site().atom(), rule.name(), base ? "protonated" : "deprotonated",
+                partner.site().group().id(), AtomText.shown(partner.site().atom()), rule.name(), base ? "protonated" : "deprotonated",
                 rule.singly(), base ? "protonated" : "deprotonated", rule.doubly(), rule.interaction());
-        return s.shifted(d, new Term(label, d, table.table().citation(rule.source())), s.basis(), s.sd());
+        return s.shifted(d, new Term(label, d, table.table().citation(rule.source()), List.of(partner.site().atom())), s.basis(), s.sd());
     }
 }

@@ -6,6 +6,7 @@ import java.util.Locale;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.speciation.api.Term;
+import ionmark.speciation.internal.AtomText;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 
 /** The derivation lines a site gets for what the microstate model adds on top of its value. */
@@ -34,9 +35,9 @@ public final class Couplings {
             EstimatedSite other = titr.get(j);
             terms.add(new Term(String.format(Locale.ROOT, "coupling with the %s site on atom %d: %.2f pKa units while "
                     + "both are charged (distance rule at %s, × both reach factors, with any pair rule); applied in "
-                    + "the microstate model, not in this value", other.site().group().id(), other.site().atom(), w,
+                    + "the microstate model, not in this value", other.site().group().id(), AtomText.shown(other.site().atom()), w,
                     SitePaths.describe(paths[i][j])), 0.0,
-                    source + reachSources(titr.get(i).site().group(), other.site().group())));
+                    source + reachSources(titr.get(i).site().group(), other.site().group()), List.of(other.site().atom())));
         }
         double phi = model.background()[i] + 2 * davies * q0;
         if (Math.abs(phi) >= cutoff) {
