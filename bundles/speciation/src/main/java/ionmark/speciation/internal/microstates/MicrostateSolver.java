@@ -47,6 +47,7 @@ public final class MicrostateSolver {
     }
 
     public Populations solve(SiteModel m, double ph) {
+        ionmark.speciation.internal.work.Budget.check();
         int n = m.size();
         boolean[] fixedState = new boolean[n];
         boolean[] isFixed = new boolean[n];
@@ -224,6 +225,9 @@ public final class MicrostateSolver {
         int lost = 0;
         final long states = 1L << k;
         for (long t = 0; t < states; t++) {
+            if ((t & 0xFFFF) == 0xFFFF) {
+                ionmark.speciation.internal.work.Budget.check();
+            }
             if (t > 0) {
                 int bit = Long.numberOfTrailingZeros(t);
                 boolean was = dep[bit];
@@ -384,6 +388,7 @@ public final class MicrostateSolver {
         Map<StateKey, double[]> seen = new HashMap<>();
         long samples = 0;
         for (int sweep = 0; sweep < burn + batches * perBatch; sweep++) {
+            ionmark.speciation.internal.work.Budget.check();
             for (int step = 0; step < k; step++) {
                 int bit = rnd.nextInt(k);
                 double d1 = flipDelta(lpka, dep, field, bit, ph);
