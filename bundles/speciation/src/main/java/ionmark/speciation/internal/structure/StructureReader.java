@@ -103,6 +103,7 @@ public final class StructureReader {
             throw new StructureException("molecule has " + mol.getAtomCount() + " heavy atoms; the limit is "
                     + maxHeavyAtoms);
         }
+        Treatable.check(mol);
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
