@@ -71,8 +71,9 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
         if (workers < 1) {
             throw new IllegalArgumentException("workers must be at least 1, not " + workers);
         }
-        // a queue of a few structures per worker; a structure waits at most one budget for its turn
-        return new AnalysisPool(workers, 8 * workers, timeoutMillis, timeoutMillis);
+        // room for a burst of quick checks (50 clients at once) to wait their turn, at most one budget each; beyond
+        // that the caller is answered busy at once
+        return new AnalysisPool(workers, 32 * workers, timeoutMillis, timeoutMillis);
     }
 
     private SpeciationService(TableService tables, AcidityTable table, int maxHeavyAtoms, int timeoutMillis,
