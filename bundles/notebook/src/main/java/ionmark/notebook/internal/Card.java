@@ -30,8 +30,10 @@ record Card(AnnotatedStructure s) {
         sb.append(conditions(s.conditions()));
         if (!s.ok()) {
             String error = s.error() != null ? s.error() : s.analyses().get(0).error();
-            sb.append("<p class=\"im-error\" role=\"alert\">Cannot annotate: ").append(Html.esc(error))
-                    .append("</p></section>");
+            // a refusal for time or load already says "not annotated"
+            String shown = error != null && error.startsWith("not annotated") ? "N" + error.substring(1)
+                    : "Cannot annotate: " + error;
+            sb.append("<p class=\"im-error\" role=\"alert\">").append(Html.esc(shown)).append("</p></section>");
             return sb.toString();
         }
         Analysis first = s.analyses().get(0);

@@ -35,13 +35,25 @@ final class EntryReader {
         this.speciation = speciation;
     }
 
+    /**
+     * Structures annotated per entry, quick check or request: each may take its whole time budget, so an entry
+     * with hundreds of structures would hold a request for minutes.
+     */
+    static final int MAX_STRUCTURES = Integer.getInteger("ionmark.maxStructuresPerRequest", 50);
+
     AnnotatedEntry read(Entry entry, List<String> entryWarnings) {
         ConditionScope scope = new ConditionScope(entry, new SolutionPh(speciation));
         List<AnnotatedStructure> out = new ArrayList<>();
-        for (Found f : structures(entry)) {
-            out.add(annotate(entry, scope, f));
+        List<Found> found = structures(entry);
+        for (int i = 0; i < found.size(); i++) {
+            out.add(i < MAX_STRUCTURES ? annotate(entry, scope, found.get(i)) : failed(found.get(i), NOT_READ,
+                    overCap(found.size())));
         }
         List<String> warnings = new ArrayList<>(entryWarnings);
+        if (found.size() > MAX_STRUCTURES) {
+            warnings.add("This entry has " + found.size() + " structures; the first " + MAX_STRUCTURES
+                    + " are annotated (the limit per page or request). Split the entry to see the rest.");
+        }
         entry.notices().forEach(warnings::add);
         String version = out.stream().filter(AnnotatedStructure::ok).map(s -> s.analyses().get(0).tableVersion())
                 .findFirst().orElse("");
@@ -187,6 +199,14 @@ final class EntryReader {
         List<Partition> phases = WorkupPhases.partitions(WorkupPhases.step(sectionText(entry, b.section())), analyses);
         return new AnnotatedStructure(f.block(), f.words(), f.source(), f.structure(), used, analyses, curve, phases,
                 null);
+    }
+
+    private static final ConditionsUsed NOT_READ = new ConditionsUsed(null, null, null, false,
+            Conditions.STANDARD_TEMPERATURE, null, 0, null, List.of());
+
+    static String overCap(int count) {
+        return "not annotated: more than " + MAX_STRUCTURES + " structures in one entry or request (" + count
+                + " found); split the entry";
     }
 
     private static AnnotatedStructure failed(Found f, ConditionsUsed c, String error) {

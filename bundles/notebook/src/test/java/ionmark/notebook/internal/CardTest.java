@@ -83,6 +83,20 @@ class CardTest {
     }
 
     @Test
+    void aStructureOverItsTimeBudgetSaysNotAnnotatedOnItsCard() {
+        SpeciationService tight = new SpeciationService(TableSnapshotService.shipped(), 300, 200, 1, 0);
+        try {
+            tight.analyse("CC(=O)O", ionmark.speciation.api.Conditions.atPh(7)); // table-wide work, first use
+            Entry e = new Entry("e", "t", List.of(text("pH 7", 0), smiles("N" + "CCN".repeat(80), 0)), 0);
+            String html = new Annotator(tight).decorate(e, new HostUser("chemist", Set.of())).get(0).html();
+            assertTrue(html.contains("Not annotated: over the time budget of 0.2 s per structure"), html);
+            assertFalse(html.contains("Cannot annotate"), html);
+        } finally {
+            tight.close();
+        }
+    }
+
+    @Test
     void scriptAndMarkupInEveryFieldAreEscaped() {
         String evil = "<script>alert(1)</script>\"'><img src=x onerror=alert(2)>";
         // as structure text, as stated words, and through the quick check's fields

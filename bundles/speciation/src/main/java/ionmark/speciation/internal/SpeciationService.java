@@ -1,11 +1,5 @@
 package ionmark.speciation.internal;
 
-import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
-import java.util.concurrent.Future;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.TimeoutException;
 import java.util.concurrent.atomic.AtomicReference;
 
 import org.osgi.service.component.annotations.Activate;
@@ -25,14 +19,19 @@ import ionmark.speciation.api.TableCalibration;
 import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.structure.StructureException;
+import ionmark.speciation.internal.structure.StructureKey;
+import ionmark.speciation.internal.work.AnalysisPool;
+import ionmark.speciation.internal.work.Budget;
+import ionmark.speciation.internal.work.OverBudgetException;
 
 /**
  * The speciation service: one compiled {@link Engine} per table snapshot. Every call compares the
  * current snapshot with the engine's (an identity check) and rebuilds the engine when the table has
  * changed, so a new table is used from the next call on and no change can be missed. (A listener
  * callback would need the table service to reference this service while this service references
- * the table service: a cycle that Declarative Services may leave unbound.) Each molecule runs under
- * a time limit.
+ * the table service: a cycle that Declarative Services may leave unbound.) Each structure runs on a bounded
+ * pool under a time budget its loops check ({@link AnalysisPool}, {@link Budget}); finished results are kept by
+ * (structure, conditions, table version) in a bounded cache ({@link ResultCache}).
  */
 @Component(service = {Speciation.class, TableCalibration.class, TableRegression.class},
         configurationPid = "ionmark.speciation")
@@ -42,39 +41,60 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
     private final TableService tables;
     private final int maxHeavyAtoms;
     private final int timeoutMillis;
-    private final ExecutorService pool;
+    private final AnalysisPool pool;
+    private final boolean ownPool;
+    private final ResultCache cache;
 
     @Activate
     public SpeciationService(@Reference TableService tables, SpeciationConfiguration config) {
-        this(tables, tables.current(), config.maxHeavyAtoms(), config.timeoutMillis());
+        this(tables, tables.current(), config.maxHeavyAtoms(), config.timeoutMillis(),
+                pool(config.workers(), config.timeoutMillis()), true, new ResultCache(config.cacheEntries()));
     }
 
     /** With a fixed table (tests, tools). */
     public SpeciationService(AcidityTable table, int maxHeavyAtoms, int timeoutMillis) {
-        this(null, table, maxHeavyAtoms, timeoutMillis);
+        this(table, maxHeavyAtoms, timeoutMillis, DEFAULT_WORKERS, DEFAULT_CACHE);
     }
 
-    private SpeciationService(TableService tables, AcidityTable table, int maxHeavyAtoms, int timeoutMillis) {
-        if (maxHeavyAtoms < 1) {
-            throw new IllegalArgumentException("maxHeavyAtoms must be at least 1, not " + maxHeavyAtoms);
-        }
+    /** With a fixed table, a number of workers and a cache size. */
+    public SpeciationService(AcidityTable table, int maxHeavyAtoms, int timeoutMillis, int workers, int cacheEntries) {
+        this(null, table, maxHeavyAtoms, timeoutMillis, pool(workers, timeoutMillis), true, new ResultCache(cacheEntries));
+    }
+
+    static final int DEFAULT_WORKERS = Math.max(2, Runtime.getRuntime().availableProcessors());
+    static final int DEFAULT_CACHE = 2000;
+
+    private static AnalysisPool pool(int workers, int timeoutMillis) {
         if (timeoutMillis < 10) {
             throw new IllegalArgumentException("timeoutMillis must be at least 10, not " + timeoutMillis);
+        }
+        if (workers < 1) {
+            throw new IllegalArgumentException("workers must be at least 1, not " + workers);
+        }
+        // room for a burst of quick checks (50 clients at once) to wait their turn, at most one budget each; beyond
+        // that the caller is answered busy at once
+        return new AnalysisPool(workers, 32 * workers, timeoutMillis, timeoutMillis);
+    }
+
+    private SpeciationService(TableService tables, AcidityTable table, int maxHeavyAtoms, int timeoutMillis,
+            AnalysisPool pool, boolean ownPool, ResultCache cache) {
+        if (maxHeavyAtoms < 1) {
+            throw new IllegalArgumentException("maxHeavyAtoms must be at least 1, not " + maxHeavyAtoms);
         }
         this.tables = tables;
         this.maxHeavyAtoms = maxHeavyAtoms;
         this.timeoutMillis = timeoutMillis;
         this.engine.set(new Engine(table, maxHeavyAtoms));
-        this.pool = Executors.newCachedThreadPool(r -> {
-            Thread t = new Thread(r, "ionmark-speciation");
-            t.setDaemon(true);
-            return t;
-        });
+        this.pool = pool;
+        this.ownPool = ownPool;
+        this.cache = cache;
     }
 
     @Deactivate
     public void close() {
-        pool.shutdownNow();
+        if (ownPool) {
+            pool.close();
+        }
     }
 
     /** The engine for the current table, rebuilt once when the table service holds a new snapshot. */
@@ -110,28 +130,72 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
     private Analysis run(String structure, Conditions conditions, boolean brief) {
         Conditions c = conditions == null ? Conditions.noPh() : conditions;
         Engine e = engine();
-        Future<Analysis> f = pool.submit(() -> e.analyse(structure, c, brief));
-        try {
-            return f.get(timeoutMillis, TimeUnit.MILLISECONDS);
-        } catch (TimeoutException ex) {
-            f.cancel(true);
-            return Analysis.failed(structure, c, e.table().version().label(), "gave up after " + timeoutMillis
-                    + " ms (per-molecule time limit)");
-        } catch (InterruptedException ex) {
-            Thread.currentThread().interrupt();
-            return Analysis.failed(structure, c, e.table().version().label(), "interrupted");
-        } catch (ExecutionException ex) {
-            return Analysis.failed(structure, c, e.table().version().label(), "internal error: " + ex.getCause());
+        String version = e.table().version().label();
+        ResultCache.Key key = key(e, structure, c, brief ? "brief " + structure.strip() : "full");
+        Analysis hit = cache.analysis(key, structure);
+        if (hit != null) {
+            return hit;
         }
+        e.analogIndex(); // table-wide work, once per table: outside any one structure's budget
+        AnalysisPool.Outcome<Analysis> o = pool.run(() -> {
+            Analysis a = e.analyse(structure, c, brief);
+            // the engine turns any exception into a failed analysis; say why when the budget ended it
+            return a.ok() || !Budget.exhausted() ? a : Analysis.failed(structure, c, version,
+                    OverBudgetException.message(pool.budgetMillis()));
+        });
+        if (!o.ok()) {
+            return Analysis.failed(structure, c, version, o.refusal());
+        }
+        cache.put(key, o.value());
+        return o.value();
     }
 
+    private ResultCache.Key key(Engine e, String structure, Conditions c, String what) {
+        String k = StructureKey.of(structure);
+        return k == null ? null : new ResultCache.Key(k, c, e.table().version().number() + "/" + e.table().version()
+                .hash() + "@" + System.identityHashCode(e.table()), what);
+    }
+
+    /** The result cache (tests). */
+    ResultCache cache() {
+        return cache;
+    }
+
+    /** The analysis pool (tests). */
+    AnalysisPool pool() {
+        return pool;
+    }
+
+    /**
+     * Curves under the same budget as an analysis. Over the budget (or when the pool is busy) it throws an
+     * {@link IllegalArgumentException} whose message starts with "not annotated"; the card then leaves the plot out.
+     */
     @Override
     public Curve curve(String structure, Conditions conditions, double from, double to, double step) {
-        try {
-            return engine().curve(structure, conditions == null ? Conditions.noPh() : conditions, from, to, step);
-        } catch (StructureException e) {
-            throw new IllegalArgumentException(e.getMessage(), e);
+        Conditions c = conditions == null ? Conditions.noPh() : conditions;
+        Engine e = engine();
+        ResultCache.Key key = key(e, structure, c, "curve " + from + " " + to + " " + step);
+        Curve hit = cache.curve(key);
+        if (hit != null) {
+            return hit;
         }
+        e.analogIndex();
+        AnalysisPool.Outcome<Object> o = pool.run(() -> {
+            try {
+                return e.curve(structure, c, from, to, step);
+            } catch (StructureException ex) {
+                return new IllegalArgumentException(ex.getMessage(), ex);
+            }
+        });
+        if (!o.ok()) {
+            throw new IllegalArgumentException(o.refusal());
+        }
+        if (o.value() instanceof IllegalArgumentException ex) {
+            throw ex;
+        }
+        Curve curve = (Curve) o.value();
+        cache.put(key, curve);
+        return curve;
     }
 
     @Override
@@ -171,7 +235,7 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
     @Override
     public Speciation pinned(AcidityTable table) {
         return pinned.computeIfAbsent(table.version().hash() + "/" + table.version().number(),
-                k -> new SpeciationService(table, maxHeavyAtoms, timeoutMillis));
+                k -> new SpeciationService(null, table, maxHeavyAtoms, timeoutMillis, pool, false, cache));
     }
 
     @Override

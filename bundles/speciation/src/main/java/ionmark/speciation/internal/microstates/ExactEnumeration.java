@@ -62,6 +62,9 @@ final class ExactEnumeration {
         int lost = 0;
         final long states = 1L << k;
         for (long t = 0; t < states; t++) {
+            if ((t & 0xFFFF) == 0xFFFF) {
+                ionmark.speciation.internal.work.Budget.check();
+            }
             if (t > 0) {
                 int bit = Long.numberOfTrailingZeros(t);
                 boolean was = dep[bit];

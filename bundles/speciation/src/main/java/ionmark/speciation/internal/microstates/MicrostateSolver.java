@@ -42,6 +42,7 @@ public final class MicrostateSolver {
     }
 
     public Populations solve(SiteModel m, double ph) {
+        ionmark.speciation.internal.work.Budget.check();
         int n = m.size();
         boolean[] fixedState = new boolean[n];
         boolean[] isFixed = new boolean[n];

@@ -95,6 +95,7 @@ final class MonteCarloSampler {
         Map<StateKey, double[]> seen = new HashMap<>();
         long samples = 0;
         for (int sweep = 0; sweep < burn + batches * perBatch; sweep++) {
+            ionmark.speciation.internal.work.Budget.check();
             for (int step = 0; step < k; step++) {
                 int bit = rnd.nextInt(k);
                 double d1 = flipDelta(lpka, dep, field, bit, ph);

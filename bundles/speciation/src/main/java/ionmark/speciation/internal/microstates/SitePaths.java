@@ -52,6 +52,7 @@ public final class SitePaths {
      * the atoms are not connected; {@code [0]} when they are one atom.
      */
     public static int[] between(int[][] adj, boolean[] saturated, int a, int b) {
+        ionmark.speciation.internal.work.Budget.check();
         if (a == b) {
             return new int[] {0};
         }

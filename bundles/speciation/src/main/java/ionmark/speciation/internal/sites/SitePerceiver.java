@@ -29,6 +29,7 @@ public final class SitePerceiver {
     public static List<PerceivedSite> perceive(CompiledTable table, RootedPattern.Target target) {
         List<PerceivedSite> out = new ArrayList<>();
         for (int atom = 0; atom < target.atomCount(); atom++) {
+            ionmark.speciation.internal.work.Budget.check();
             List<CompiledTable.Group> candidates = table.groupsAt(target, atom);
             for (int c = 0; c < candidates.size(); c++) {
                 CompiledTable.Group g = candidates.get(c);

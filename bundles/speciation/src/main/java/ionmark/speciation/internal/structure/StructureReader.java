@@ -103,6 +103,7 @@ public final class StructureReader {
             throw new StructureException("molecule has " + mol.getAtomCount() + " heavy atoms; the limit is "
                     + maxHeavyAtoms);
         }
+        Treatable.check(mol);
         Valences.check(mol);
         Normaliser.toReferenceForm(mol, notes);
         SmartsPattern.prepare(mol);
@@ -135,7 +136,7 @@ public final class StructureReader {
         return ws < 0 ? first : first.substring(0, ws);
     }
 
-    private static IAtomContainer readSmiles(String smi) throws StructureException {
+    static IAtomContainer readSmiles(String smi) throws StructureException {
         String s = firstToken(smi);
         try {
             return PARSER.get().parseSmiles(s);
@@ -157,7 +158,7 @@ public final class StructureReader {
         return -1;
     }
 
-    private static IAtomContainer readMolfile(String text) throws StructureException {
+    static IAtomContainer readMolfile(String text) throws StructureException {
         String record = text;
         int end = record.indexOf("$$$$");
         if (end >= 0) {

@@ -343,6 +343,7 @@ public final class Tautomers {
             }
             Choice best = null;
             for (int[] placement : placements(positions, h)) {
+                ionmark.speciation.internal.work.Budget.check();
                 boolean[] bonds = kekule(atoms, placement);
                 if (bonds == null) {
                     continue;
@@ -440,6 +441,7 @@ public final class Tautomers {
             return out;
         }
         for (int[] placement : placements(positions, h)) {
+            ionmark.speciation.internal.work.Budget.check();
             if (kekule(atoms, placement) != null) {
                 out.add(placement);
             }
