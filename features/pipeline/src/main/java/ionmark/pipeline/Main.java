@@ -107,13 +107,17 @@ public final class Main {
         StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "\rionmark pipeline: %d structures read, %d "
                 + "records, %d errors, %.0f s, %.1f records/s", counter(m, "structures"), records, counter(m, "errors"),
                 secs, records / Math.max(secs, 1e-9)));
+        long entries = counter(m, "entries");
+        if (entries > 0) {
+            sb.append(String.format(Locale.ROOT, " (%d entries)", entries));
+        }
         long changed = counter(m, "changed");
         long pinned = counter(m, "changed-pinned");
         if (changed + pinned > 0) {
             sb.append(String.format(Locale.ROOT, ", %d changed, %d pinned changed", changed, pinned));
         }
         if (end) {
-            for (String d : new String[] {"read-us-per-file", "analyse-us", "encode-us"}) {
+            for (String d : new String[] {"read-us-per-file", "analyse-us", "entry-us", "encode-us"}) {
                 for (MetricResult<DistributionResult> x : m.getDistributions()) {
                     if (x.getName().getName().equals(d) && value(x).getCount() > 0) {
                         DistributionResult v = value(x);
