@@ -51,6 +51,12 @@ public interface IonmarkOptions extends PipelineOptions {
 
     void setBrief(boolean v);
 
+    @Description("Also write the records as Parquet (records-*.parquet), one row per structure and pH")
+    @Default.Boolean(false)
+    boolean getParquet();
+
+    void setParquet(boolean v);
+
     @Description("Output shards; 0 lets the runner choose")
     @Default.Integer(0)
     int getShards();

@@ -23,13 +23,21 @@ public final class Jobs {
     private Jobs() {
     }
 
-    /** Annotate: {@code batch}'s record per structure and pH, in {@code out/records-*.jsonl}. */
+    /**
+     * Annotate: {@code batch}'s record per structure and pH, in {@code out/records-*.jsonl}; with
+     * {@code --parquet} the same records as rows of {@code out/records-*.parquet}.
+     */
     public static void annotate(Pipeline p, IonmarkOptions o) throws IOException {
         EngineSpec spec = EngineSpec.of(o.getTable(), o.getMaxHeavyAtoms(), o.getTimeoutMillis());
         check(o);
         PCollection<String> records = structures(p, o)
                 .apply("Annotate", ParDo.of(new AnnotateFn(spec, o.getTemp(), o.getIonic(), o.getBrief())));
         records.apply("WriteJsonLines", write(o, "records"));
+        if (o.getParquet()) {
+            FileIO.Write<Void, String> w = FileIO.<String>write().via(new ParquetSink())
+                    .to(o.getOut().replaceAll("/+$", "")).withPrefix("records").withSuffix(".parquet");
+            records.apply("WriteParquet", o.getShards() > 0 ? w.withNumShards(o.getShards()) : w);
+        }
     }
 
     /** Impact: what changes between two tables, in {@code out/impact-*.jsonl} and {@code out/impact-pinned-*.jsonl}. */

@@ -79,12 +79,12 @@ public final class Main {
         return 0;
     }
 
-    /** {@code --in FILE} as well as Beam's {@code --in=FILE}; switches ({@code --brief}) stand alone. */
+    /** {@code --in FILE} as well as Beam's {@code --in=FILE}; switches ({@code --brief}, {@code --parquet}) stand alone. */
     static String[] joined(String[] args) {
         java.util.List<String> out = new java.util.ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
-            if (a.startsWith("--") && !a.contains("=") && !a.equals("--brief") && !a.equals("--help")
+            if (a.startsWith("--") && !a.contains("=") && !a.equals("--brief") && !a.equals("--parquet") && !a.equals("--help")
                     && i + 1 < args.length && !args[i + 1].startsWith("--")) {
                 out.add(a + "=" + args[++i]);
             } else {
