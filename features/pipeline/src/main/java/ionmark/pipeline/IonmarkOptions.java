@@ -63,7 +63,7 @@ public interface IonmarkOptions extends PipelineOptions {
 
     void setShards(int v);
 
-    @Description("Keys the structures are spread over; 0: four per thread on the direct runner, random keys elsewhere")
+    @Description("Keys the structures are spread over; 0: one per thread on the direct runner, random keys elsewhere")
     @Default.Integer(0)
     int getBuckets();
 

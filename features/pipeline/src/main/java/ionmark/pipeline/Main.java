@@ -28,6 +28,7 @@ public final class Main {
     }
 
     public static int run(String[] raw, PrintStream err) {
+        Phases phases = new Phases(err);
         String[] args = joined(raw);
         String job = args.length > 0 && !args[0].startsWith("-") ? args[0] : "annotate";
         String[] rest = args.length > 0 && !args[0].startsWith("-") ? Arrays.copyOfRange(args, 1, args.length) : args;
@@ -50,6 +51,7 @@ public final class Main {
         }
         // run() returns at once, so that the progress line can be printed while the direct runner works
         o.as(DirectOptions.class).setBlockOnRun(false);
+        phases.mark("options");
         Pipeline p = Pipeline.create(o);
         try {
             if (job.equals("impact")) {
@@ -61,6 +63,7 @@ public final class Main {
             err.println("ionmark pipeline: " + e.getMessage());
             return 2;
         }
+        phases.mark("graph");
         long start = System.nanoTime();
         PipelineResult r = p.run();
         PipelineResult.State s;
@@ -72,6 +75,7 @@ public final class Main {
             s = r.waitUntilFinish();
         }
         progress(r, start, err, true);
+        phases.mark("run");
         if (s != PipelineResult.State.DONE) {
             err.println("ionmark pipeline: the run ended " + s);
             return 1;
