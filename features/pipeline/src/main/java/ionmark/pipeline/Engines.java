@@ -4,6 +4,8 @@ import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicInteger;
 
+import ionmark.notebook.api.EntryAnnotation;
+import ionmark.notebook.api.EntryAnnotations;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.internal.SpeciationService;
 
@@ -14,6 +16,7 @@ import ionmark.speciation.internal.SpeciationService;
  */
 public final class Engines {
     private static final Map<EngineSpec, SpeciationService> BUILT = new ConcurrentHashMap<>();
+    private static final Map<EngineSpec, EntryAnnotation> NOTEBOOKS = new ConcurrentHashMap<>();
     private static final AtomicInteger BUILDS = new AtomicInteger();
 
     private Engines() {
@@ -24,6 +27,11 @@ public final class Engines {
             BUILDS.incrementAndGet();
             return new SpeciationService(s.table(), s.maxHeavyAtoms(), s.timeoutMillis());
         });
+    }
+
+    /** The notebook's entry reader over the same engine ({@link EntryAnnotations}, the notebook's API). */
+    public static EntryAnnotation notebook(EngineSpec spec) {
+        return NOTEBOOKS.computeIfAbsent(spec, s -> EntryAnnotations.of(get(s)));
     }
 
     /** How many engines this JVM has built (a check that tables are loaded once per worker, not per element). */

@@ -43,7 +43,11 @@ public final class Impact {
         o.put("id", s.id());
         o.put("source", s.source());
         o.put("input", s.text());
-        o.put("pH", ph);
+        if (Double.isNaN(ph)) {
+            o.putNull("pH");
+        } else {
+            o.put("pH", ph);
+        }
         if (s.pinnedVersion() > 0) {
             o.put("pinnedTableVersion", s.pinnedVersion());
         }

@@ -5,6 +5,7 @@ import org.apache.beam.sdk.metrics.Metrics;
 import org.apache.beam.sdk.transforms.DoFn;
 import org.apache.beam.sdk.values.TupleTag;
 
+import ionmark.notebook.api.EntryAnnotation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Speciation;
@@ -12,7 +13,8 @@ import ionmark.speciation.api.Speciation;
 /**
  * Annotates each structure with both tables at each of its pH values and emits what changed: entries pinned
  * to a table version to {@link #PINNED}, the rest to {@link #CHANGED}. A structure without a pH cannot change
- * its charge state and is only counted.
+ * its charge state and is only counted. A Markdown entry is read by the notebook's reader with each table
+ * ({@link EntryRecords}), so an entry is reported when its cards would read differently.
  */
 final class ImpactFn extends DoFn<Chunk, String> {
     private static final long serialVersionUID = 1L;
@@ -34,6 +36,8 @@ final class ImpactFn extends DoFn<Chunk, String> {
     private final double ionicStrength;
     private transient Speciation b;
     private transient Speciation a;
+    private transient EntryAnnotation nb;
+    private transient EntryAnnotation na;
 
     ImpactFn(EngineSpec before, EngineSpec after, double threshold, double temperature, double ionicStrength) {
         this.before = before;
@@ -47,6 +51,8 @@ final class ImpactFn extends DoFn<Chunk, String> {
     public void setup() {
         b = Engines.get(before);
         a = Engines.get(after);
+        nb = Engines.notebook(before);
+        na = Engines.notebook(after);
     }
 
     @ProcessElement
@@ -57,6 +63,10 @@ final class ImpactFn extends DoFn<Chunk, String> {
     }
 
     private void compare(Structure s, MultiOutputReceiver out) {
+        if (s.entry()) {
+            entry(s, out);
+            return;
+        }
         if (s.phs().isEmpty()) {
             noPh.inc();
             return;
@@ -76,15 +86,47 @@ final class ImpactFn extends DoFn<Chunk, String> {
             if (!x.ok() && !y.ok()) {
                 errors.inc();
             }
-            Impact.compare(s, ph, x, y, threshold).ifPresent(o -> {
-                if (s.pinnedVersion() > 0) {
-                    pinnedChanged.inc();
-                    out.get(PINNED).output(o.toString());
-                } else {
-                    changed.inc();
-                    out.get(CHANGED).output(o.toString());
-                }
-            });
+            emit(s, ph, x, y, out);
         }
+    }
+
+    /**
+     * Both tables' readings of an entry, record by record: the structures and the conditions the notebook
+     * finds do not depend on the table, so the two lists pair up in order.
+     */
+    private void entry(Structure s, MultiOutputReceiver out) {
+        EntryRecords.Read x = EntryRecords.read(nb, b, s);
+        EntryRecords.Read y = EntryRecords.read(na, a, s);
+        if (x.items().size() != y.items().size()) {
+            throw new IllegalStateException("entry " + s.id() + " read differently with the two tables");
+        }
+        for (int i = 0; i < x.items().size(); i++) {
+            EntryRecords.Item bi = x.items().get(i);
+            EntryRecords.Item ai = y.items().get(i);
+            Double ph = bi.analysis().conditions().ph();
+            if (bi.analysis().ok() && ph == null) {
+                noPh.inc();
+                continue;
+            }
+            compared.inc();
+            if (!bi.analysis().ok() && !ai.analysis().ok()) {
+                errors.inc();
+            }
+            Structure one = new Structure(s.source(), bi.id(), bi.analysis().input(), null, s.phs(), x.pinnedVersion(),
+                    false);
+            emit(one, ph == null ? Double.NaN : ph, bi.analysis(), ai.analysis(), out);
+        }
+    }
+
+    private void emit(Structure s, double ph, Analysis x, Analysis y, MultiOutputReceiver out) {
+        Impact.compare(s, ph, x, y, threshold).ifPresent(o -> {
+            if (s.pinnedVersion() > 0) {
+                pinnedChanged.inc();
+                out.get(PINNED).output(o.toString());
+            } else {
+                changed.inc();
+                out.get(CHANGED).output(o.toString());
+            }
+        });
     }
 }

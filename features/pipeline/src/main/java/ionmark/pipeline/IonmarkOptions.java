@@ -51,13 +51,19 @@ public interface IonmarkOptions extends PipelineOptions {
 
     void setBrief(boolean v);
 
+    @Description("Also write the records as Parquet (records-*.parquet), one row per structure and pH")
+    @Default.Boolean(false)
+    boolean getParquet();
+
+    void setParquet(boolean v);
+
     @Description("Output shards; 0 lets the runner choose")
     @Default.Integer(0)
     int getShards();
 
     void setShards(int v);
 
-    @Description("Keys the structures are spread over; 0: four per thread on the direct runner, random keys elsewhere")
+    @Description("Keys the structures are spread over; 0: one per thread on the direct runner, random keys elsewhere")
     @Default.Integer(0)
     int getBuckets();
 

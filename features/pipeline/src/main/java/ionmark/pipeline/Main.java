@@ -28,6 +28,7 @@ public final class Main {
     }
 
     public static int run(String[] raw, PrintStream err) {
+        Phases phases = new Phases(err);
         String[] args = joined(raw);
         String job = args.length > 0 && !args[0].startsWith("-") ? args[0] : "annotate";
         String[] rest = args.length > 0 && !args[0].startsWith("-") ? Arrays.copyOfRange(args, 1, args.length) : args;
@@ -50,6 +51,7 @@ public final class Main {
         }
         // run() returns at once, so that the progress line can be printed while the direct runner works
         o.as(DirectOptions.class).setBlockOnRun(false);
+        phases.mark("options");
         Pipeline p = Pipeline.create(o);
         try {
             if (job.equals("impact")) {
@@ -61,6 +63,7 @@ public final class Main {
             err.println("ionmark pipeline: " + e.getMessage());
             return 2;
         }
+        phases.mark("graph");
         long start = System.nanoTime();
         PipelineResult r = p.run();
         PipelineResult.State s;
@@ -72,6 +75,7 @@ public final class Main {
             s = r.waitUntilFinish();
         }
         progress(r, start, err, true);
+        phases.mark("run");
         if (s != PipelineResult.State.DONE) {
             err.println("ionmark pipeline: the run ended " + s);
             return 1;
@@ -79,12 +83,12 @@ public final class Main {
         return 0;
     }
 
-    /** {@code --in FILE} as well as Beam's {@code --in=FILE}; switches ({@code --brief}) stand alone. */
+    /** {@code --in FILE} as well as Beam's {@code --in=FILE}; switches ({@code --brief}, {@code --parquet}) stand alone. */
     static String[] joined(String[] args) {
         java.util.List<String> out = new java.util.ArrayList<>();
         for (int i = 0; i < args.length; i++) {
             String a = args[i];
-            if (a.startsWith("--") && !a.contains("=") && !a.equals("--brief") && !a.equals("--help")
+            if (a.startsWith("--") && !a.contains("=") && !a.equals("--brief") && !a.equals("--parquet") && !a.equals("--help")
                     && i + 1 < args.length && !args[i + 1].startsWith("--")) {
                 out.add(a + "=" + args[++i]);
             } else {
@@ -107,13 +111,17 @@ public final class Main {
         StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "\rionmark pipeline: %d structures read, %d "
                 + "records, %d errors, %.0f s, %.1f records/s", counter(m, "structures"), records, counter(m, "errors"),
                 secs, records / Math.max(secs, 1e-9)));
+        long entries = counter(m, "entries");
+        if (entries > 0) {
+            sb.append(String.format(Locale.ROOT, " (%d entries)", entries));
+        }
         long changed = counter(m, "changed");
         long pinned = counter(m, "changed-pinned");
         if (changed + pinned > 0) {
             sb.append(String.format(Locale.ROOT, ", %d changed, %d pinned changed", changed, pinned));
         }
         if (end) {
-            for (String d : new String[] {"read-us-per-file", "analyse-us", "encode-us"}) {
+            for (String d : new String[] {"read-us-per-file", "analyse-us", "entry-us", "encode-us"}) {
                 for (MetricResult<DistributionResult> x : m.getDistributions()) {
                     if (x.getName().getName().equals(d) && value(x).getCount() > 0) {
                         DistributionResult v = value(x);

@@ -11,15 +11,17 @@ import org.apache.beam.sdk.transforms.DoFn;
 import ionmark.console.internal.Records;
 
 /**
- * Turns each matched file into its structures: Markdown entries ({@code .md}) through
- * {@link MarkdownStructureReader}, everything else by {@code batch}'s own rules ({@link Records}), so
- * ids and reading errors are the same. A file that cannot be read becomes one record with the error.
+ * Turns each matched file into its structures by {@code batch}'s own rules ({@link Records}), so ids and
+ * reading errors are the same; a Markdown entry ({@code .md}) travels whole, and the annotating step reads it
+ * with the notebook's reader ({@link EntryRecords}). A file that cannot be read becomes one record with the
+ * error.
  */
 final class ReadFiles extends DoFn<FileIO.ReadableFile, Chunk> {
     private static final long serialVersionUID = 1L;
     static final String NS = "ionmark";
     private final Counter files = Metrics.counter(NS, "files");
     private final Counter structures = Metrics.counter(NS, "structures");
+    private final Counter entries = Metrics.counter(NS, "entries");
     private final Distribution readMicros = Metrics.distribution(NS, "read-us-per-file");
     private final List<Double> phs;
 
@@ -45,22 +47,18 @@ final class ReadFiles extends DoFn<FileIO.ReadableFile, Chunk> {
         try {
             text = file.readFullyAsUTF8String();
         } catch (Exception e) {
-            receiver.output(new Chunk(List.of(new Structure(name, name, "", "cannot read " + name + ": "
-                    + e.getMessage(), phs, 0))));
+            receiver.output(new Chunk(List.of(Structure.of(name, name, "", "cannot read " + name + ": "
+                    + e.getMessage(), phs))));
             return;
         }
         int n = 0;
         if (name.endsWith(".md")) {
             String entry = file.getMetadata().resourceId().getFilename().replaceFirst("\\.md$", "");
-            MarkdownStructureReader.Entry e = MarkdownStructureReader.read(text);
-            for (MarkdownStructureReader.Block b : e.blocks()) {
-                out.accept(new Structure(name, entry + "#" + b.number(), b.text(), null,
-                        b.ph() != null ? List.of(b.ph()) : phs, e.pinnedVersion()));
-                n++;
-            }
+            out.accept(Structure.entry(name, entry, text, phs));
+            entries.inc();
         } else {
             for (Records.Item it : Records.parse(text)) {
-                out.accept(new Structure(name, it.id(), it.structure(), it.error(), phs, 0));
+                out.accept(Structure.of(name, it.id(), it.structure(), it.error(), phs));
                 n++;
             }
         }

@@ -9,7 +9,9 @@
  *     System.out.println(s.words() + " at pH " + s.conditions().ph());
  * }
  * }</pre>
+ *
+ * <p>Outside a framework, {@link ionmark.notebook.api.EntryAnnotations#of} gives the same reading (1.1).
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.0.0")
+@org.osgi.annotation.versioning.Version("1.1.0")
 package ionmark.notebook.api;
