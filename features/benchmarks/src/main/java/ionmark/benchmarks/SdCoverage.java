@@ -65,7 +65,7 @@ public final class SdCoverage {
         PrintStream rows = args.length > 4 ? new PrintStream(Files.newOutputStream(Path.of(args[4])), true,
                 StandardCharsets.UTF_8) : null;
         if (rows != null) {
-            rows.println("id\terror\tsd\tgroup\tfit_n\tbasis\tsites\tpred");
+            rows.println("id\terror\tsd\tgroup\tfit_n\tbasis\tsites\tpred\tclass_sd\tcorrection\tmacro");
         }
         List<Analysis> results = data.parallelStream().map(o -> s.screen(o.structure(), Conditions.noPh())).toList();
         int[] inside = new int[4];
@@ -91,9 +91,11 @@ public final class SdCoverage {
                     inside[k] += Math.abs(e) <= k * near.sd() ? 1 : 0;
                 }
                 if (rows != null) {
-                    rows.printf(Locale.ROOT, "%s\t%.3f\t%.3f\t%s\t%d\t%s\t%d\t%.2f%n", data.get(i).id(), e, near.sd(),
-                            near.group(), table.fit(near.group()).map(f -> f.n()).orElse(-1), near.basis(),
-                            sites.size(), pred.get(p[1]));
+                    double classPka = near.derivation().isEmpty() ? near.pka() : near.derivation().get(0).value();
+                    rows.printf(Locale.ROOT, "%s\t%.3f\t%.3f\t%s\t%d\t%s\t%d\t%.2f\t%.3f\t%.3f\t%d%n", data.get(i).id(), e,
+                            near.sd(), near.group(), table.fit(near.group()).map(f -> f.n()).orElse(-1), near.basis(),
+                            sites.size(), pred.get(p[1]), table.group(near.group()).map(g -> g.sd()).orElse(Double.NaN),
+                            near.pka() - classPka, pred.size());
                 }
             }
         }
