@@ -1,7 +1,5 @@
 package ionmark.speciation.internal.structure;
 
-import java.util.Arrays;
-
 /**
  * A Kekulé structure of one conjugated system for a placement of its mobile hydrogens: every atom's
  * remaining double bond filled by a small search. Atoms are satisfied in skeleton-invariant order, each
@@ -26,29 +24,39 @@ final class KekuleSearch {
         this.atoms = atoms;
         long[] inv = m.invariants();
         long[] ringMask = rings ? m.ringMask() : new long[m.n];
-        Integer[] sorted = Arrays.stream(atoms).boxed().toArray(Integer[]::new);
-        Arrays.sort(sorted, (x, y) -> Long.compare(inv[x], inv[y])); // stable: ties keep atom order
-        this.order = new int[sorted.length];
-        for (int k = 0; k < sorted.length; k++) {
-            order[k] = sorted[k];
+        // stable insertion sorts on primitive arrays: systems are small, and ties keep atom (or bond) order
+        this.order = atoms.clone();
+        for (int a = 1; a < order.length; a++) {
+            int x = order[a];
+            int b = a - 1;
+            while (b >= 0 && inv[order[b]] > inv[x]) {
+                order[b + 1] = order[b];
+                b--;
+            }
+            order[b + 1] = x;
         }
         this.tryOrder = new int[m.n][];
-        for (int i : atoms) {
-            final int u = i;
-            Integer[] ks = new Integer[m.nbr[u].length];
+        for (int u : atoms) {
+            int[] nb = m.nbr[u];
+            int[] ks = new int[nb.length];
             for (int k = 0; k < ks.length; k++) {
-                ks[k] = k;
+                int y = k;
+                int b = k - 1;
+                while (b >= 0 && before(ringMask, inv, u, nb[y], nb[ks[b]])) {
+                    ks[b + 1] = ks[b];
+                    b--;
+                }
+                ks[b + 1] = y;
             }
-            Arrays.sort(ks, (x, y) -> {
-                int rx = (ringMask[u] & ringMask[m.nbr[u][x]]) != 0 ? 0 : 1;
-                int ry = (ringMask[u] & ringMask[m.nbr[u][y]]) != 0 ? 0 : 1;
-                return rx != ry ? Integer.compare(rx, ry) : Long.compare(inv[m.nbr[u][x]], inv[m.nbr[u][y]]);
-            });
-            tryOrder[u] = new int[ks.length];
-            for (int k = 0; k < ks.length; k++) {
-                tryOrder[u][k] = ks[k];
-            }
+            tryOrder[u] = ks;
         }
+    }
+
+    /** Whether neighbour x of u is tried strictly before neighbour y: bonds inside a ring of u first, then by invariant. */
+    private static boolean before(long[] ringMask, long[] inv, int u, int x, int y) {
+        int rx = (ringMask[u] & ringMask[x]) != 0 ? 0 : 1;
+        int ry = (ringMask[u] & ringMask[y]) != 0 ? 0 : 1;
+        return rx != ry ? rx < ry : inv[x] < inv[y];
     }
 
     /** The double bonds (a flag per bond index) for one placement, or null when no Kekulé structure exists. */
