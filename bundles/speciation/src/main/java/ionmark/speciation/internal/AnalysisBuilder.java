@@ -157,6 +157,7 @@ final class AnalysisBuilder {
         if (!brief) {
             Windows.scan(p, neutralWindows, chargedWindows);
         }
+        ionmark.speciation.internal.profile.KnownGaps.warnings(mol, p.sites()).stream().filter(w -> !warnings.contains(w)).forEach(warnings::add);
         warnings.add(CAUTION);
         final List<Double> listed = macro;
         Double pI = brief ? null : WaterRange.isoelectricPoint(inWater, p.permanentCharge() > 0, listed,

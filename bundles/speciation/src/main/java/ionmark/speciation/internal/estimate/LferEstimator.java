@@ -89,7 +89,8 @@ public final class LferEstimator {
         } else if (g.relation() == Relation.TAFT) {
             total = taft(t, mol, subs, s, terms);
         }
-        double sd = Math.sqrt(g.sd() * g.sd() + Math.pow(SD_PER_UNIT_CORRECTION * Math.abs(total), 2));
+        double sd = Math.sqrt(g.sd() * g.sd() + Math.pow(SD_PER_UNIT_CORRECTION * Math.abs(total), 2)
+                + TailTerm.variance(total, t.fit(g.id())));
         return new EstimatedSite(s, g.pka() + total, sd, terms, "estimated");
     }
 

@@ -29,7 +29,15 @@ public final class ClassProvenance {
     private static final Pattern WHOLE_START = Pattern.compile("refinement: [^;]*?pKa (-?[0-9]+(?:\\.[0-9]+)?) ->");
     private static final Pattern WHOLE_N = Pattern.compile("refinement: ([0-9]+) compounds with a site");
     private static final Pattern ONE_SITE_N = Pattern.compile("\\bn=([0-9]+)");
-    private static final Map<String, Record> CACHE = new ConcurrentHashMap<>();
+    /**
+     * The last record read per class id, with the class and fit objects it was read from: a hit needs the very
+     * same (immutable) objects, so a new table reads its notes again, and the map never holds more entries than
+     * there are class ids (a calibration trying thousands of tables does not grow it).
+     */
+    private static final Map<String, Cached> CACHE = new ConcurrentHashMap<>();
+
+    private record Cached(GroupClass g, ClassFit fit, Record record) {
+    }
 
     /** The calibration record of a class; null fields where the note does not say. */
     public record Record(Double compilationPka, Integer compounds) {
@@ -39,7 +47,13 @@ public final class ClassProvenance {
     }
 
     public static Record of(GroupClass g) {
-        return CACHE.computeIfAbsent(g.id() + '|' + g.pka() + '|' + g.note().hashCode(), k -> parse(g.note()));
+        Cached c = CACHE.get(g.id());
+        if (c != null && c.g() == g && c.fit() == null) {
+            return c.record();
+        }
+        Record r = parse(g.note());
+        CACHE.put(g.id(), new Cached(g, null, r));
+        return r;
     }
 
     /**
@@ -51,12 +65,16 @@ public final class ClassProvenance {
             return of(g);
         }
         ClassFit f = fit.get();
-        return CACHE.computeIfAbsent(g.id() + '|' + g.pka() + "|fit|" + f.n() + '|' + f.log().hashCode(), k -> {
-            Double start = f.before().get("pka");
-            Record fromLog = parse(f.log());
-            return new Record(start != null ? start : fromLog.compilationPka(),
-                    f.n() > 0 ? Integer.valueOf(f.n()) : fromLog.compounds());
-        });
+        Cached c = CACHE.get(g.id());
+        if (c != null && c.g() == g && c.fit() == f) {
+            return c.record();
+        }
+        Double start = f.before().get("pka");
+        Record fromLog = parse(f.log());
+        Record r = new Record(start != null ? start : fromLog.compilationPka(),
+                f.n() > 0 ? Integer.valueOf(f.n()) : fromLog.compounds());
+        CACHE.put(g.id(), new Cached(g, f, r));
+        return r;
     }
 
     static Record parse(String note) {
