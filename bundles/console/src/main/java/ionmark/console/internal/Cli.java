@@ -31,7 +31,8 @@ public final class Cli {
             usage: ionmark check SMILES|FILE [--ph X] [--temp C] [--ionic M] [--format text|json]
                    ionmark batch --in FILE [--out FILE] [--ph X] [--temp C] [--ionic M] [--brief]
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N] [--subset open|frozen]
-                   ionmark accuracy --series --truth FILE [--radius R] [--threshold T] [--prior P]
+                   ionmark accuracy --series --truth FILE [--series-fold K/N] [--half] [--members FILE]
+                                    [--radius R] [--threshold T] [--prior P] [--kernel linear|quadratic] [--detail]
                    ionmark annotate ENTRY.md [--format json|text]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N] [--margin M]
@@ -430,7 +431,7 @@ public final class Cli {
 
     private int accuracy(List<String> raw) {
         if (raw.contains("--series")) {
-            return series(raw);
+            return new SeriesCommand(speciation, tables.current(), out, err).run(raw);
         }
         Args a = Args.parse(raw, java.util.Set.of("--truth", "--out", "--fold", "--subset"));
         int[] f = fold(a.flags().get("--fold"));
@@ -474,24 +475,6 @@ public final class Cli {
             return 1;
         }
         return 0;
-    }
-
-    /** The series experiment ({@link SeriesExperiment}); the analog settings go in as system properties. */
-    private int series(List<String> raw) {
-        Args a = Args.parse(raw, java.util.Set.of("--truth", "--radius", "--threshold", "--prior"),
-                java.util.Set.of("--series", "--detail"));
-        java.util.Map<String, String> settings = new java.util.TreeMap<>();
-        for (String k : List.of("radius", "threshold", "prior")) {
-            if (a.flags().containsKey("--" + k)) {
-                double v = a.number("--" + k);
-                settings.put("ionmark.analog." + k, k.equals("radius") ? Integer.toString((int) v) : Double.toString(v));
-            }
-        }
-        if (a.flags().containsKey("--detail")) {
-            settings.put("ionmark.series.detail", "true");
-        }
-        List<Observation> data = truth(a).stream().filter(o -> !SeriesExperiment.frozen(o.id())).toList();
-        return new SeriesExperiment(speciation, tables.current(), out, err).run(data, settings);
     }
 
     private int calibrate(List<String> raw) {
