@@ -6,9 +6,7 @@ import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Map;
 import java.util.Set;
-import java.util.TreeMap;
 import java.util.function.Predicate;
 
 import ionmark.acidity.api.TableService;
@@ -35,7 +33,7 @@ final class AccuracyCommand implements Command {
     @Override
     public int run(List<String> raw) {
         if (raw.contains("--series")) {
-            return series(raw);
+            return new SeriesCommand(speciation, tables.current(), out, err).run(raw);
         }
         Cli.Args a = Cli.Args.parse(raw, Set.of("--truth", "--out", "--fold", "--subset"));
         int[] f = fold(a.flags().get("--fold"));
@@ -79,24 +77,6 @@ final class AccuracyCommand implements Command {
             return 1;
         }
         return 0;
-    }
-
-    /** The series experiment ({@link SeriesExperiment}); the analog settings go in as system properties. */
-    private int series(List<String> raw) {
-        Cli.Args a = Cli.Args.parse(raw, Set.of("--truth", "--radius", "--threshold", "--prior"),
-                Set.of("--series", "--detail"));
-        Map<String, String> settings = new TreeMap<>();
-        for (String k : List.of("radius", "threshold", "prior")) {
-            if (a.flags().containsKey("--" + k)) {
-                double v = a.number("--" + k);
-                settings.put("ionmark.analog." + k, k.equals("radius") ? Integer.toString((int) v) : Double.toString(v));
-            }
-        }
-        if (a.flags().containsKey("--detail")) {
-            settings.put("ionmark.series.detail", "true");
-        }
-        List<Observation> data = truth(a).stream().filter(o -> !SeriesExperiment.frozen(o.id())).toList();
-        return new SeriesExperiment(speciation, tables.current(), out, err).run(data, settings);
     }
 
     /** "K/N" → {k, n}, or null when absent. */

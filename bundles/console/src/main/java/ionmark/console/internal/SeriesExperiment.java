@@ -1,7 +1,10 @@
 package ionmark.console.internal;
 
+import java.io.IOException;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
@@ -38,6 +41,8 @@ import ionmark.speciation.api.Speciation;
 final class SeriesExperiment {
     static final int MIN_SERIES = 4;
     static final double BIASED = 0.7;
+    /** Series folds of {@code --members} when no {@code --series-fold} is given. */
+    static final int FOLDS = 5;
 
     private final Speciation speciation;
     private final AcidityTable head;
@@ -73,12 +78,45 @@ final class SeriesExperiment {
         return by;
     }
 
-    int run(List<Observation> data, Map<String, String> settings) {
+    /** The fold of a series among {@code n}: a hash of its key, so that the same series always fall together. */
+    static int seriesFold(String key, int n) {
+        return (int) (Long.parseLong(digest("ionmark-series-1:" + key).substring(0, 8), 16) % n);
+    }
+
+    /** Writes every series member as {@code id, series, fold} (tab-separated, one header line). */
+    int members(List<Observation> data, Path file, int folds) {
+        Map<String, List<Observation>> series = series(data);
+        StringBuilder b = new StringBuilder("id\tseries\tfold\n");
+        series.forEach((k, v) -> v.forEach(o -> b.append(o.id()).append('\t').append(k).append('\t')
+                .append(seriesFold(k, folds)).append('\n')));
+        try {
+            Files.writeString(file, b, StandardCharsets.UTF_8);
+        } catch (IOException e) {
+            err.println("ionmark: cannot write " + file + ": " + e.getMessage());
+            return 1;
+        }
+        int[] perFold = new int[folds];
+        series.forEach((k, v) -> perFold[seriesFold(k, folds)] += v.size());
+        out.println(String.format(Locale.ROOT, "%d series (%d compounds) written to %s; members per fold of %d: %s",
+                series.size(), series.values().stream().mapToInt(List::size).sum(), file, folds,
+                java.util.Arrays.toString(perFold)));
+        return 0;
+    }
+
+    /**
+     * Runs the experiments; with {@code fold} = {K, N} only the series of fold K take part, and with
+     * {@code halfOnly} the whole-series experiment is skipped.
+     */
+    int run(List<Observation> data, Map<String, String> settings, int[] fold, boolean halfOnly) {
         settings.forEach(System::setProperty);
         Map<String, List<Observation>> series = series(data);
+        if (fold != null) {
+            series.keySet().removeIf(k -> seriesFold(k, fold[1]) != fold[0]);
+        }
         int members = series.values().stream().mapToInt(List::size).sum();
-        out.println(String.format(Locale.ROOT, "%d series of %d or more (%d compounds) from %d compounds; settings %s",
-                series.size(), MIN_SERIES, members, data.size(), settings.isEmpty() ? "default" : settings));
+        out.println(String.format(Locale.ROOT, "%d series of %d or more (%d compounds) from %d compounds%s; settings %s",
+                series.size(), MIN_SERIES, members, data.size(), fold == null ? ""
+                        : " (series fold " + fold[0] + "/" + fold[1] + ")", settings.isEmpty() ? "default" : settings));
         // half series
         List<Observation> measured = new ArrayList<>();
         Map<String, List<Observation>> predicted = new LinkedHashMap<>();
@@ -88,21 +126,24 @@ final class SeriesExperiment {
             }
         });
         report("half series", predicted, measured, 0);
+        if (halfOnly) {
+            return 0;
+        }
         // whole series held out
         Map<String, List<Observation>> allPredicted = new LinkedHashMap<>();
         double[] sums = new double[4];
-        for (int fold = 0; fold < 5; fold++) {
+        for (int f = 0; f < 5; f++) {
             List<Observation> taught = new ArrayList<>();
             Map<String, List<Observation>> held = new LinkedHashMap<>();
             for (var e : series.entrySet()) {
-                if (Math.floorMod(e.getKey().hashCode(), 5) == fold) {
+                if (Math.floorMod(e.getKey().hashCode(), 5) == f) {
                     held.put(e.getKey(), e.getValue());
                 } else {
                     taught.addAll(e.getValue());
                 }
             }
             allPredicted.putAll(held);
-            double[] r = compare(held, taught, fold + 1);
+            double[] r = compare(held, taught, f + 1, false);
             for (int j = 0; j < 4; j++) {
                 sums[j] += r[j];
             }
@@ -113,18 +154,26 @@ final class SeriesExperiment {
     }
 
     private void report(String title, Map<String, List<Observation>> predicted, List<Observation> measured, int salt) {
-        double[] r = compare(predicted, measured, salt);
+        double[] r = compare(predicted, measured, salt, true);
         out.println(String.format(Locale.ROOT, "%s: %d measured, %d values predicted; MAE %.3f -> %.3f (ratio %.2f); "
                 + "%d series biased > %.1f: mean |bias| %.3f -> %.3f", title, measured.size(), (int) r[2], r[0] / r[2],
                 r[1] / r[2], r[1] / r[0], (int) r[3], BIASED, r[4], r[5]));
     }
 
     /** {sum |err| before, after, values, biased series, mean |bias| before, after} for the biased series. */
-    private double[] compare(Map<String, List<Observation>> predicted, List<Observation> measured, int salt) {
+    private double[] compare(Map<String, List<Observation>> predicted, List<Observation> measured, int salt,
+            boolean firing) {
         List<Observation> targets = predicted.values().stream().flatMap(List::stream).toList();
         Speciation taught = speciation.pinned(withMeasured(measured, salt));
         List<Accuracy.Scored> before = Accuracy.run(speciation, targets, null, new Progress(err, targets.size()));
         List<Accuracy.Scored> after = Accuracy.run(taught, targets, null, new Progress(err, targets.size()));
+        if (firing) {
+            AnalogFiring.Stats st = AnalogFiring.of(screen(speciation, targets), screen(taught, targets));
+            out.println(st.line());
+            if (Boolean.getBoolean("ionmark.series.detail")) {
+                st.differences().forEach(d -> out.println("  not identical: " + d));
+            }
+        }
         double absB = 0;
         double absA = 0;
         int n = 0;
@@ -170,6 +219,10 @@ final class SeriesExperiment {
         return new double[] {absB, absA, n, biased, biased == 0 ? 0 : bb / biased, biased == 0 ? 0 : ba / biased};
     }
 
+    private static List<Analysis> screen(Speciation s, List<Observation> data) {
+        return data.parallelStream().map(o -> s.screen(o.structure(), Conditions.noPh())).toList();
+    }
+
     private static String keyOf(Map<String, List<Observation>> predicted, Observation o) {
         for (var e : predicted.entrySet()) {
             if (e.getValue().contains(o)) {
@@ -204,8 +257,8 @@ final class SeriesExperiment {
         String hash = digest(head.version().hash() + "|" + salt + "|" + System.getProperties().entrySet().stream()
                 .filter(e -> String.valueOf(e.getKey()).startsWith("ionmark.analog.")).map(String::valueOf).sorted()
                 .toList() + "|" + obs.stream().map(Observation::id).toList());
-        return new AcidityTable(new TableVersion(v.number(), v.author(), v.time(), v.comment(), hash, v.parent()), refs,
-                head.groups(), head.substituents(), m, head.interaction(), head.pairs());
+        return head.withMeasured(m).withReferences(refs)
+                .withVersion(new TableVersion(v.number(), v.author(), v.time(), v.comment(), hash, v.parent()));
     }
 
     static String digest(String s) {

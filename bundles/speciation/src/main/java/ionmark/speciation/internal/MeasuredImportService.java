@@ -61,8 +61,9 @@ public final class MeasuredImportService implements MeasuredImport {
         long n = rows.stream().filter(Row::ok).count();
         TableVersion v = new TableVersion(head.version().number() + 1, author, Instant.now().toString(),
                 n + " measured compound" + (n == 1 ? "" : "s") + " imported", "", head.version().number());
-        AcidityTable draft = new AcidityTable(v, refs, head.groups(), head.substituents(), measured, head.interaction(),
-                head.pairs());
+        // the head with the new measured compounds and references, everything else as it was (the fit provenance
+        // too: without it every derivation of the draft lost its calibration lines)
+        AcidityTable draft = head.withMeasured(measured).withReferences(refs).withVersion(v);
         return new Result(rows, added, draft);
     }
 

@@ -49,13 +49,10 @@ final class MeasuredSites {
                 RootedPattern.Target target = new RootedPattern.Target(p.prepared().molecule());
                 for (int[] pair : MacroPairing.assign(m.pka(), model)) {
                     EstimatedSite s = fitted.get(pair[0]);
-                    if (AnalogCorrection.heldByPairRule(s)) {
-                        continue;
-                    }
                     double residual = m.pka().get(pair[0]) - model.get(pair[1]);
                     out.add(new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
                             SiteEnvironment.of(target, s.site(), settings.radius()), model.get(pair[1]), residual,
-                            engine.table().citation(m.source())));
+                            engine.table().citation(m.source()), AnalogCorrection.heldBy(s)));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has read every measured structure; one that fails here serves as no analog

@@ -104,6 +104,32 @@ class AnalogCorrectionTest {
     }
 
     @Test
+    void ringNitrogensHeldByADiazinePairRuleLearnFromSitesHeldByTheSameRule() {
+        // 2-amino-4,6-dimethylpyrimidine 4.82 (Perrin's compilation, from memory): both ring N are held by the
+        // 1,3-diazine pair rule, as are those of 2-amino-4-methylpyrimidine; before, held sites took no analogs
+        MeasuredCompound dimethyl = new MeasuredCompound("apm-46", "2-amino-4,6-dimethylpyrimidine", "Cc1cc(C)nc(N)n1",
+                List.of(4.82), 25, 0, "compilation value", "crc", List.of("pyrimidine"));
+        Engine bare = new Engine(BARE, 300);
+        Engine taught = new Engine(with(List.of(dimethyl)), 300);
+        String query = "Cc1ccnc(N)n1";
+        Site before = pyrimidine(bare, query);
+        Site after = pyrimidine(taught, query);
+        assertTrue(before.derivation().stream().anyMatch(t -> t.label().startsWith("pair rule ")),
+                "the query site must be held by a pair rule for this check to mean anything");
+        var lines = after.derivation().stream().filter(t -> t.label().startsWith("measured analog")).toList();
+        assertEquals(1, lines.size(), after.derivation().toString());
+        assertTrue(lines.get(0).label().contains("2-amino-4,6-dimethylpyrimidine"), lines.get(0).label());
+        double residual = 4.82 - bare.analyse("Cc1cc(C)nc(N)n1", Conditions.noPh(), false).macroPka().get(0);
+        assertEquals(Math.signum(residual), Math.signum(after.pka() - before.pka()), after.derivation().toString());
+    }
+
+    static Site pyrimidine(Engine e, String smiles) {
+        Analysis a = e.analyse(smiles, Conditions.noPh(), false);
+        assertTrue(a.ok(), a.error());
+        return a.sites().stream().filter(s -> s.group().startsWith("pyrimidine")).findFirst().orElseThrow();
+    }
+
+    @Test
     void theMeasuredCompoundItselfKeepsItsMeasuredValue() {
         Analysis a = new Engine(with(List.of(LUTIDINE_26)), 300).analyse("Cc1cccc(C)n1", Conditions.noPh());
         assertEquals(6.72, a.macroPka().get(0), 0.005);

@@ -38,8 +38,10 @@ public final class AnalogCorrection {
     }
 
     static EstimatedSite correct(SiteAnalogIndex index, RootedPattern.Target mol, EstimatedSite s) {
-        List<SiteAnalogIndex.MeasuredSite> cands = index.candidates(s.site().group());
-        if (cands.isEmpty() || heldByPairRule(s)) {
+        String held = heldBy(s);
+        List<SiteAnalogIndex.MeasuredSite> cands = index.candidates(s.site().group()).stream()
+                .filter(m -> m.held().equals(held)).toList();
+        if (cands.isEmpty()) {
             return s;
         }
         AnalogSettings cfg = index.settings();
@@ -48,7 +50,7 @@ public final class AnalogCorrection {
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
             double sim = SiteEnvironment.tanimoto(env, m.env());
-            double w = cfg.kernel(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
+            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
             if (w > 0) {
                 best.merge(m.compound().id(), new Used(m, sim, w), (a, b) -> a.weight() >= b.weight() ? a : b);
             }
@@ -80,13 +82,17 @@ public final class AnalogCorrection {
     }
 
     /**
-     * Whether a pair rule holds this site (an intramolecular hydrogen bond, groups pressed together): the
-     * rule is fitted for that geometry, and residuals of sites without it are of another kind. Such sites
-     * are neither corrected nor indexed (otherwise 3,3-dimethylglutaric acid took +0.2 from citric acid and
-     * left its reference-set tolerance).
+     * The pair rules that hold this site (an intramolecular hydrogen bond, groups pressed together, the ring
+     * nitrogens of a diazine), as one text: each rule's derivation line without the partner's atom number;
+     * empty when no rule holds it. A rule is fitted for its geometry, and the residuals of sites held by a
+     * rule are of another kind than those of free sites, so a site takes analogs only from measured sites
+     * held by the same rules (otherwise 3,3-dimethylglutaric acid took +0.2 from citric acid and left its
+     * reference-set tolerance). Skipping held sites altogether left every pyrimidine, pyrazine and
+     * pyridazine without analogs: the diazine ring rules hold all of them.
      */
-    public static boolean heldByPairRule(EstimatedSite s) {
-        return s.terms().stream().anyMatch(t -> t.label().startsWith(PAIR_RULE));
+    public static String heldBy(EstimatedSite s) {
+        return String.join(" | ", s.terms().stream().filter(t -> t.label().startsWith(PAIR_RULE))
+                .map(t -> t.label().replaceFirst(" on atom \\d+", "")).sorted().toList());
     }
 
     /** How {@link PairRules} starts the derivation line of a pair rule. */

@@ -11,14 +11,24 @@ import java.util.Locale;
  *                     weights (one identical analog with prior 1 moves a site half of its residual)
  * @param familyWeight weight factor of an analog whose site is of another class of the same family
  * @param maxAnalogs   the nearest analogs used for one site
+ * @param kernel       how the weight rises from the threshold to identity
  */
-public record AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs) {
-    /** Chosen by the series experiment's series-wise cross-validation (docs/learning-from-measurements.md). */
-    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 1.0, 0.5, 8);
+public record AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
+        Kernel kernel) {
+    /** The weight's shape between the threshold (0) and identity (1). */
+    public enum Kernel {
+        /** (T − t)/(1 − t) */
+        LINEAR,
+        /** ((T − t)/(1 − t))²: near analogs count much more than middling ones */
+        QUADRATIC
+    }
+
+    /** Chosen by the series experiment's series-wise cross-validation (docs/analog-series.md). */
+    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 1.0, 0.5, 8, Kernel.LINEAR);
 
     public AnalogSettings {
         if (radius < 1 || radius > 6 || threshold < 0 || threshold >= 1 || prior <= 0 || familyWeight < 0
-                || familyWeight > 1 || maxAnalogs < 1) {
+                || familyWeight > 1 || maxAnalogs < 1 || kernel == null) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d",
                     radius, threshold, prior, familyWeight, maxAnalogs));
@@ -27,14 +37,15 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
 
     /**
      * The defaults, each overridable by a system property ({@code ionmark.analog.radius},
-     * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}): the series experiment's
+     * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}, {@code .kernel}): the series experiment's
      * parameter search sets them; a product installation leaves them alone.
      */
     public static AnalogSettings current() {
         return new AnalogSettings(Integer.getInteger("ionmark.analog.radius", DEFAULT.radius),
                 number("ionmark.analog.threshold", DEFAULT.threshold), number("ionmark.analog.prior", DEFAULT.prior),
                 number("ionmark.analog.family", DEFAULT.familyWeight),
-                Integer.getInteger("ionmark.analog.max", DEFAULT.maxAnalogs));
+                Integer.getInteger("ionmark.analog.max", DEFAULT.maxAnalogs), Kernel.valueOf(System.getProperty(
+                        "ionmark.analog.kernel", DEFAULT.kernel.name()).toUpperCase(java.util.Locale.ROOT)));
     }
 
     private static double number(String key, double fallback) {
@@ -42,8 +53,12 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
         return v == null ? fallback : Double.parseDouble(v);
     }
 
-    /** The kernel: 0 at and below the threshold, rising linearly to 1 at identity. */
-    public double kernel(double similarity) {
-        return similarity <= threshold ? 0 : (similarity - threshold) / (1 - threshold);
+    /** The weight of an analog at this similarity: 0 at and below the threshold, rising to 1 at identity. */
+    public double weight(double similarity) {
+        if (similarity <= threshold) {
+            return 0;
+        }
+        double x = (similarity - threshold) / (1 - threshold);
+        return kernel == Kernel.QUADRATIC ? x * x : x;
     }
 }

@@ -28,9 +28,10 @@ public final class SiteAnalogIndex {
      * @param model    the model's site value before the measured values were fitted
      * @param residual measured − model at this site
      * @param citation full citation of the measured value's source
+     * @param held     the pair rules that hold the site ({@link AnalogCorrection#heldBy}), empty when none
      */
     public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
-            double residual, String citation) {
+            double residual, String citation, String held) {
     }
 
     public static final SiteAnalogIndex EMPTY = new SiteAnalogIndex(List.of(), AnalogSettings.DEFAULT);
