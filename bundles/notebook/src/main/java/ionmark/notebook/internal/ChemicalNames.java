@@ -199,6 +199,23 @@ final class ChemicalNames {
         return null; // ordinary text, or a name without carbon (an element, a salt)
     }
 
+    /**
+     * A structure field (a structure block, the quick check) that holds a chemical name instead of a SMILES or
+     * molfile: one line that is not a SMILES CDK can read. The whole text is the name; no filter applies, since the
+     * chemist put it where a structure goes. Null when the text is not such a line; a name OPSIN cannot read comes
+     * back with its reason.
+     */
+    static Name whole(String text) {
+        String t = text.strip();
+        if (t.isEmpty() || t.contains("\n") || !t.matches(".*[a-z]{3}.*") || NamedOnce.unique(t) != null) {
+            return null;
+        }
+        OpsinOutcome o = opsin(t);
+        return o.smiles() != null ? new Name(t, -1, o.smiles(), null) : new Name(t, -1, null, "'" + t + "' is neither a "
+                + "SMILES nor a chemical name that can be turned into a structure (" + o.message() + "). Check the "
+                + "spelling, or give the structure as SMILES or a molfile; Ionmark does not guess.");
+    }
+
     /** Carbon and at least three heavy atoms in the largest component. */
     private static boolean organic(String smiles) {
         try {

@@ -94,6 +94,10 @@ final class EntryReader {
                 } else if (looksLikeMolfile(c)) {
                     String title = c.lines().findFirst().orElse("").strip();
                     out.add(new Found(i, -1, title.isEmpty() ? "molfile" : "molfile '" + title + "'", "molfile", c));
+                } else if (ChemicalNames.whole(c) != null) {
+                    ChemicalNames.Name n = ChemicalNames.whole(c);
+                    out.add(n.ok() ? new Found(i, -1, n.words(), "name", n.smiles())
+                            : new Found(i, -1, n.words(), "name", n.words(), n.error()));
                 } else {
                     for (String p : Components.ofSmiles(c)) {
                         out.add(new Found(i, -1, p, "smiles", p));

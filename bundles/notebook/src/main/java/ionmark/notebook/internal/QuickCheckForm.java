@@ -27,7 +27,7 @@ final class QuickCheckForm {
         Double temp = number(t, "temp", 0, 100, "temperature must be a number from 0 to 100 °C", bad);
         Double ionic = number(is, "ionic", 0, 5, "ionic strength must be a number from 0 to 5 M", bad);
         StringBuilder sb = new StringBuilder("<form class=\"im-quick\" method=\"get\" id=\"quick\">");
-        sb.append("<label class=\"im-wide\">Structure: SMILES, or a molfile (paste it or drop the file here)"
+        sb.append("<label class=\"im-wide\">Structure: SMILES, a chemical name, or a molfile (paste it or drop the file here)"
                 + "<textarea id=\"structure\" name=\"structure\" rows=\"8\" cols=\"70\" "
                 + "ondragover=\"event.preventDefault()\" ondrop=\"event.preventDefault();const f=event.dataTransfer"
                 + ".files[0];if(f){f.text().then(x=>{this.value=x;});}\">").append(Html.esc(structure))
@@ -37,7 +37,7 @@ final class QuickCheckForm {
         sb.append("<button type=\"submit\">Check</button></form>");
         if (structure.isBlank()) {
             if (params.containsKey("structure")) {
-                sb.append("<p class=\"im-error\" role=\"alert\">Structure: give a SMILES or a molfile.</p>");
+                sb.append("<p class=\"im-error\" role=\"alert\">Structure: give a SMILES, a chemical name or a molfile.</p>");
             }
             return sb.toString();
         }

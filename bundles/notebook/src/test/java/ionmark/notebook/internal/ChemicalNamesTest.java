@@ -109,4 +109,23 @@ class ChemicalNamesTest {
         assertEquals(List.of("smiles", "name", "name"), a.structures().stream().map(AnnotatedStructure::source).toList());
         assertEquals(List.of(1, 2, 3), a.structures().stream().map(AnnotatedStructure::block).toList());
     }
+
+    @Test
+    void theQuickCheckTakesANameWhereAStructureGoes() {
+        // ibuprofen by its systematic name: a carboxylic acid (pKa 4.4–4.9, Merck Index / CRC, from memory)
+        String html = QuickCheckForm.html(CardTest.ANNOTATOR, java.util.Map.of("structure",
+                "2-(4-isobutylphenyl)propanoic acid", "ph", "7.4"));
+        assertTrue(html.contains("structure from the name") && html.contains("Structure read from the chemical name"),
+                html);
+        assertTrue(html.contains("acid"), html);
+        String bad = QuickCheckForm.html(CardTest.ANNOTATOR, java.util.Map.of("structure", "4-aminobenzoick acid",
+                "ph", "7.4"));
+        assertTrue(bad.contains("is neither a SMILES nor a chemical name"), bad);
+    }
+
+    @Test
+    void aSmilesInAStructureFieldIsNeverReadAsAName() {
+        assertNull(ChemicalNames.whole("CC(=O)O"));
+        assertNull(ChemicalNames.whole("c1ccccc1O"));
+    }
 }
