@@ -14,7 +14,15 @@ for _ in $(seq 1 600); do
   curl -s --max-time 1 -o /dev/null "http://127.0.0.1:$port/" && break
   sleep 0.1
 done
-# one warm-up check: class loading and the table-wide analog index are not what the load test measures
-curl -s --max-time 120 -o /dev/null "http://127.0.0.1:$port/panel/quick-check?ph=7.4&structure=CC(%3DO)O"
+# wait for a quick check that answers with a card: the panel registers after the page server, and class loading
+# and the table-wide analog index are not what the load test measures
+# (seen: right after the first card the panel was briefly gone again): five cards in a row, a second apart
+ok=0
+for _ in $(seq 1 240); do
+  if curl -s --max-time 60 "http://127.0.0.1:$port/panel/quick-check?ph=7.4&structure=CC(%3DO)O" | grep -q im-card
+  then ok=$((ok + 1)); else ok=0; fi
+  [ "$ok" -ge 5 ] && break
+  sleep 1
+done
 java -cp "$root/features/benchmarks/target/benchmarks.jar" ionmark.benchmarks.QuickCheckLoad \
   "http://127.0.0.1:$port" "$clients" "$seconds"
