@@ -129,6 +129,10 @@ final class TableSplitter {
         if (!base.interaction().exempt().isEmpty()) {
             base.interaction().exempt().forEach(in.putArray("exempt")::add);
         }
+        if (!base.interaction().reach().isEmpty()) { // curated reach factors (set by hand, with a source)
+            ObjectNode reach = in.putObject("reach");
+            base.interaction().reach().forEach(reach::put);
+        }
         return o;
     }
 
