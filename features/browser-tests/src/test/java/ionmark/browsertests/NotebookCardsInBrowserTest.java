@@ -176,6 +176,61 @@ class NotebookCardsInBrowserTest {
         fullShot("quick-check-glycine", 1400);
     }
 
+    @Test
+    @Order(5)
+    void aLargeMolfileGoesThroughTheQuickCheckAndANarrowPageStacksTheSiteTable() throws IOException {
+        // a V2000 molfile of docosanoic acid padded with data items to about 12 kB, more than a URL carries (while
+        // the form was sent by GET, the request was refused for its length)
+        String mol = chainAcid(22, 12_000);
+        assertTrue(mol.length() > 10_000);
+        browser.get(base + "/panel/quick-check");
+        WebElement area = browser.findElement(By.id("structure"));
+        ((org.openqa.selenium.JavascriptExecutor) browser).executeScript("arguments[0].value = arguments[1];", area,
+                mol);
+        browser.findElement(By.cssSelector("#quick button[type=submit]")).click();
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(d -> !d.findElements(By.cssSelector(".im-sites"))
+                .isEmpty() || d.findElement(By.tagName("body")).getText().contains("414"));
+        String page = browser.findElement(By.tagName("main")).getText();
+        assertFalse(page.contains("414"), page);
+        assertEquals(1, browser.findElements(By.cssSelector(".im-sites tbody tr")).size(), page);
+        // at 600 px the site table stacks its cells instead of running past the card's edge
+        browser.manage().window().setSize(new Dimension(600, 1000));
+        try {
+            Object over = ((org.openqa.selenium.JavascriptExecutor) browser).executeScript(
+                    "const t=document.querySelector('.im-sites');return t.scrollWidth - t.parentElement.clientWidth;");
+            assertTrue(((Number) over).intValue() <= 0, "the site table is " + over + " px wider than its card");
+            shot("quick-check-large-molfile-600");
+        } finally {
+            browser.manage().window().setSize(new Dimension(1400, 1000));
+        }
+    }
+
+    /** An unbranched C(n) carboxylic acid as a V2000 molfile, with a comment line padding it to about {@code size}. */
+    static String chainAcid(int carbons, int size) {
+        StringBuilder sb = new StringBuilder("chain acid\n  ionmark-test\n").append("x".repeat(Math.min(79, size)))
+                .append('\n');
+        int atoms = carbons + 2;
+        sb.append(String.format(java.util.Locale.ROOT, "%3d%3d  0  0  0  0  0  0  0  0999 V2000%n", atoms, atoms - 1));
+        for (int i = 0; i < carbons; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "%10.4f%10.4f%10.4f C   0  0  0  0  0  0  0  0  0  0  0  0%n",
+                    i * 1.3, (i % 2) * 0.75, 0.0));
+        }
+        sb.append(String.format(java.util.Locale.ROOT, "%10.4f%10.4f%10.4f O   0  0  0  0  0  0  0  0  0  0  0  0%n",
+                carbons * 1.3, 0.0, 0.0));
+        sb.append(String.format(java.util.Locale.ROOT, "%10.4f%10.4f%10.4f O   0  0  0  0  0  0  0  0  0  0  0  0%n",
+                (carbons - 1) * 1.3, 1.5, 0.0));
+        for (int i = 1; i < carbons; i++) {
+            sb.append(String.format(java.util.Locale.ROOT, "%3d%3d  1  0%n", i, i + 1));
+        }
+        sb.append(String.format(java.util.Locale.ROOT, "%3d%3d  1  0%n", carbons, carbons + 1));
+        sb.append(String.format(java.util.Locale.ROOT, "%3d%3d  2  0%n", carbons, carbons + 2));
+        sb.append("M  END\n");
+        while (sb.length() < size) {
+            sb.append("> <COMMENT>\n").append("padding for size ".repeat(4)).append("\n\n");
+        }
+        return sb.append("$$$$\n").toString();
+    }
+
     private static void signInHere() {
         browser.get(base + "/signin");
         browser.findElement(By.name("user")).sendKeys("admin");

@@ -172,6 +172,11 @@ final class Pages {
             + ".6em 1em;border-radius:4px;background:#fff}.im-quick label{display:inline-block;margin:.3em 1em .3em 0}"
             + ".im-quick .im-wide{display:block}.im-quick textarea{width:100%;font-family:'DejaVu Sans Mono',monospace}"
             + "[aria-invalid=true]{border:2px solid var(--err)}"
+            // a narrow page stacks each site row into labelled lines instead of scrolling the table sideways
+            + "@media (max-width:700px){.im-sites thead{display:none}.im-sites,.im-sites tbody,.im-sites tr,"
+            + ".im-sites td{display:block;width:auto}.im-sites tr{border-bottom:2px solid var(--line);padding:.3em 0}"
+            + ".im-sites td{border:0;padding:.1em .3em;overflow-wrap:anywhere}.im-sites td::before{content:attr(data-label) \": \";"
+            + "color:var(--muted);font-weight:600}}"
             + "@media print{.im-card{break-inside:avoid;box-shadow:none}}"
             + "@media print{body>header,.im-search,.im-button{display:none}body{background:#fff}main{border:0}}";
 }

@@ -130,18 +130,22 @@ record Card(AnnotatedStructure s) {
         for (int row = 0; row < sites.size(); row++) {
             Site s = sites.get(row);
             boolean acid = s.type().equals("acid");
-            sb.append("<tr><td>").append(row + 1).append("</td><td>").append(Html.esc(s.element()))
-                    .append(AtomNumbers.shown(s.atom())).append("</td><td><details><summary>")
+            // data-label names each cell where a narrow page stacks the row (see the host's style sheet)
+            sb.append("<tr><td data-label=\"#\">").append(row + 1).append("</td><td data-label=\"atom\">")
+                    .append(Html.esc(s.element())).append(AtomNumbers.shown(s.atom()))
+                    .append("</td><td data-label=\"site\"><details><summary>")
                     .append(Html.esc(s.groupName())).append("</summary><ol>");
             for (Term t : s.derivation()) {
                 sb.append("<li>").append(signed(t.value())).append(' ').append(Html.esc(t.label()))
                         .append(" <cite>").append(Html.esc(t.source())).append("</cite></li>");
             }
-            sb.append("</ol></details></td><td class=\"").append(acid ? "im-acid\">■ acid" : "im-base\">● base")
-                    .append("</td><td>").append(s.permanent() ? "fixed" : fmt(s.pka())).append("</td><td>")
-                    .append(s.permanent() ? "" : fmt(s.sd())).append("</td><td>")
+            sb.append("</ol></details></td><td data-label=\"kind\" class=\"")
+                    .append(acid ? "im-acid\">■ acid" : "im-base\">● base")
+                    .append("</td><td data-label=\"site pKa (micro)\">").append(s.permanent() ? "fixed" : fmt(s.pka()))
+                    .append("</td><td data-label=\"±\">").append(s.permanent() ? "" : fmt(s.sd()))
+                    .append("</td><td data-label=\"protonated\">")
                     .append(s.protonated() == null ? "–" : pct(s.protonated()))
-                    .append("</td><td>").append(Html.esc(s.basis())).append("</td></tr>");
+                    .append("</td><td data-label=\"basis\">").append(Html.esc(s.basis())).append("</td></tr>");
         }
         return sb.append("</tbody></table>").toString();
     }

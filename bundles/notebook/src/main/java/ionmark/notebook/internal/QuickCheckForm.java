@@ -26,7 +26,7 @@ final class QuickCheckForm {
         Double p = number(ph, "ph", -2, 16, "pH must be a number from -2 to 16", bad);
         Double temp = number(t, "temp", 0, 100, "temperature must be a number from 0 to 100 °C", bad);
         Double ionic = number(is, "ionic", 0, 5, "ionic strength must be a number from 0 to 5 M", bad);
-        StringBuilder sb = new StringBuilder("<form class=\"im-quick\" method=\"get\" id=\"quick\">");
+        StringBuilder sb = new StringBuilder("<form class=\"im-quick\" method=\"post\" id=\"quick\">");
         sb.append("<label class=\"im-wide\">Structure: SMILES, a chemical name, or a molfile (paste it or drop the file here)"
                 + "<textarea id=\"structure\" name=\"structure\" rows=\"8\" cols=\"70\" "
                 + "ondragover=\"event.preventDefault()\" ondrop=\"event.preventDefault();const f=event.dataTransfer"
