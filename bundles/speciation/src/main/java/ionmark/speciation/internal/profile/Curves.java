@@ -31,16 +31,23 @@ public final class Curves {
         Map<Integer, double[]> states = new TreeMap<>();
         List<EstimatedSite> titr = p.sites().stream().filter(s -> !s.site().group().permanent()).toList();
         titr.forEach(s -> site.put(s.site().atom(), new double[n]));
+        // a measured compound whose values all found a site: charge and charge states from its measured macroscopic
+        // constants, as the analysis at one pH gives them (the site model's statistical factors would move them)
+        boolean measured = p.measured().isPresent() && ChargeProfile.measuredFit(p);
         for (int k = 0; k < n; k++) {
             ph[k] = from + k * step;
             Populations pop = solver.solve(p.model(), ph[k]);
-            mean[k] = pop.meanCharge() + p.permanentCharge();
             for (int i = 0; i < titr.size(); i++) {
                 site.get(titr.get(i).site().atom())[k] = pop.protonated()[i];
             }
-            for (var e : pop.chargeStates().entrySet()) {
-                states.computeIfAbsent(e.getKey() + p.permanentCharge(), z -> new double[n])[k] = e.getValue();
+            Map<Integer, Double> at = measured ? ChargeProfile.fromMeasured(p, ph[k])
+                    : ChargeProfile.shift(pop.chargeStates(), p.permanentCharge());
+            double m = 0;
+            for (var e : at.entrySet()) {
+                states.computeIfAbsent(e.getKey(), z -> new double[n])[k] = e.getValue();
+                m += e.getKey() * e.getValue();
             }
+            mean[k] = measured ? m : pop.meanCharge() + p.permanentCharge();
         }
         return new Curve(ph, mean, site, states);
     }
