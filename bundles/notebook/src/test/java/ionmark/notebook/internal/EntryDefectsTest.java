@@ -84,7 +84,7 @@ class EntryDefectsTest {
     void atomNumbersStartAtOneInTheSiteTable() {
         // acetic acid CC(=O)O: the OH is the 4th heavy atom
         String html = CardTest.decorate(text("pH 7", 0), smiles("CC(=O)O", 0)).get(0).html();
-        assertTrue(html.contains("<td>O4</td>"), html);
+        assertTrue(html.contains("<td data-label=\"atom\">O4</td>"), html);
     }
 
     @Test
