@@ -66,6 +66,18 @@ final class WorkupPhases {
         return out;
     }
 
+    /**
+     * Whether the net-neutral population is at least 99 % the uncharged species. The share does not depend on pH
+     * (it is fixed by the site constants), so the analysis at the stated pH gives it; without a pH, or with no
+     * neutral population to take it from, the structure is not claimed extractable.
+     */
+    static boolean extractableWhenNeutral(Analysis a) {
+        if (!a.ok() || a.fractionNeutral() == null || a.fractionUncharged() == null || !(a.fractionNeutral() > 1e-12)) {
+            return false;
+        }
+        return a.fractionUncharged() / a.fractionNeutral() >= 0.99;
+    }
+
     /** "at pH 2.5: 99.7 % in the aqueous layer (EtOAc/water 1:1, assumed)". */
     static String sentence(Partition p) {
         double org = 100 * p.fractionOrganic();
@@ -80,10 +92,17 @@ final class WorkupPhases {
         return String.format(Locale.ROOT, v >= 99.95 ? "%.2f %%" : "%.1f %%", Math.min(v, 99.99));
     }
 
-    /** Where structure a is ≥ 99 % neutral while b is ≥ 99 % charged, each range at least 0.5 pH units wide. */
+    /**
+     * Where structure a is ≥ 99 % neutral while b is ≥ 99 % charged, each range at least 0.5 pH units wide. A
+     * structure whose net-neutral form is mostly a zwitterion (an amino acid) never counts as going to the organic
+     * phase: its windows are of net charge zero, and a zwitterion stays in water.
+     */
     static List<Separation> separations(List<String> words, List<Analysis> analyses) {
         List<Separation> out = new ArrayList<>();
         for (int i = 0; i < analyses.size(); i++) {
+            if (!extractableWhenNeutral(analyses.get(i))) {
+                continue;
+            }
             for (int j = 0; j < analyses.size(); j++) {
                 if (i == j || words.get(i).equals(words.get(j))) {
                     continue;
