@@ -31,7 +31,7 @@ import ionmark.speciation.internal.profile.Partition;
 import ionmark.speciation.internal.profile.SpeciesList;
 import ionmark.speciation.internal.profile.WaterRange;
 import ionmark.speciation.internal.profile.Windows;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * The last stage: the {@link Analysis} for a prepared problem. Sites with their derivations,
@@ -127,7 +127,7 @@ final class AnalysisBuilder {
         }
         List<Site> sites = new ArrayList<>();
         List<EstimatedSite> titrNow = p.sites().stream().filter(x -> !x.site().group().permanent()).toList();
-        int[][][] paths = brief ? null : SiteInteractions.distances(new RootedPattern.Target(mol), p.sites());
+        int[][][] paths = brief ? null : SiteInteractions.distances(new MatchTarget(mol), p.sites());
         int t = 0;
         for (EstimatedSite s : p.sites()) {
             GroupClass g = s.site().group();

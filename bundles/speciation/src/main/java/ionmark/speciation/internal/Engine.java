@@ -34,7 +34,7 @@ import ionmark.speciation.internal.microstates.SpeciesActivity;
 import ionmark.speciation.internal.profile.Curves;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.PerceivedSite;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
@@ -121,7 +121,7 @@ public final class Engine {
     Problem prepare(String input, Conditions c) throws StructureException {
         StructureReader.Prepared prep = reader.read(input);
         IAtomContainer mol = prep.molecule();
-        RootedPattern.Target target = new RootedPattern.Target(mol);
+        MatchTarget target = new MatchTarget(mol);
         int[][] adj = target.adjacency();
         List<PerceivedSite> perceived = SitePerceiver.perceive(table, target);
         List<EstimatedSite> est = new ArrayList<>(LferEstimator.estimate(table, mol, target, perceived));
@@ -151,7 +151,7 @@ public final class Engine {
 
     /** The model's macroscopic constants at 25 °C, I = 0, with no measured value or analog applied (for the analog index). */
     List<Double> modelConstants(String input) throws StructureException {
-        RootedPattern.Target target = new RootedPattern.Target(reader.read(input).molecule());
+        MatchTarget target = new MatchTarget(reader.read(input).molecule());
         List<EstimatedSite> est = LferEstimator.estimate(table, target.molecule(), target,
                 SitePerceiver.perceive(table, target));
         double[][] inter = interactions.interactions(SiteInteractions.distances(target, est), est);
@@ -164,7 +164,7 @@ public final class Engine {
     public Set<String> pairRules(String input) {
         try {
             StructureReader.Prepared prep = reader.read(input);
-            RootedPattern.Target target = new RootedPattern.Target(prep.molecule());
+            MatchTarget target = new MatchTarget(prep.molecule());
             List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(), target,
                     SitePerceiver.perceive(table, target));
             Set<String> used = new TreeSet<>();

@@ -13,7 +13,7 @@ import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.SiteAnalogIndex;
 import ionmark.speciation.internal.estimate.SiteEnvironment;
 import ionmark.speciation.internal.microstates.Problem;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.structure.StructureException;
 
 /**
@@ -46,7 +46,7 @@ final class MeasuredSites {
                 }
                 List<Double> model = engine.modelConstants(m.smiles()).stream()
                         .filter(v -> v >= AnalysisBuilder.MACRO_LOW && v <= AnalysisBuilder.MACRO_HIGH).sorted().toList();
-                RootedPattern.Target target = new RootedPattern.Target(p.prepared().molecule());
+                MatchTarget target = new MatchTarget(p.prepared().molecule());
                 for (int[] pair : MacroPairing.assign(m.pka(), model)) {
                     EstimatedSite s = fitted.get(pair[0]);
                     double residual = m.pka().get(pair[0]) - model.get(pair[1]);

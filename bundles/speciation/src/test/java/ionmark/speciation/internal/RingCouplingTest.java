@@ -15,7 +15,7 @@ import ionmark.acidity.internal.TableSnapshotService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.internal.microstates.SitePaths;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.structure.StructureReader;
 
 /**
@@ -31,7 +31,7 @@ class RingCouplingTest {
 
     static int[] paths(String smiles, int a, int b) throws Exception {
         var mol = new StructureReader(300).read(smiles).molecule();
-        var target = new RootedPattern.Target(mol);
+        var target = new MatchTarget(mol);
         boolean[] sat = new boolean[mol.getAtomCount()];
         for (int i = 0; i < sat.length; i++) {
             sat[i] = !target.aromatic(i);

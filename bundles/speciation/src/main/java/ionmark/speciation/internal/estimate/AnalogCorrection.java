@@ -6,7 +6,7 @@ import java.util.List;
 import java.util.Locale;
 
 import ionmark.speciation.api.Term;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * Moves each estimated site toward its measured analogs: sites of the same class (or, with less weight,
@@ -26,7 +26,7 @@ public final class AnalogCorrection {
     record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight) {
     }
 
-    public static List<EstimatedSite> apply(SiteAnalogIndex index, RootedPattern.Target mol, List<EstimatedSite> est) {
+    public static List<EstimatedSite> apply(SiteAnalogIndex index, MatchTarget mol, List<EstimatedSite> est) {
         if (index.size() == 0) {
             return est;
         }
@@ -37,7 +37,7 @@ public final class AnalogCorrection {
         return out;
     }
 
-    static EstimatedSite correct(SiteAnalogIndex index, RootedPattern.Target mol, EstimatedSite s) {
+    static EstimatedSite correct(SiteAnalogIndex index, MatchTarget mol, EstimatedSite s) {
         String held = heldBy(s);
         List<SiteAnalogIndex.MeasuredSite> cands = index.candidates(s.site().group()).stream()
                 .filter(m -> m.held().equals(held)).toList();

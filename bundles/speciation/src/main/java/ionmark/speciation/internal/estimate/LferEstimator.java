@@ -13,7 +13,7 @@ import ionmark.acidity.api.Relation;
 import ionmark.acidity.api.Substituent;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.internal.sites.CompiledTable;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.sites.PerceivedSite;
 
 /**
@@ -60,11 +60,11 @@ public final class LferEstimator {
     }
 
     public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, List<PerceivedSite> sites) {
-        return estimate(table, mol, new RootedPattern.Target(mol), sites);
+        return estimate(table, mol, new MatchTarget(mol), sites);
     }
 
     /** {@code target} is {@code mol} as arrays, shared with site perception. */
-    public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, RootedPattern.Target target,
+    public static List<EstimatedSite> estimate(CompiledTable table, IAtomContainer mol, MatchTarget target,
             List<PerceivedSite> sites) {
         SubstituentMap subs = new SubstituentMap(table, target);
         int[][] rings = null; // found when the first Hammett site asks
@@ -78,7 +78,7 @@ public final class LferEstimator {
         return out;
     }
 
-    private static EstimatedSite estimate(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, int[][] rings,
+    private static EstimatedSite estimate(AcidityTable t, MatchTarget mol, SubstituentMap subs, int[][] rings,
             PerceivedSite s) {
         GroupClass g = s.group();
         List<Term> terms = new ArrayList<>();
@@ -96,7 +96,7 @@ public final class LferEstimator {
 
     // ------------------------------------------------------------------ Hammett
 
-    private static double hammett(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, int[][] rings,
+    private static double hammett(AcidityTable t, MatchTarget mol, SubstituentMap subs, int[][] rings,
             PerceivedSite s, List<Term> terms) {
         GroupClass g = s.group();
         int centre = s.centres()[0];
@@ -166,7 +166,7 @@ public final class LferEstimator {
      * ring system are conjugated with it (σp, or σp⁻/σp⁺ where the class is in through-resonance), at
      * an even number not (σm); either is scaled by {@link #FUSED_TRANSMISSION}.
      */
-    private static double fused(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, int[][] rings,
+    private static double fused(AcidityTable t, MatchTarget mol, SubstituentMap subs, int[][] rings,
             PerceivedSite s, int[] ring, boolean[] inRing, List<Term> terms) {
         GroupClass g = s.group();
         int centre = s.centres()[0];
@@ -225,7 +225,7 @@ public final class LferEstimator {
     }
 
     /** Whether {@code ring} (a closed path) is aromatic and shares a bond with the ring marked in {@code inRing}. */
-    private static boolean fusedAromatic(RootedPattern.Target mol, int[] ring, boolean[] inRing) {
+    private static boolean fusedAromatic(MatchTarget mol, int[] ring, boolean[] inRing) {
         int shared = 0;
         for (int i = 0; i < ring.length - 1; i++) {
             if (!mol.aromatic(ring[i])) {
@@ -239,7 +239,7 @@ public final class LferEstimator {
     }
 
     /** Bonds from {@code from} to each atom of {@code within}, through those atoms only; -1 elsewhere. */
-    private static int[] distancesWithin(RootedPattern.Target mol, boolean[] within, int from) {
+    private static int[] distancesWithin(MatchTarget mol, boolean[] within, int from) {
         int[] dist = new int[mol.atomCount()];
         Arrays.fill(dist, -1);
         int[] queue = new int[dist.length];
@@ -293,7 +293,7 @@ public final class LferEstimator {
 
     // ------------------------------------------------------------------ Taft / inductive
 
-    private static double taft(AcidityTable t, RootedPattern.Target mol, SubstituentMap subs, PerceivedSite s,
+    private static double taft(AcidityTable t, MatchTarget mol, SubstituentMap subs, PerceivedSite s,
             List<Term> terms) {
         GroupClass g = s.group();
         double a = Double.isNaN(g.attenuation()) ? 0.45 : g.attenuation();

@@ -1,7 +1,7 @@
 package ionmark.speciation.internal.estimate;
 
 
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * Circular (Morgan) atom identifiers, in the manner of extended-connectivity fingerprints
@@ -24,7 +24,7 @@ final class Morgan {
      * Every atom's identifier after rounds 0 to {@code radius}: {@code ids[r][atom]}, computed as
      * {@link #of} computes them (for the site environments of {@link SiteEnvironment}).
      */
-    static int[][] identifiers(RootedPattern.Target mol, int radius) {
+    static int[][] identifiers(MatchTarget mol, int radius) {
         int n = mol.atomCount();
         int[][] nbr = mol.adjacency();
         int[][] ids = new int[radius + 1][n];

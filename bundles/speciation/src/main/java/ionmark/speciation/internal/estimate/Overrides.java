@@ -13,7 +13,7 @@ import org.openscience.cdk.smiles.SmilesGenerator;
 
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.internal.sites.CompiledTable;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
 
@@ -33,7 +33,7 @@ public final class Overrides {
             try {
                 IAtomContainer mol = reader.read(m.smiles()).molecule();
                 exact.putIfAbsent(canonical(mol), m);
-                formulas.add(formula(new RootedPattern.Target(mol)));
+                formulas.add(formula(new MatchTarget(mol)));
             } catch (StructureException | RuntimeException e) {
                 // the validator has parsed every measured structure; nothing to do for one that fails here
             }
@@ -41,7 +41,7 @@ public final class Overrides {
     }
 
     /** The measured compound that is this structure, if the table has it. */
-    public Optional<MeasuredCompound> exact(RootedPattern.Target mol) {
+    public Optional<MeasuredCompound> exact(MatchTarget mol) {
         if (!formulas.contains(formula(mol))) {
             return Optional.empty();
         }
@@ -53,7 +53,7 @@ public final class Overrides {
      * canonical SMILES imply equal formulas and so equal keys, which makes this a safe screen before
      * the costlier canonical form; a collision only costs that canonical form.
      */
-    static long formula(RootedPattern.Target mol) {
+    static long formula(MatchTarget mol) {
         int[] count = new int[120];
         int charge = 0;
         for (int i = 0; i < mol.atomCount(); i++) {

@@ -11,7 +11,7 @@ import ionmark.acidity.api.SiteType;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.internal.AtomText;
 import ionmark.speciation.internal.sites.CompiledTable;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * The table's pair rules: two sites of one kind that hold each other's proton (or charge) move
@@ -31,7 +31,7 @@ public final class PairRules {
      * term) and {@link PairRule#interaction()} is added to the pair's entry in
      * {@code inter}; {@code used} collects the rule ids. A site in no pair is returned as it came.
      */
-    public List<EstimatedSite> apply(RootedPattern.Target target, List<EstimatedSite> est, double[][] inter,
+    public List<EstimatedSite> apply(MatchTarget target, List<EstimatedSite> est, double[][] inter,
             Set<String> used) {
         List<CompiledTable.Pair> rules = table.pairs();
         if (rules.isEmpty()) {

@@ -3,7 +3,7 @@ package ionmark.speciation.internal.estimate;
 import java.util.Arrays;
 
 import ionmark.speciation.internal.sites.PerceivedSite;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * The local environment of one site as a set of hashed features, compared by Tanimoto similarity:
@@ -24,7 +24,7 @@ public final class SiteEnvironment {
     }
 
     /** Sorted distinct feature hashes of the site's environment. */
-    public static int[] of(RootedPattern.Target mol, PerceivedSite site, int radius) {
+    public static int[] of(MatchTarget mol, PerceivedSite site, int radius) {
         int[][] ids = Morgan.identifiers(mol, radius);
         int[][] nbr = mol.adjacency();
         int n = mol.atomCount();

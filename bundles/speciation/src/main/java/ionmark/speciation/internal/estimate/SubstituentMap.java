@@ -7,7 +7,7 @@ import java.util.List;
 import java.util.Map;
 
 import ionmark.speciation.internal.sites.CompiledTable;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * Substituent matches in one molecule by attachment atom, largest pattern first. One map per
@@ -26,11 +26,11 @@ final class SubstituentMap {
     }
 
     private final CompiledTable table;
-    private final RootedPattern.Target target;
+    private final MatchTarget target;
     /** Filled per attachment atom on first use: most estimates ask about a handful of atoms. */
     private final Map<Integer, List<Hit>> byAttachment = new HashMap<>();
 
-    SubstituentMap(CompiledTable table, RootedPattern.Target target) {
+    SubstituentMap(CompiledTable table, MatchTarget target) {
         this.table = table;
         this.target = target;
     }

@@ -8,7 +8,7 @@ import ionmark.acidity.api.SiteInteraction;
 import ionmark.acidity.api.SiteType;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.internal.estimate.EstimatedSite;
-import ionmark.speciation.internal.sites.RootedPattern;
+import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * From estimated sites to the numeric microstate model: the bond paths between sites, the
@@ -98,7 +98,7 @@ public final class SiteInteractions {
     }
 
     /** The bond paths between the sites' atoms ({@link SitePaths#between}), in {@link #inDistanceOrder}. */
-    public static int[][][] distances(RootedPattern.Target target, List<EstimatedSite> est) {
+    public static int[][][] distances(MatchTarget target, List<EstimatedSite> est) {
         int k = est.size();
         List<EstimatedSite> ordered = inDistanceOrder(est);
         int[][] adj = target.adjacency();

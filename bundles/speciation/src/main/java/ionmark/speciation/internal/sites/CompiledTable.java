@@ -178,27 +178,27 @@ public final class CompiledTable {
      * The classes whose site may be atom {@code atom}, most specific first: those rooted at its
      * element whose root and root neighbours pass the screens on the atom and its neighbourhood.
      */
-    public List<Group> groupsAt(RootedPattern.Target t, int atom) {
+    public List<Group> groupsAt(MatchTarget t, int atom) {
         List<Group> bySignature = screened(groupsBySignature, groupsRootedAt(t.atomicNumber(atom)), Group::pattern, t,
                 atom);
         return nearby(groupsByNeighbourhood, bySignature, Group::pattern, t, atom);
     }
 
     /** The substituents that may attach by atom {@code atom}, most specific first; as {@link #groupsAt}. */
-    public List<Sub> substituentsAt(RootedPattern.Target t, int atom) {
+    public List<Sub> substituentsAt(MatchTarget t, int atom) {
         List<Sub> bySignature = screened(subsBySignature, substituentsRootedAt(t.atomicNumber(atom)), Sub::pattern, t,
                 atom);
         return nearby(subsByNeighbourhood, bySignature, Sub::pattern, t, atom);
     }
 
     private static <T> List<T> screened(Map<Long, List<T>> cache, List<T> all, Function<T, RootedPattern> p,
-            RootedPattern.Target t, int atom) {
+            MatchTarget t, int atom) {
         long key = t.signature(atom);
         return filtered(cache, key < 0 ? null : key, MAX_SIGNATURES, all, x -> p.apply(x).rootMayMatch(t, atom));
     }
 
     private static <T> List<T> nearby(Map<Neighbourhood, List<T>> cache, List<T> candidates,
-            Function<T, RootedPattern> p, RootedPattern.Target t, int atom) {
+            Function<T, RootedPattern> p, MatchTarget t, int atom) {
         if (candidates.isEmpty()) {
             return candidates;
         }
@@ -233,7 +233,7 @@ public final class CompiledTable {
      * aromaticity and ring membership, sorted: what {@link RootedPattern#neighboursMayMatch} reads.
      */
     private record Neighbourhood(long[] words) {
-        static Neighbourhood of(RootedPattern.Target t, int atom) {
+        static Neighbourhood of(MatchTarget t, int atom) {
             long own = t.signature(atom);
             if (own < 0) {
                 return null;

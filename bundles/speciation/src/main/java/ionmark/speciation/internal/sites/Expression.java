@@ -3,7 +3,7 @@ package ionmark.speciation.internal.sites;
 import org.openscience.cdk.isomorphism.matchers.Expr;
 
 /**
- * A SMARTS atom or bond expression compiled to a tree that is evaluated over a {@link RootedPattern.Target}'s
+ * A SMARTS atom or bond expression compiled to a tree that is evaluated over a {@link MatchTarget}'s
  * precomputed atom and bond invariants, so that matching reads int arrays instead of asking CDK's atom
  * and bond objects for each primitive.
  *
@@ -209,7 +209,7 @@ final class Expression {
      * -1 when one of them is outside the packed range: two atoms with the same signature pass the same
      * screens.
      */
-    static long signature(RootedPattern.Target t, int a) {
+    static long signature(MatchTarget t, int a) {
         long key = 0;
         key = pack(key, t.z[a] + 1, 8);
         key = pack(key, t.aromatic[a] ? 1 : 0, 1);
@@ -233,7 +233,7 @@ final class Expression {
     }
 
     /** Whether molecule atom {@code a} of {@code t} matches. */
-    boolean matchesAtom(RootedPattern.Target t, int a) {
+    boolean matchesAtom(MatchTarget t, int a) {
         switch (op) {
             case AND: return left.matchesAtom(t, a) && right.matchesAtom(t, a);
             case OR: return left.matchesAtom(t, a) || right.matchesAtom(t, a);
@@ -266,7 +266,7 @@ final class Expression {
     }
 
     /** Whether molecule bond {@code b} of {@code t} matches. */
-    boolean matchesBond(RootedPattern.Target t, int b) {
+    boolean matchesBond(MatchTarget t, int b) {
         switch (op) {
             case AND: return left.matchesBond(t, b) && right.matchesBond(t, b);
             case OR: return left.matchesBond(t, b) || right.matchesBond(t, b);

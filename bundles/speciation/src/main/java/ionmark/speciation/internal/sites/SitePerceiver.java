@@ -23,10 +23,10 @@ public final class SitePerceiver {
      * with its site on the atom wins.
      */
     public static List<PerceivedSite> perceive(CompiledTable table, IAtomContainer mol) {
-        return perceive(table, new RootedPattern.Target(mol));
+        return perceive(table, new MatchTarget(mol));
     }
 
-    public static List<PerceivedSite> perceive(CompiledTable table, RootedPattern.Target target) {
+    public static List<PerceivedSite> perceive(CompiledTable table, MatchTarget target) {
         List<PerceivedSite> out = new ArrayList<>();
         for (int atom = 0; atom < target.atomCount(); atom++) {
             ionmark.speciation.internal.work.Budget.check();

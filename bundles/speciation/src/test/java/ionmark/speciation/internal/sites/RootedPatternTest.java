@@ -73,7 +73,7 @@ class RootedPatternTest {
     }
 
     static Map<Integer, Set<Set<Integer>>> rooted(RootedPattern p, IAtomContainer mol, int root) {
-        RootedPattern.Target t = new RootedPattern.Target(mol);
+        MatchTarget t = new MatchTarget(mol);
         List<int[]> all = new ArrayList<>();
         for (int a = 0; a < mol.getAtomCount(); a++) {
             p.forEach(t, a, m -> all.add(m.clone()));
@@ -115,7 +115,7 @@ class RootedPatternTest {
         // one mapping per atom set may keep the other orientation and lose the attachment
         IAtomContainer mol = new StructureReader(300).read("C#CC(C)(C)N(C)C").molecule();
         RootedPattern ethynyl = new RootedPattern(query("C#C"), 0);
-        RootedPattern.Target t = new RootedPattern.Target(mol);
+        MatchTarget t = new MatchTarget(mol);
         assertNotNull(ethynyl.first(t, 1));
         assertNotNull(ethynyl.first(t, 0));
         assertNull(ethynyl.first(t, 2));
@@ -124,10 +124,10 @@ class RootedPatternTest {
     @Test
     void ringClosuresInTheQueryAreChecked() throws Exception {
         RootedPattern sixRing = new RootedPattern(query("[NX3;R]1CCCCC1"), 0);
-        assertNotNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("C1CCNCC1").molecule()), 3));
+        assertNotNull(sixRing.first(new MatchTarget(new StructureReader(300).read("C1CCNCC1").molecule()), 3));
         // a five-membered ring and an open chain have no six-membered closure
-        assertNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("C1CCNC1").molecule()), 3));
-        assertNull(sixRing.first(new RootedPattern.Target(new StructureReader(300).read("CCCNCCC").molecule()), 3));
+        assertNull(sixRing.first(new MatchTarget(new StructureReader(300).read("C1CCNC1").molecule()), 3));
+        assertNull(sixRing.first(new MatchTarget(new StructureReader(300).read("CCCNCCC").molecule()), 3));
     }
 
     /**
@@ -151,7 +151,7 @@ class RootedPatternTest {
         drawings.put("OC(=O)C=CC(=O)O", false); // geometry not stated
         for (Map.Entry<String, Boolean> d : drawings.entrySet()) {
             IAtomContainer mol = reader.read(d.getKey()).molecule();
-            RootedPattern.Target t = new RootedPattern.Target(mol);
+            MatchTarget t = new MatchTarget(mol);
             boolean found = false;
             for (int a = 0; a < mol.getAtomCount(); a++) {
                 found |= p.matchesAt(t, a);
@@ -217,7 +217,7 @@ class RootedPatternTest {
     void candidateListsKeepEveryPatternThatMatches() throws Exception {
         int checked = 0;
         for (IAtomContainer mol : referenceMolecules()) {
-            RootedPattern.Target t = new RootedPattern.Target(mol);
+            MatchTarget t = new MatchTarget(mol);
             for (int a = 0; a < mol.getAtomCount(); a++) {
                 List<CompiledTable.Group> groups = TABLE.groupsAt(t, a);
                 for (CompiledTable.Group g : TABLE.groupsRootedAt(t.atomicNumber(a))) {
@@ -242,8 +242,8 @@ class RootedPatternTest {
     @Test
     void neighbourhoodScreenNeedsThePartnersOfTheRoot() throws Exception {
         StructureReader reader = new StructureReader(300);
-        RootedPattern.Target toluene = new RootedPattern.Target(reader.read("Cc1ccccc1").molecule());
-        RootedPattern.Target nitromethane = new RootedPattern.Target(reader.read("C[N+](=O)[O-]").molecule());
+        MatchTarget toluene = new MatchTarget(reader.read("Cc1ccccc1").molecule());
+        MatchTarget nitromethane = new MatchTarget(reader.read("C[N+](=O)[O-]").molecule());
         CompiledTable.Group nitro = TABLE.groups().stream().filter(g -> g.group().id().equals("nitroalkane"))
                 .findFirst().orElseThrow();
         assertTrue(TABLE.groupsRootedAt(6).contains(nitro));
