@@ -155,6 +155,8 @@ class NotebookCardsInBrowserTest {
                 "the preview is beside the editor");
         shot("editor-beside-preview");
         browser.findElement(By.cssSelector(".im-editpane button[type=submit]")).click();
+        // the save answers with a redirect to the entry; leaving before it arrives could cancel the save
+        new WebDriverWait(browser, Duration.ofSeconds(30)).until(d -> d.getCurrentUrl().endsWith("/entry/extraction-of-batch-q-3"));
         browser.get(base + "/?q=Q-3");
         String list = browser.findElement(By.tagName("main")).getText();
         assertTrue(list.contains("Extraction of batch Q-3") && list.contains("admin"), list);
