@@ -58,8 +58,24 @@ public final class Engine {
     private volatile SiteAnalogIndex analogs;
     /** Set while the index is built, under the lock: a measured compound read then that is no exact match gets none. */
     private boolean buildingAnalogs;
+    /** False for the engines a calibration fits class values with: analogs correct on top of the fitted model. */
+    private final boolean analogsOn;
 
     public Engine(AcidityTable table, int maxHeavyAtoms) {
+        this(table, maxHeavyAtoms, true);
+    }
+
+    /**
+     * An engine that leaves measured analogs out (exact measured compounds still count). Calibration fits class
+     * values on this model, so that the analog step, applied on top at run time, corrects what the classes do not
+     * describe instead of being absorbed into them; the analog prior can then change without refitting the table.
+     */
+    static Engine withoutAnalogs(AcidityTable table, int maxHeavyAtoms) {
+        return new Engine(table, maxHeavyAtoms, false);
+    }
+
+    private Engine(AcidityTable table, int maxHeavyAtoms, boolean analogsOn) {
+        this.analogsOn = analogsOn;
         this.table = new CompiledTable(table);
         this.overrides = new Overrides(this.table);
         this.reader = new StructureReader(maxHeavyAtoms);
@@ -132,7 +148,7 @@ public final class Engine {
         est = pairs.apply(target, est, inter, new HashSet<>());
         if (measured.isPresent()) {
             est = measuredFit.fit(mol, adj, inter, est, measured.get());
-        } else {
+        } else if (analogsOn) {
             est = AnalogCorrection.apply(analogIndex(), target, est);
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);

@@ -22,9 +22,9 @@ import ionmark.speciation.api.Site;
 
 /**
  * Second calibration stage: each class's reference pKa refined against every compound that has a
- * site of that class, through the whole model (substituent terms, analogs, site interactions,
+ * site of that class, through the whole model (substituent terms, site interactions,
  * microstates, macroscopic constants), scored with the same one-to-one pairing as the accuracy
- * report.
+ * report. Measured analogs are left out ({@code Engine.withoutAnalogs}): they correct on top of the fitted model.
  *
  * <p>The first stage ({@code Calibration}) can only use compounds with one reported value and sites
  * of one type, so the many multiprotic compounds (amino acids, hydroxy-azines with a ring nitrogen,
@@ -90,7 +90,7 @@ final class ModelCalibration {
 
     Outcome refine(AcidityTable start, List<Observation> data, String refId) {
         List<Observation> usable = data.stream().filter(o -> !o.pka().isEmpty()).toList();
-        Engine e0 = new Engine(start, maxHeavyAtoms);
+        Engine e0 = Engine.withoutAnalogs(start, maxHeavyAtoms);
         Map<String, List<Observation>> byClass = new LinkedHashMap<>();
         Map<String, List<Observation>> withPartner = new HashMap<>();
         usable.parallelStream().map(o -> Map.entry(o, e0.analyse(o.structure(), Conditions.noPh(), true)))
@@ -190,7 +190,7 @@ final class ModelCalibration {
         t = withHonestSd(t, usable, refId);
         List<Move> moves = new ArrayList<>();
         List<GroupClass> groups = new ArrayList<>();
-        Engine end = new Engine(t, maxHeavyAtoms);
+        Engine end = Engine.withoutAnalogs(t, maxHeavyAtoms);
         for (GroupClass g : t.groups()) {
             double before = origin.getOrDefault(g.id(), g.pka());
             double rhoBefore = rhoOrigin.getOrDefault(g.id(), g.rho());
@@ -245,7 +245,7 @@ final class ModelCalibration {
         if (start.pairs().isEmpty()) {
             return new PairsRefined(start, pairMoves);
         }
-        Engine e0 = new Engine(start, maxHeavyAtoms);
+        Engine e0 = Engine.withoutAnalogs(start, maxHeavyAtoms);
         Map<String, List<Observation>> byRule = new LinkedHashMap<>();
         usable.parallelStream().map(o -> Map.entry(o, e0.pairRules(o.structure()))).toList().forEach(en ->
                 en.getValue().forEach(r -> byRule.computeIfAbsent(r, k -> new ArrayList<>()).add(en.getKey())));
@@ -255,7 +255,7 @@ final class ModelCalibration {
             if (obs.size() < MIN_COMPOUNDS || !refinable(r0)) {
                 continue;
             }
-            java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(new Engine(x, maxHeavyAtoms), obs)
+            java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(Engine.withoutAnalogs(x, maxHeavyAtoms), obs)
                     + PRIOR_WEIGHT * (huber(pair(x, r0.id()).singly() - r0.singly())
                             + huber(pair(x, r0.id()).doubly() - r0.doubly()));
             double[] best = {objective.applyAsDouble(t)};
@@ -336,7 +336,7 @@ final class ModelCalibration {
      * {@link #MAX_SD}.
      */
     AcidityTable withHonestSd(AcidityTable t, List<Observation> obs, String refId) {
-        Engine e = new Engine(t, maxHeavyAtoms);
+        Engine e = Engine.withoutAnalogs(t, maxHeavyAtoms);
         Map<String, List<Double>> errors = new HashMap<>();
         List<Map.Entry<String, Double>> all = obs.parallelStream().flatMap(o -> classErrors(e.analyse(o.structure(),
                 Conditions.noPh(), true), o).stream()).toList();
@@ -457,7 +457,7 @@ final class ModelCalibration {
 
     /** Loss over the class's compounds plus the prior, for one table. */
     private double objective(AcidityTable t, String id, List<Observation> obs, double[] origin0) {
-        return loss(new Engine(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2])
+        return loss(Engine.withoutAnalogs(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2])
                 + PRIOR_WEIGHT * huber(REACH_PRIOR_SHIFT * (t.interaction().reachOf(id) - origin0[3]));
     }
 

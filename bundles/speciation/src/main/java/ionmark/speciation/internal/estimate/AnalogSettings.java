@@ -24,7 +24,7 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
     }
 
     /** Chosen by the series experiment's series-wise cross-validation (docs/analog-series.md). */
-    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 1.0, 0.5, 8, Kernel.LINEAR);
+    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.1, 0.5, 8, Kernel.LINEAR);
 
     public AnalogSettings {
         if (radius < 1 || radius > 6 || threshold < 0 || threshold >= 1 || prior <= 0 || familyWeight < 0
