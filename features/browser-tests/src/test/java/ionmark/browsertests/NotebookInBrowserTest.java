@@ -10,8 +10,10 @@ import java.time.Duration;
 import java.util.List;
 
 import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInfo;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
 import org.openqa.selenium.OutputType;
@@ -49,7 +51,7 @@ class NotebookInBrowserTest {
         assumeTrue(present, "chromium and chromedriver are not installed: browser test skipped");
         app = RunningApp.start(workspace, "app");
         base = app.base;
-        ChromeOptions o = new ChromeOptions();
+        ChromeOptions o = PolicyViolations.recordConsole(new ChromeOptions());
         o.setBinary(CHROMIUM.toFile());
         o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync", "--window-size=1280,2000",
@@ -71,6 +73,14 @@ class NotebookInBrowserTest {
 
     static void shot(String name) throws IOException {
         Files.write(shots.resolve(name + ".png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
+    }
+
+    /** Every page a test visited ran under the strict page policy without a blocked script or style. */
+    @AfterEach
+    void noPagePolicyViolations(TestInfo test) {
+        if (browser != null) {
+            PolicyViolations.assertNone(browser, test.getDisplayName());
+        }
     }
 
     @Test

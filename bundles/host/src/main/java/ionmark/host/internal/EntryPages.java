@@ -71,10 +71,8 @@ final class EntryPages {
     static String editor(String id, String text, String token) {
         String old = Pages.editor(id, text, token);
         int preview = old.indexOf("<h2>Preview</h2>");
-        int script = old.indexOf("<script>");
         return "<div class=\"im-split\"><div class=\"im-editpane\">" + old.substring(0, preview)
-                + "</div><div class=\"im-previewpane\"><h2>Preview</h2>" + old.substring(preview + 16, script)
-                + "</div></div>" + old.substring(script);
+                + "</div><div class=\"im-previewpane\"><h2>Preview</h2>" + old.substring(preview + 16) + "</div></div>";
     }
 
     static String error(int status, String message, boolean signedIn) {
@@ -93,9 +91,9 @@ final class EntryPages {
     static String notices(Entry e, boolean annotatorsReady) {
         StringBuilder sb = new StringBuilder();
         if (!annotatorsReady && e.blocks().stream().anyMatch(WebShell::isStructure)) {
-            sb.append("<p class=\"im-loading\" role=\"status\">Annotations are loading (the solver is starting); "
-                    + "this page refreshes itself in a few seconds.</p><script>setTimeout(()=>location.reload(),3000)"
-                    + "</script>");
+            // ionmark.js reloads a page that carries data-im-reload when it loads (not a preview placed into the editor)
+            sb.append("<p class=\"im-loading\" role=\"status\" data-im-reload=\"3000\">Annotations are loading (the "
+                    + "solver is starting); this page refreshes itself in a few seconds.</p>");
         }
         if (!e.notices().isEmpty()) {
             sb.append("<ul class=\"im-notices\" role=\"alert\">");

@@ -372,10 +372,16 @@ public final class WebShell extends HttpServlet {
         send(resp, Pages.page(title, body, w.session() == null ? null : w.user().name()));
     }
 
+    /**
+     * The page policy: scripts and styles only from the notebook's own static files (no inline code, no inline
+     * style attributes), no plug-ins, no base rewriting, forms only to the notebook, and no framing.
+     */
+    static final String PAGE_POLICY = "default-src 'self'; img-src 'self' data:; style-src 'self'; script-src 'self'; "
+            + "object-src 'none'; base-uri 'none'; form-action 'self'; " + RequestGuard.FRAME_ANCESTORS;
+
     private static void send(HttpServletResponse resp, String html) throws IOException {
         resp.setContentType("text/html; charset=UTF-8");
-        resp.setHeader("Content-Security-Policy", "default-src 'self'; img-src 'self' data:; style-src 'self' "
-                + "'unsafe-inline'; script-src 'self' 'unsafe-inline'; " + RequestGuard.FRAME_ANCESTORS);
+        resp.setHeader("Content-Security-Policy", PAGE_POLICY);
         resp.setHeader("X-Frame-Options", "DENY");
         resp.setHeader("X-Content-Type-Options", "nosniff");
         resp.getOutputStream().write(html.getBytes(StandardCharsets.UTF_8));

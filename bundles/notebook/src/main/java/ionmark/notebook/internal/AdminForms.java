@@ -15,14 +15,8 @@ import ionmark.acidity.api.Reference;
  * Each is its own form; a script copies the draft into it on submit, so no task asks for JSON.
  */
 final class AdminForms {
-    static final String STYLE = "<style>.im-task{border:1px solid #bbb;padding:.3em .8em;margin:.5em 0}"
-            + ".im-task legend{font-weight:bold}.im-task label{display:inline-block;margin:.2em .8em .2em 0}"
-            + ".im-raw{display:flex;font-family:monospace;font-size:12px}.im-gutter{color:#777;text-align:right;"
-            + "padding-right:.4em;overflow:hidden;white-space:pre;line-height:1.3em;user-select:none}"
-            + ".im-raw textarea{line-height:1.3em;font-size:12px;white-space:pre;overflow:auto}"
-            + ".im-better{color:#064}.im-worse{color:#8a0000}th[data-sort]{cursor:pointer;text-decoration:underline dotted}"
-            + ".im-warn{color:#6a4a00}.im-changes li{font-family:monospace;font-size:12px}"
-            + ".im-task select{max-width:42em}</style>";
+    /** The page's style sheet (table-admin.css: forms, the raw-JSON editor with its line numbers). */
+    static final String STYLE = StaticFiles.TABLE_ADMIN;
 
     private AdminForms() {
     }
@@ -128,27 +122,12 @@ final class AdminForms {
         return sb.toString();
     }
 
-    /** The script: copy the draft into each task form on submit; line numbers beside the raw text. */
+    /**
+     * The page's script (table-admin.js): copies the draft into each task form on submit, numbers the raw text's
+     * lines, validates it live, jumps to a problem's line, loads a file and sorts columns.
+     */
     static String script() {
-        return "<script>(()=>{const d=document.getElementById('draft');if(!d)return;"
-                + "document.querySelectorAll('form.im-task').forEach(f=>f.addEventListener('submit',()=>{"
-                + "f.querySelector('.im-draft-copy').value=d.value;}));"
-                + "const g=document.getElementById('gutter');const num=()=>{const n=d.value.split('\\n').length;"
-                + "let s='';for(let i=1;i<=n;i++)s+=i+'\\n';g.textContent=s;};num();"
-                + "d.addEventListener('input',num);d.addEventListener('scroll',()=>{g.scrollTop=d.scrollTop;});"
-                + "window.imGoto=(line)=>{const raw=document.getElementById('raw');if(raw)raw.open=true;"
-                + "const ls=d.value.split('\\n');let p=0;for(let i=0;i<line-1&&i<ls.length;i++)p+=ls[i].length+1;"
-                + "d.focus();d.setSelectionRange(p,p+(ls[line-1]||'').length);"
-                + "d.scrollTop=Math.max(0,(line-3))*parseFloat(getComputedStyle(d).lineHeight);g.scrollTop=d.scrollTop;"
-                + "return false;};"
-                + "document.querySelectorAll('th[data-sort]').forEach(th=>th.addEventListener('click',()=>{"
-                + "const tb=th.closest('table').tBodies[0];const i=[...th.parentNode.children].indexOf(th);"
-                + "const dir=th.dataset.dir==='asc'?'desc':'asc';th.dataset.dir=dir;"
-                + "const key=r=>{const c=r.children[i];const v=c.dataset.v!==undefined?c.dataset.v:c.textContent;"
-                + "const n=parseFloat(v);return isNaN(n)?v:n;};"
-                + "[...tb.rows].sort((a,b)=>{const x=key(a),y=key(b);const c=x<y?-1:x>y?1:0;return dir==='asc'?c:-c;})"
-                + ".forEach(r=>tb.appendChild(r));}));"
-                + "})();</script>";
+        return StaticFiles.TABLE_ADMIN_JS;
     }
 
     static String changesList(String id, String title, List<RecordChanges.Change> changes) {

@@ -149,7 +149,6 @@ public final class MeasuredImportPage implements AdminPage {
                 + "</textarea><p><label>Why (required to publish) <input name=\"comment\" size=\"70\"></label></p>"
                 + "<p><button name=\"action\" value=\"preview\">Check rows and preview</button> "
                 + "<button name=\"action\" value=\"publish\">Publish (only when every row is ready)</button></p></form>"
-                + "<script>document.getElementById('measured-file').addEventListener('change',e=>{const f=e.target.files[0];"
-                + "if(f){f.text().then(x=>{document.getElementById('measured-data').value=x;});}});</script>";
+                + StaticFiles.MEASURED_IMPORT_JS;
     }
 }

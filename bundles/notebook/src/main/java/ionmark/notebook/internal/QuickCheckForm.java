@@ -28,13 +28,12 @@ final class QuickCheckForm {
         Double ionic = number(is, "ionic", 0, 5, "ionic strength must be a number from 0 to 5 M", bad);
         StringBuilder sb = new StringBuilder("<form class=\"im-quick\" method=\"post\" id=\"quick\">");
         sb.append("<label class=\"im-wide\">Structure: SMILES, a chemical name, or a molfile (paste it or drop the file here)"
-                + "<textarea id=\"structure\" name=\"structure\" rows=\"8\" cols=\"70\" "
-                + "ondragover=\"event.preventDefault()\" ondrop=\"event.preventDefault();const f=event.dataTransfer"
-                + ".files[0];if(f){f.text().then(x=>{this.value=x;});}\">").append(Html.esc(structure))
+                + "<textarea id=\"structure\" name=\"structure\" rows=\"8\" cols=\"70\">").append(Html.esc(structure))
                 .append("</textarea></label>");
         sb.append(field("ph", "pH", ph, bad)).append(field("temp", "°C (25 if empty)", t, bad))
                 .append(field("ionic", "ionic strength, M (0 if empty)", is, bad));
-        sb.append("<button type=\"submit\">Check</button></form>");
+        // quick-check.js reads a dropped molfile into the box
+        sb.append("<button type=\"submit\">Check</button></form>").append(StaticFiles.QUICK_CHECK_JS);
         if (structure.isBlank()) {
             if (params.containsKey("structure")) {
                 sb.append("<p class=\"im-error\" role=\"alert\">Structure: give a SMILES, a chemical name or a molfile.</p>");
