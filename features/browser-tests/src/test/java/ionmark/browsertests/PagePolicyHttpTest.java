@@ -222,7 +222,7 @@ class PagePolicyHttpTest {
                     + " shows the stored text, escaped");
         }
         assertTrue(pages.get("entry view").body().contains("&lt;svg onload=alert(4)&gt;"), "SVG payload escaped");
-        assertTrue(pages.get("search for a handler").body().contains("value=\"&quot;&gt;&lt;img src=x"),
+        assertTrue(pages.get("search for a handler").body().contains("value=\"&#34;>&lt;img src=x"),
                 "the search box keeps the query, escaped inside its attribute");
     }
 }

@@ -1,20 +1,34 @@
 package ionmark.host.internal;
 
+import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
 import ionmark.host.api.Block;
 import ionmark.host.api.Entry;
 import ionmark.host.api.SidePanel;
+import gg.jte.Content;
 
-/** HTML of the web shell. Everything from entries is escaped here; contributed HTML is placed as is. */
+/**
+ * The web shell's frame, sign-in and entry pages, rendered through the templates in {@code src/main/jte}: entry
+ * text is escaped by the template engine; contributed HTML (cards, panels, admin pages) is placed as is.
+ */
 final class Pages {
     private Pages() {
     }
 
-    static String esc(String s) {
-        return s == null ? "" : s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
-                .replace("\"", "&quot;").replace("'", "&#39;");
+    /** What an entry block shows as. */
+    enum Kind { H1, H2, TEXT, TABLE, STRUCTURE, STRUCTURE_BLOCK }
+
+    /**
+     * One block of an entry as the page shows it.
+     *
+     * @param text        the heading, paragraph, table or structure text (structure: with its stated pH)
+     * @param detail      a molfile or RXN block's whole text under its title line, else empty
+     * @param decorations contributed HTML placed after the block
+     */
+    record Part(Kind kind, String text, String detail, List<String> decorations) {
     }
 
     static String page(String title, String body) {
@@ -23,97 +37,68 @@ final class Pages {
 
     /** @param signedIn the signed-in user's name, or null */
     static String page(String title, String body, String signedIn) {
-        String who = signedIn == null ? "<a href=\"/signin\" class=\"im-right\">Sign in</a>"
-                : "<span class=\"im-right\">" + esc(signedIn) + " · <a href=\"/signout\">Sign out</a></span>";
-        return "<!doctype html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>" + esc(title)
-                + " · Ionmark notebook</title>" + HEAD + "</head><body><header><a href=\"/\">Ionmark "
-                + "notebook</a> <a href=\"/panel/quick-check\">Quick check</a> " + who + "</header><main>" + body
-                + "</main></body></html>";
+        Map<String, Object> p = new HashMap<>();
+        p.put("title", title);
+        p.put("signedIn", signedIn);
+        p.put("body", (Content) out -> out.writeContent(body));
+        return Templates.render("page", p);
     }
 
     static String signIn(String token, String message) {
-        return "<h1>Sign in</h1>" + (message.isEmpty() ? "" : "<p class=\"im-error\" role=\"alert\">" + esc(message)
-                + "</p>") + "<form method=\"post\" action=\"/signin\"><input type=\"hidden\" name=\"token\" value=\""
-                + esc(token) + "\"><p><label>User <input name=\"user\" autocomplete=\"username\" required></label></p>"
-                + "<p><label>Password <input type=\"password\" name=\"password\" autocomplete=\"current-password\" "
-                + "required></label></p><p><button type=\"submit\">Sign in</button></p></form>";
-    }
-
-    static String list(List<String> ids, List<SidePanel> panels, List<ionmark.host.api.AdminPage> admin) {
-        StringBuilder sb = new StringBuilder("<h1>Entries</h1><ul class=\"entries\">");
-        for (String id : ids) {
-            sb.append("<li><a href=\"/entry/").append(esc(id)).append("\">").append(esc(id)).append("</a></li>");
-        }
-        sb.append("</ul><h2>Panels</h2><ul>");
-        for (SidePanel p : panels) {
-            sb.append("<li><a href=\"/panel/").append(esc(p.id())).append("\">").append(esc(p.title()))
-                    .append("</a></li>");
-        }
-        sb.append("</ul>");
-        if (!admin.isEmpty()) {
-            sb.append("<h2>Administration</h2><ul>");
-            for (var p : admin) {
-                sb.append("<li><a href=\"/admin/").append(esc(p.id())).append("\">").append(esc(p.title()))
-                        .append("</a></li>");
-            }
-            sb.append("</ul>");
-        }
-        return sb.toString();
+        return Templates.render("signIn", Map.of("token", token, "message", message));
     }
 
     static String entry(Entry e, Map<Integer, List<String>> decorations, List<SidePanel> panels) {
-        return "<article><p><a href=\"/entry/" + esc(e.id()) + "/edit\">Edit</a></p>" + body(e, decorations)
-                + "</article>";
+        return Templates.render("entry", Map.of("id", e.id(), "parts", parts(e, decorations)));
     }
 
     static String body(Entry e, Map<Integer, List<String>> decorations) {
-        StringBuilder sb = new StringBuilder();
+        return Templates.render("body", Map.of("parts", parts(e, decorations)));
+    }
+
+    /** The entry's blocks as parts: headings, paragraphs, tables; a molfile or RXN block folded under its title. */
+    static List<Part> parts(Entry e, Map<Integer, List<String>> decorations) {
+        List<Part> parts = new ArrayList<>();
         List<Block> blocks = e.blocks();
         for (int i = 0; i < blocks.size(); i++) {
             Block b = blocks.get(i);
-            switch (b.kind()) {
-                case STRUCTURE -> structure(sb, b);
-                case TABLE -> sb.append("<pre class=\"table\">").append(esc(b.content())).append("</pre>");
-                default -> {
-                    String c = b.content();
-                    if (c.startsWith("# ")) {
-                        sb.append("<h1>").append(esc(c.substring(2))).append("</h1>");
-                    } else if (c.startsWith("#")) {
-                        sb.append("<h2>").append(esc(c.replaceFirst("^#+\\s*", ""))).append("</h2>");
-                    } else {
-                        sb.append("<p>").append(esc(c)).append("</p>");
-                    }
-                }
-            }
-            for (String html : decorations.getOrDefault(i, List.of())) {
-                sb.append(html);
-            }
+            List<String> d = decorations.getOrDefault(i, List.of());
+            String c = b.content();
+            parts.add(switch (b.kind()) {
+                case STRUCTURE -> structure(b, d);
+                case TABLE -> new Part(Kind.TABLE, c, "", d);
+                default -> c.startsWith("# ") ? new Part(Kind.H1, c.substring(2), "", d)
+                        : c.startsWith("#") ? new Part(Kind.H2, c.replaceFirst("^#+\\s*", ""), "", d)
+                        : new Part(Kind.TEXT, c, "", d);
+            });
         }
-        return sb.toString();
+        return parts;
     }
 
     /** A structure block: SMILES as written; a molfile or RXN block folded under its title line. */
-    private static void structure(StringBuilder sb, Block b) {
+    private static Part structure(Block b, List<String> decorations) {
         String c = b.content().strip();
         String ph = b.ph() == null ? "" : "  [pH " + b.ph() + "]";
         if (c.contains("\n")) {
             String title = b.content().lines().findFirst().orElse("").strip();
-            sb.append("<details class=\"structure\"><summary>").append(esc(title.isEmpty() ? "structure block" : title))
-                    .append(esc(ph)).append("</summary><pre class=\"structure\">").append(esc(b.content()))
-                    .append("</pre></details>");
-        } else {
-            sb.append("<pre class=\"structure\">").append(esc(c)).append(esc(ph)).append("</pre>");
+            return new Part(Kind.STRUCTURE_BLOCK, (title.isEmpty() ? "structure block" : title) + ph, b.content(),
+                    decorations);
         }
+        return new Part(Kind.STRUCTURE, c + ph, "", decorations);
     }
 
+    /** The editor with its live preview beside it (stacked on narrow screens). */
     static String editor(String id, String text, String token) {
-        return "<h1>Edit " + esc(id) + "</h1><form method=\"post\" action=\"/entry/" + esc(id) + "\">"
-                + "<input type=\"hidden\" name=\"token\" value=\"" + esc(token) + "\"><textarea id=\"text\" name=\"text\" "
-                + "rows=\"24\" cols=\"90\">" + esc(text) + "</textarea><p><button type=\"submit\">Save</button></p>"
-                + "</form><h2>Preview</h2><div id=\"preview\" aria-live=\"polite\"></div>";
+        return Templates.render("editor", Map.of("id", id, "text", text, "token", token));
     }
 
-    /** Style and behaviour come from static files (see docs/page-templates.md): the page policy allows no inline code. */
-    static final String HEAD = "<link rel=\"stylesheet\" href=\"/static/host/ionmark.css\">"
-            + "<script src=\"/static/host/ionmark.js\" defer></script>";
+    /** A side panel's or administration page's title over the HTML its bundle built. */
+    static String contributed(String title, String html) {
+        return Templates.render("contributed", Map.of("title", title, "html", html));
+    }
+
+    /** The line shown where a contributor's annotations failed. */
+    static String annotationsFailed(String message) {
+        return Templates.render("annotationsFailed", Map.of("message", message));
+    }
 }
