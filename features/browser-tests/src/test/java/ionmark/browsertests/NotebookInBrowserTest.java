@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestInfo;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebDriver;
@@ -129,6 +130,19 @@ class NotebookInBrowserTest {
         assertTrue(card.contains("4.76"), card);
         assertTrue(card.contains("98."), card);
         shot("editor-preview");
+    }
+
+    /** The console check can fail: an inline script put into a page is blocked by the policy and reported. */
+    @Test
+    void anInlineScriptIsBlockedAndTheConsoleCheckSeesIt() {
+        browser.get(base + "/signin");
+        ((JavascriptExecutor) browser).executeScript("const s=document.createElement('script');"
+                + "s.textContent='document.title=\\'ran\\'';document.body.appendChild(s);"
+                + "const d=document.createElement('div');d.setAttribute('style','color:red');document.body.appendChild(d);");
+        List<String> found = new java.util.ArrayList<>();
+        new WebDriverWait(browser, Duration.ofSeconds(5)).until(d -> found.addAll(PolicyViolations.since(d)));
+        assertTrue(found.stream().anyMatch(m -> m.contains("script")), "the blocked script is reported: " + found);
+        assertTrue(!browser.getTitle().equals("ran"), "the inline script did not run");
     }
 
     @Test
