@@ -211,6 +211,10 @@ class PagePolicyHttpTest {
         pages.put("quick check by name", get("/panel/quick-check?structure=" + q(PAYLOADS.get(1)) + "&ph=7"));
         pages.put("admin search", post("/admin/table", Map.of("token", token(get("/admin/table").body()), "action",
                 "search", "q", PAYLOADS.get(1), "structure", PAYLOADS.get(0))));
+        pages.put("measured import preview", post("/admin/measured", Map.of("token", token(get("/admin/measured").body()),
+                "action", "preview", "format", "tsv", "data", "id\tsmiles\tpka_values\ttemperature\tionic_strength\tmethod"
+                        + "\tsource\tname\nx1\tCC(=O)O\t4.76\t25\t0\t" + PAYLOADS.get(0) + "\t" + PAYLOADS.get(1) + "\t"
+                        + PAYLOADS.get(3) + "\nx2\t" + PAYLOADS.get(0) + "\t4.0\t25\t0\tx\tx\tx\n")));
         pages.put("path", get("/" + q("<svg onload=alert(4)>").replace("+", "%20")));
         cookie = null;
         String signInToken = token(get("/signin").body());
@@ -225,6 +229,7 @@ class PagePolicyHttpTest {
                     + " shows the stored text, escaped");
         }
         assertTrue(pages.get("entry view").body().contains("&lt;svg onload=alert(4)&gt;"), "SVG payload escaped");
+        assertTrue(pages.get("measured import preview").body().contains("id=\"import-rows\""), "the rows were read");
         assertTrue(pages.get("search for a handler").body().contains("value=\"&#34;>&lt;img src=x"),
                 "the search box keeps the query, escaped inside its attribute");
     }

@@ -10,8 +10,6 @@ import org.osgi.service.component.annotations.Component;
 @Component(service = StaticFiles.class, property = {"osgi.http.whiteboard.resource.pattern=/static/notebook/*",
         "osgi.http.whiteboard.resource.prefix=/ionmark/notebook/static"})
 public final class StaticFiles {
-    static final String QUICK_CHECK_JS = "<script src=\"/static/notebook/quick-check.js\" defer></script>";
     static final String TABLE_ADMIN = "<link rel=\"stylesheet\" href=\"/static/notebook/table-admin.css\">";
     static final String TABLE_ADMIN_JS = "<script src=\"/static/notebook/table-admin.js\" defer></script>";
-    static final String MEASURED_IMPORT_JS = "<script src=\"/static/notebook/measured-import.js\" defer></script>";
 }
