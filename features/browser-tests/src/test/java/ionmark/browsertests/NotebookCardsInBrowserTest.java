@@ -12,10 +12,12 @@ import java.time.Duration;
 import java.util.List;
 
 import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInfo;
 import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
@@ -53,7 +55,7 @@ class NotebookCardsInBrowserTest {
         assumeTrue(present, "chromium and chromedriver are not installed: browser test skipped");
         app = RunningApp.start(workspace, "cards", Integer.getInteger("ionmark.browser.port", 0));
         base = app.base;
-        ChromeOptions o = new ChromeOptions();
+        ChromeOptions o = PolicyViolations.recordConsole(new ChromeOptions());
         o.setBinary(NotebookInBrowserTest.CHROMIUM.toFile());
         o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync",
@@ -85,6 +87,14 @@ class NotebookCardsInBrowserTest {
         browser.manage().window().setSize(new Dimension(width, (int) Math.min(h + 120, 9000)));
         shot(name);
         browser.manage().window().setSize(new Dimension(1400, 1000));
+    }
+
+    /** Every page a test visited ran under the strict page policy without a blocked script or style. */
+    @AfterEach
+    void noPagePolicyViolations(TestInfo test) {
+        if (browser != null) {
+            PolicyViolations.assertNone(browser, test.getDisplayName());
+        }
     }
 
     @Test

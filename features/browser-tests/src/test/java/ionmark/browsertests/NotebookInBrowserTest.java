@@ -10,10 +10,13 @@ import java.time.Duration;
 import java.util.List;
 
 import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInfo;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
+import org.openqa.selenium.JavascriptExecutor;
 import org.openqa.selenium.OutputType;
 import org.openqa.selenium.TakesScreenshot;
 import org.openqa.selenium.WebDriver;
@@ -49,7 +52,7 @@ class NotebookInBrowserTest {
         assumeTrue(present, "chromium and chromedriver are not installed: browser test skipped");
         app = RunningApp.start(workspace, "app");
         base = app.base;
-        ChromeOptions o = new ChromeOptions();
+        ChromeOptions o = PolicyViolations.recordConsole(new ChromeOptions());
         o.setBinary(CHROMIUM.toFile());
         o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync", "--window-size=1280,2000",
@@ -71,6 +74,14 @@ class NotebookInBrowserTest {
 
     static void shot(String name) throws IOException {
         Files.write(shots.resolve(name + ".png"), ((TakesScreenshot) browser).getScreenshotAs(OutputType.BYTES));
+    }
+
+    /** Every page a test visited ran under the strict page policy without a blocked script or style. */
+    @AfterEach
+    void noPagePolicyViolations(TestInfo test) {
+        if (browser != null) {
+            PolicyViolations.assertNone(browser, test.getDisplayName());
+        }
     }
 
     @Test
@@ -119,6 +130,19 @@ class NotebookInBrowserTest {
         assertTrue(card.contains("4.76"), card);
         assertTrue(card.contains("98."), card);
         shot("editor-preview");
+    }
+
+    /** The console check can fail: an inline script put into a page is blocked by the policy and reported. */
+    @Test
+    void anInlineScriptIsBlockedAndTheConsoleCheckSeesIt() {
+        browser.get(base + "/signin");
+        ((JavascriptExecutor) browser).executeScript("const s=document.createElement('script');"
+                + "s.textContent='document.title=\\'ran\\'';document.body.appendChild(s);"
+                + "const d=document.createElement('div');d.setAttribute('style','color:red');document.body.appendChild(d);");
+        List<String> found = new java.util.ArrayList<>();
+        new WebDriverWait(browser, Duration.ofSeconds(5)).until(d -> found.addAll(PolicyViolations.since(d)));
+        assertTrue(found.stream().anyMatch(m -> m.contains("script")), "the blocked script is reported: " + found);
+        assertTrue(!browser.getTitle().equals("ran"), "the inline script did not run");
     }
 
     @Test

@@ -28,8 +28,8 @@ final class RunningApp implements AutoCloseable {
     static RunningApp start(Path workspace, String logName, int fixedPort) throws Exception {
         Path jar = Path.of(System.getProperty("ionmark.app.jar", "../app/target/ionmark.jar"));
         assertTrue(Files.isRegularFile(jar), "build the application first: " + jar);
-        int port;
-        try (ServerSocket s = new ServerSocket(fixedPort)) {
+        int port = fixedPort != 0 ? fixedPort : freePortInRange();
+        try (ServerSocket s = new ServerSocket(port)) {
             port = s.getLocalPort();
         }
         Process p = new ProcessBuilder("java", "-Dorg.osgi.service.http.port=" + port, "-Dgosh.args=--nointeractive",
@@ -38,6 +38,26 @@ final class RunningApp implements AutoCloseable {
         RunningApp app = new RunningApp("http://127.0.0.1:" + port, p);
         app.waitForCards("/entry/05-assay-ph74");
         return app;
+    }
+
+    /**
+     * A free port from {@code -Dionmark.browser.ports=LOW-HIGH} (for shared machines where each user has a range),
+     * else 0: any free port.
+     */
+    private static int freePortInRange() {
+        String range = System.getProperty("ionmark.browser.ports", "");
+        if (!range.matches("\\d+-\\d+")) {
+            return 0;
+        }
+        String[] r = range.split("-");
+        for (int p = Integer.parseInt(r[0]); p <= Integer.parseInt(r[1]); p++) {
+            try (ServerSocket s = new ServerSocket(p)) {
+                return s.getLocalPort();
+            } catch (IOException e) {
+                // taken: try the next
+            }
+        }
+        throw new IllegalStateException("no free port in " + range);
     }
 
     /** Waits until the server answers and the speciation service has annotated the page. */

@@ -20,10 +20,12 @@ import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.TestInfo;
 import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.io.TempDir;
 import org.openqa.selenium.By;
@@ -67,7 +69,7 @@ class TableCurationInBrowserTest {
         assumeTrue(present, "chromium and chromedriver are not installed: browser test skipped");
         app = RunningApp.start(workspace, "curation-app");
         base = app.base;
-        ChromeOptions o = new ChromeOptions();
+        ChromeOptions o = PolicyViolations.recordConsole(new ChromeOptions());
         o.setBinary(CHROMIUM.toFile());
         o.addArguments("--headless", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage", "--no-first-run",
                 "--disable-background-networking", "--disable-component-update", "--disable-sync", "--window-size=1400,2400",
@@ -126,6 +128,14 @@ class TableCurationInBrowserTest {
     static void press(String form, String action) {
         browser.findElement(By.cssSelector("#" + form + " button[value='" + action + "']")).click();
         new WebDriverWait(browser, Duration.ofSeconds(60)).until(d -> !d.findElements(By.id("history")).isEmpty());
+    }
+
+    /** Every page a test visited ran under the strict page policy without a blocked script or style. */
+    @AfterEach
+    void noPagePolicyViolations(TestInfo test) {
+        if (browser != null) {
+            PolicyViolations.assertNone(browser, test.getDisplayName());
+        }
     }
 
     @Test

@@ -2,10 +2,15 @@ package ionmark.host.internal;
 
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Collections;
 import java.util.List;
 import java.util.Locale;
+import java.util.Map;
 
+import ionmark.host.api.AdminPage;
 import ionmark.host.api.Entry;
+import ionmark.host.api.SidePanel;
 
 /**
  * The web shell's own pages beyond a single entry: the entry list with search, the new-entry form, an
@@ -23,58 +28,33 @@ final class EntryPages {
     }
 
     static String list(List<Row> rows, String query, boolean mayEdit) {
-        StringBuilder sb = new StringBuilder("<div class=\"im-listhead\"><h1>Entries</h1>");
-        if (mayEdit) {
-            sb.append("<a class=\"im-button\" id=\"new-entry\" href=\"/new\">New entry</a>");
-        }
-        sb.append("</div><form class=\"im-search\" method=\"get\" action=\"/\"><label>Search titles and text "
-                + "<input type=\"search\" name=\"q\" value=\"").append(Pages.esc(query)).append("\"></label>"
-                + "<button type=\"submit\">Search</button></form>");
-        if (rows.isEmpty()) {
-            sb.append("<p>").append(query.isBlank() ? "No entries yet." : "No entry mentions <q>" + Pages.esc(query)
-                    + "</q>.").append("</p>");
-            return sb.toString();
-        }
-        sb.append("<table class=\"im-entries\"><thead><tr><th>Title</th><th>Last saved</th><th>By</th></tr></thead>"
-                + "<tbody>");
-        for (Row r : rows) {
-            sb.append("<tr><td><a href=\"/entry/").append(Pages.esc(r.id())).append("\">").append(Pages.esc(r.title()))
-                    .append("</a></td><td>").append(Pages.esc(r.when())).append("</td><td>")
-                    .append(Pages.esc(r.author())).append("</td></tr>");
-        }
-        return sb.append("</tbody></table>").toString();
+        return list(rows, query, mayEdit, List.of(), List.of());
+    }
+
+    /** The entry list with its search, then the side panels and the administration pages the user may open. */
+    static String list(List<Row> rows, String query, boolean mayEdit, List<SidePanel> panels, List<AdminPage> admin) {
+        return Templates.render("entries", Map.of("rows", rows, "query", query, "mayEdit", mayEdit, "panels", panels,
+                "admin", admin));
     }
 
     static String newEntry(String token, String message) {
-        return "<h1>New entry</h1>" + (message.isEmpty() ? "" : "<p class=\"im-error\" role=\"alert\">"
-                + Pages.esc(message) + "</p>") + "<form method=\"post\" action=\"/new\"><input type=\"hidden\" "
-                + "name=\"token\" value=\"" + Pages.esc(token) + "\"><p><label>Title <input name=\"title\" size=\"50\" "
-                + "required></label></p><p><button type=\"submit\">Create and edit</button></p></form>";
+        return Templates.render("newEntry", Map.of("token", token, "message", message));
     }
 
     static String history(String id, List<EntryHistory.Save> saves) {
-        StringBuilder sb = new StringBuilder("<h1>History of ").append(Pages.esc(id)).append("</h1>");
-        if (saves.isEmpty()) {
-            return sb.append("<p>Not saved through the notebook yet (a seeded or copied file).</p>").toString();
-        }
-        sb.append("<table class=\"im-entries\"><thead><tr><th>Save</th><th>When</th><th>By</th></tr></thead><tbody>");
-        for (int i = saves.size() - 1; i >= 0; i--) {
-            EntryHistory.Save s = saves.get(i);
-            sb.append("<tr><td><a href=\"/entry/").append(Pages.esc(id)).append("/history/").append(s.number())
-                    .append("\">").append(s.number()).append("</a></td><td>").append(WHEN.format(s.time()))
-                    .append("</td><td>").append(Pages.esc(s.author())).append("</td></tr>");
-        }
-        return sb.append("</tbody></table>").toString();
+        List<EntryHistory.Save> newestFirst = new ArrayList<>(saves);
+        Collections.reverse(newestFirst);
+        return Templates.render("history", Map.of("id", id, "newestFirst", newestFirst));
+    }
+
+    /** One saved text of an entry. */
+    static String savedText(String id, int number, String text) {
+        return Templates.render("savedText", Map.of("id", id, "number", number, "text", text));
     }
 
     /** The editor with its live preview beside it (stacked on narrow screens). */
     static String editor(String id, String text, String token) {
-        String old = Pages.editor(id, text, token);
-        int preview = old.indexOf("<h2>Preview</h2>");
-        int script = old.indexOf("<script>");
-        return "<div class=\"im-split\"><div class=\"im-editpane\">" + old.substring(0, preview)
-                + "</div><div class=\"im-previewpane\"><h2>Preview</h2>" + old.substring(preview + 16, script)
-                + "</div></div>" + old.substring(script);
+        return Pages.editor(id, text, token);
     }
 
     static String error(int status, String message, boolean signedIn) {
@@ -84,27 +64,14 @@ final class EntryPages {
             case 400 -> "Cannot use that request";
             default -> "Something went wrong";
         };
-        return "<div class=\"im-errorpage\"><p class=\"im-status\">" + status + "</p><h1>" + title + "</h1><p>"
-                + Pages.esc(message) + "</p><p>" + (status == 403 && !signedIn ? "<a href=\"/signin\">Sign in</a> · " : "")
-                + "<a href=\"/\">Back to the entries</a></p></div>";
+        return Templates.render("error", Map.of("status", status, "title", title, "message", message, "signInLink",
+                status == 403 && !signedIn));
     }
 
     /** What the host could not read in the entry, and a word when no annotator is running yet. */
     static String notices(Entry e, boolean annotatorsReady) {
-        StringBuilder sb = new StringBuilder();
-        if (!annotatorsReady && e.blocks().stream().anyMatch(WebShell::isStructure)) {
-            sb.append("<p class=\"im-loading\" role=\"status\">Annotations are loading (the solver is starting); "
-                    + "this page refreshes itself in a few seconds.</p><script>setTimeout(()=>location.reload(),3000)"
-                    + "</script>");
-        }
-        if (!e.notices().isEmpty()) {
-            sb.append("<ul class=\"im-notices\" role=\"alert\">");
-            for (String n : e.notices()) {
-                sb.append("<li>").append(Pages.esc(n)).append("</li>");
-            }
-            sb.append("</ul>");
-        }
-        return sb.toString();
+        boolean loading = !annotatorsReady && e.blocks().stream().anyMatch(WebShell::isStructure);
+        return Templates.render("notices", Map.of("loading", loading, "notices", e.notices()));
     }
 
     /** An id for a new entry from its title: lower-case words joined by hyphens, unique in the workspace. */

@@ -160,8 +160,7 @@ public final class WebShell extends HttpServlet {
             fail(resp, w, 403, "The page needs the role " + p.requiredRole() + (w.session() == null
                     ? ": sign in first." : "."));
         } else {
-            page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.handle(params(req), post, w.user(),
-                    w.csrf()));
+            page(resp, p.title(), w, Pages.contributed(p.title(), p.handle(params(req), post, w.user(), w.csrf())));
         }
         return true;
     }
@@ -188,9 +187,8 @@ public final class WebShell extends HttpServlet {
                 resp.sendRedirect("/");
             } else if (path.equals("/") || path.isEmpty()) {
                 String q = req.getParameter("q") == null ? "" : req.getParameter("q").strip();
-                page(resp, "Entries", w, EntryPages.list(rows(q), q, mayEdit(w)) + Pages.list(List.of(), panels,
-                        adminPages.stream().filter(p -> w.user().has(p.requiredRole())).toList())
-                        .replace("<h1>Entries</h1><ul class=\"entries\"></ul>", ""));
+                page(resp, "Entries", w, EntryPages.list(rows(q), q, mayEdit(w), List.copyOf(panels),
+                        adminPages.stream().filter(p -> w.user().has(p.requiredRole())).toList()));
             } else if (path.equals("/new")) {
                 if (mayEdit(w)) {
                     page(resp, "New entry", w, EntryPages.newEntry(w.csrf(), ""));
@@ -210,15 +208,14 @@ public final class WebShell extends HttpServlet {
                 String id = path.substring(7);
                 Entry e = workspace.entry(id);
                 page(resp, e.title(), w, EntryPages.notices(e, !decorators.isEmpty()) + Pages.entry(e,
-                        decorations(e, w.user()), panels).replace("/edit\">Edit</a>", "/edit\">Edit</a> · <a href=\"/entry/"
-                        + Pages.esc(id) + "/history\">History</a>"));
+                        decorations(e, w.user()), panels));
             } else if (path.startsWith("/panel/")) {
                 SidePanel p = panel(path.substring(7));
                 if (p == null) {
                     fail(resp, w, 404, "There is no panel '" + path.substring(7) + "'.");
                     return;
                 }
-                page(resp, p.title(), w, "<h1>" + Pages.esc(p.title()) + "</h1>" + p.html(params(req), w.user()));
+                page(resp, p.title(), w, Pages.contributed(p.title(), p.html(params(req), w.user())));
             } else {
                 fail(resp, w, 404, "There is no page at " + path + ".");
             }
@@ -307,8 +304,7 @@ public final class WebShell extends HttpServlet {
                 found = d.decorate(e, who);
             } catch (RuntimeException ex) {
                 // one contributor's failure must not take the entry down with it
-                found = List.of(new Decoration(0, "<p class=\"im-error\" role=\"alert\">Annotations failed: "
-                        + Pages.esc(String.valueOf(ex.getMessage())) + "</p>"));
+                found = List.of(new Decoration(0, Pages.annotationsFailed(String.valueOf(ex.getMessage()))));
             }
             for (Decoration x : found) {
                 out.computeIfAbsent(x.block(), k -> new java.util.ArrayList<>()).add(x.html());
@@ -345,8 +341,7 @@ public final class WebShell extends HttpServlet {
         workspace.text(id); // 404 for an unknown entry
         if (parts.length > 1 && !parts[1].isEmpty()) {
             int n = Integer.parseInt(parts[1]);
-            page(resp, id + " save " + n, w, "<h1>" + Pages.esc(id) + ", save " + n + "</h1><pre class=\"im-source\">"
-                    + Pages.esc(workspace.history().text(id, n)) + "</pre>");
+            page(resp, id + " save " + n, w, EntryPages.savedText(id, n, workspace.history().text(id, n)));
         } else {
             page(resp, "History of " + id, w, EntryPages.history(id, workspace.history().saves(id)));
         }
@@ -372,10 +367,16 @@ public final class WebShell extends HttpServlet {
         send(resp, Pages.page(title, body, w.session() == null ? null : w.user().name()));
     }
 
+    /**
+     * The page policy: scripts and styles only from the notebook's own static files (no inline code, no inline
+     * style attributes), no plug-ins, no base rewriting, forms only to the notebook, and no framing.
+     */
+    static final String PAGE_POLICY = "default-src 'self'; img-src 'self' data:; style-src 'self'; script-src 'self'; "
+            + "object-src 'none'; base-uri 'none'; form-action 'self'; " + RequestGuard.FRAME_ANCESTORS;
+
     private static void send(HttpServletResponse resp, String html) throws IOException {
         resp.setContentType("text/html; charset=UTF-8");
-        resp.setHeader("Content-Security-Policy", "default-src 'self'; img-src 'self' data:; style-src 'self' "
-                + "'unsafe-inline'; script-src 'self' 'unsafe-inline'; " + RequestGuard.FRAME_ANCESTORS);
+        resp.setHeader("Content-Security-Policy", PAGE_POLICY);
         resp.setHeader("X-Frame-Options", "DENY");
         resp.setHeader("X-Content-Type-Options", "nosniff");
         resp.getOutputStream().write(html.getBytes(StandardCharsets.UTF_8));

@@ -33,7 +33,7 @@ class PagesTest {
 
     @Test
     void entryListEscapesIds() {
-        String html = Pages.list(List.of("ok-id"), List.of(), List.of());
+        String html = EntryPages.list(List.of(new EntryPages.Row("ok-id", "Ok", "", "")), "", false);
         assertTrue(html.contains("/entry/ok-id"));
     }
 }

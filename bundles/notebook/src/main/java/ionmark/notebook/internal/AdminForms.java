@@ -1,5 +1,6 @@
 package ionmark.notebook.internal;
 
+import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
@@ -8,105 +9,67 @@ import java.util.Set;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.MeasuredCompound;
-import ionmark.acidity.api.Reference;
 
 /**
  * The record forms of the table admin page: search, measured compound, class value, reference.
  * Each is its own form; a script copies the draft into it on submit, so no task asks for JSON.
  */
 final class AdminForms {
-    static final String STYLE = "<style>.im-task{border:1px solid #bbb;padding:.3em .8em;margin:.5em 0}"
-            + ".im-task legend{font-weight:bold}.im-task label{display:inline-block;margin:.2em .8em .2em 0}"
-            + ".im-raw{display:flex;font-family:monospace;font-size:12px}.im-gutter{color:#777;text-align:right;"
-            + "padding-right:.4em;overflow:hidden;white-space:pre;line-height:1.3em;user-select:none}"
-            + ".im-raw textarea{line-height:1.3em;font-size:12px;white-space:pre;overflow:auto}"
-            + ".im-better{color:#064}.im-worse{color:#8a0000}th[data-sort]{cursor:pointer;text-decoration:underline dotted}"
-            + ".im-warn{color:#6a4a00}.im-changes li{font-family:monospace;font-size:12px}"
-            + ".im-task select{max-width:42em}</style>";
+    /** The page's style sheet (table-admin.css: forms, the raw-JSON editor with its line numbers). */
+    static final String STYLE = StaticFiles.TABLE_ADMIN;
 
     private AdminForms() {
     }
 
     /** Hidden fields every task form carries: the token, the draft's base and (filled on submit) the draft. */
     static String hidden(String csrf, int base) {
-        return "<input type=\"hidden\" name=\"token\" value=\"" + Html.esc(csrf) + "\"><input type=\"hidden\" name=\"base\" "
-                + "value=\"" + base + "\"><input type=\"hidden\" name=\"draft\" class=\"im-draft-copy\">";
+        return Templates.render("adminHidden", Map.of("csrf", csrf, "base", base));
     }
 
     static String search(String csrf, int base, String query) {
-        return "<form method=\"post\" action=\"/admin/table\" class=\"im-task\" id=\"search-form\"><fieldset><legend>Find"
-                + "</legend>" + hidden(csrf, base) + "<label>Name, id or SMARTS text <input name=\"q\" id=\"q\" size=\"40\" "
-                + "value=\"" + Html.esc(query) + "\"></label> <button name=\"action\" value=\"search\">Search</button>"
-                + " <label>or a structure (SMILES) <input name=\"structure\" id=\"structure\" size=\"40\"></label> "
-                + "<button name=\"action\" value=\"search-structure\">What applies to it</button></fieldset></form>";
+        return Templates.render("adminSearch", Map.of("csrf", csrf, "base", base, "query", query));
     }
 
     static String measured(String csrf, int base, AcidityTable t, MeasuredCompound m) {
         String v = m == null ? "" : String.join(", ", m.pka().stream().map(x -> String.format(Locale.ROOT, "%.2f", x))
                 .toList());
-        return "<form method=\"post\" action=\"/admin/table\" class=\"im-task\" id=\"measured-form\"><fieldset><legend>"
-                + (m == null ? "Add a measured compound" : "Edit measured compound " + Html.esc(m.id())) + "</legend>"
-                + hidden(csrf, base)
-                + field("Name", "name", m == null ? "" : m.name(), 24) + field("Id (blank: from the name)", "id",
-                        m == null ? "" : m.id(), 20)
-                + field("Structure (SMILES)", "smiles", m == null ? "" : m.smiles(), 40) + "<br>"
-                + field("pKa values (comma-separated)", "pka", v, 18)
-                + field("Temperature °C", "temperature", m == null ? "25" : num(m.temperature()), 5)
-                + field("Ionic strength mol/L", "ionicStrength", m == null ? "0" : num(m.ionicStrength()), 5)
-                + field("Method", "method", m == null ? "" : m.method(), 20) + "<br>"
-                + sources(t, "source", m == null ? "" : m.source(), Set.of())
-                + "<br><button name=\"action\" value=\"measured-sites\">Show the sites</button> "
-                + "<button name=\"action\" value=\"measured\">" + (m == null ? "Add to the draft" : "Save in the draft")
-                + "</button></fieldset></form>";
+        Map<String, Object> p = new HashMap<>();
+        p.put("csrf", csrf);
+        p.put("base", base);
+        p.put("m", m);
+        p.put("pka", v);
+        p.put("references", t.references());
+        return Templates.render("adminMeasured", p);
     }
 
     static String classValue(String csrf, int base, AcidityTable t, GroupClass g, Set<String> calibrations) {
-        StringBuilder opts = new StringBuilder();
-        for (GroupClass x : t.groups()) {
-            opts.append("<option value=\"").append(Html.esc(x.id())).append('"').append(g != null && g.id().equals(x.id())
-                    ? " selected" : "").append('>').append(Html.esc(x.id() + " — " + x.name())).append("</option>");
-        }
-        String now = g == null ? "" : "<p>Now: pKa " + num(g.pka()) + " (" + Html.esc(g.source("pka")) + "), ρ "
-                + num(g.rho()) + " (" + Html.esc(g.source("rho")) + "), sd " + num(g.sd()) + " (" + Html.esc(g.source("sd"))
-                + ")" + t.fit(g.id()).map(f -> String.format(Locale.ROOT, "; fitted by %s on %s, n = %d, RMSE %s",
-                        Html.esc(f.source()), Html.esc(f.date()), f.n(), Double.isNaN(f.rmse()) ? "–" : num(f.rmse())))
-                        .orElse("") + "</p>";
-        return "<form method=\"post\" action=\"/admin/table\" class=\"im-task\" id=\"class-form\"><fieldset><legend>"
-                + "Change a class value</legend>" + hidden(csrf, base) + "<label>Class <select name=\"group\" id=\"group\">"
-                + opts + "</select></label> <button name=\"action\" value=\"class-show\">Show</button>" + now + "<br>"
-                + field("pKa", "pka", g == null ? "" : num(g.pka()), 7) + field("ρ", "rho", g == null ? "" : num(g.rho()), 7)
-                + field("sd", "sd", g == null ? "" : num(g.sd()), 7) + "<br>" + sources(t, "source", "", calibrations)
-                + "<label><input type=\"checkbox\" name=\"confirm\" value=\"yes\" id=\"confirm\"> the present source "
-                + "gives the new value</label><br><small>A value set by hand cites where it comes from; a calibration's "
-                + "citation cannot be chosen here.</small><br><button name=\"action\" value=\"class-value\">"
-                + "Set in the draft</button></fieldset></form>";
+        String now = g == null ? "" : "Now: pKa " + num(g.pka()) + " (" + text(g.source("pka")) + "), ρ " + num(g.rho()) + " ("
+                + text(g.source("rho")) + "), sd " + num(g.sd()) + " (" + text(g.source("sd")) + ")" + t.fit(g.id())
+                        .map(f -> String.format(Locale.ROOT, "; fitted by %s on %s, n = %d, RMSE %s", text(f.source()), text(f.date()),
+                                f.n(), Double.isNaN(f.rmse()) ? "–" : num(f.rmse()))).orElse("");
+        Map<String, Object> p = new HashMap<>();
+        p.put("csrf", csrf);
+        p.put("base", base);
+        p.put("groups", t.groups());
+        p.put("g", g);
+        p.put("now", now);
+        p.put("sourceId", "source-" + (calibrations.isEmpty() ? "m" : "c"));
+        p.put("references", t.references().stream().filter(r -> !calibrations.contains(r.id())).toList());
+        return Templates.render("adminClassValue", p);
     }
 
     static String reference(String csrf, int base) {
-        return "<form method=\"post\" action=\"/admin/table\" class=\"im-task\" id=\"reference-form\"><fieldset><legend>"
-                + "Add a reference</legend>" + hidden(csrf, base) + field("Id", "refid", "", 16)
-                + field("Full citation", "citation", "", 80)
-                + "<button name=\"action\" value=\"reference\">Add to the draft</button></fieldset></form>";
+        return Templates.render("adminReference", Map.of("csrf", csrf, "base", base));
     }
 
-    private static String sources(AcidityTable t, String name, String selected, Set<String> calibrations) {
-        StringBuilder sb = new StringBuilder("<label>Source <select name=\"" + name + "\" id=\"" + name + "-"
-                + (calibrations.isEmpty() ? "m" : "c") + "\"><option value=\"\">(choose the reference)</option>");
-        for (Reference r : t.references()) {
-            if (calibrations.contains(r.id())) {
-                continue;
-            }
-            sb.append("<option value=\"").append(Html.esc(r.id())).append('"').append(r.id().equals(selected)
-                    ? " selected" : "").append('>').append(Html.esc(r.id())).append(" — ")
-                    .append(Html.esc(r.citation().length() > 70 ? r.citation().substring(0, 70) + "…" : r.citation()))
-                    .append("</option>");
-        }
-        return sb.append("</select></label>").toString();
+    /** Absent text (a missing source) as nothing, as the page always showed it. */
+    private static String text(String s) {
+        return s == null ? "" : s;
     }
 
-    private static String field(String label, String name, String value, int size) {
-        return "<label>" + Html.esc(label) + " <input name=\"" + name + "\" id=\"f-" + name + "\" size=\"" + size
-                + "\" value=\"" + Html.esc(value) + "\"></label>";
+    /** A citation short enough for a list of choices. */
+    static String shortCitation(String citation) {
+        return citation.length() > 70 ? citation.substring(0, 70) + "…" : citation;
     }
 
     static String num(double v) {
@@ -114,41 +77,15 @@ final class AdminForms {
     }
 
     static String messages(List<String> errors, List<String> notes) {
-        StringBuilder sb = new StringBuilder();
-        if (!errors.isEmpty()) {
-            sb.append("<ul class=\"im-error\" role=\"alert\" id=\"task-errors\">");
-            errors.forEach(e -> sb.append("<li>").append(Html.esc(e)).append("</li>"));
-            sb.append("</ul>");
-        }
-        if (!notes.isEmpty()) {
-            sb.append("<ul class=\"im-ok\" role=\"status\" id=\"task-notes\">");
-            notes.forEach(e -> sb.append("<li>").append(Html.esc(e)).append("</li>"));
-            sb.append("</ul>");
-        }
-        return sb.toString();
+        return Templates.render("adminMessages", Map.of("errors", errors, "notes", notes));
     }
 
-    /** The script: copy the draft into each task form on submit; line numbers beside the raw text. */
+    /**
+     * The page's script (table-admin.js): copies the draft into each task form on submit, numbers the raw text's
+     * lines, validates it live, jumps to a problem's line, loads a file and sorts columns.
+     */
     static String script() {
-        return "<script>(()=>{const d=document.getElementById('draft');if(!d)return;"
-                + "document.querySelectorAll('form.im-task').forEach(f=>f.addEventListener('submit',()=>{"
-                + "f.querySelector('.im-draft-copy').value=d.value;}));"
-                + "const g=document.getElementById('gutter');const num=()=>{const n=d.value.split('\\n').length;"
-                + "let s='';for(let i=1;i<=n;i++)s+=i+'\\n';g.textContent=s;};num();"
-                + "d.addEventListener('input',num);d.addEventListener('scroll',()=>{g.scrollTop=d.scrollTop;});"
-                + "window.imGoto=(line)=>{const raw=document.getElementById('raw');if(raw)raw.open=true;"
-                + "const ls=d.value.split('\\n');let p=0;for(let i=0;i<line-1&&i<ls.length;i++)p+=ls[i].length+1;"
-                + "d.focus();d.setSelectionRange(p,p+(ls[line-1]||'').length);"
-                + "d.scrollTop=Math.max(0,(line-3))*parseFloat(getComputedStyle(d).lineHeight);g.scrollTop=d.scrollTop;"
-                + "return false;};"
-                + "document.querySelectorAll('th[data-sort]').forEach(th=>th.addEventListener('click',()=>{"
-                + "const tb=th.closest('table').tBodies[0];const i=[...th.parentNode.children].indexOf(th);"
-                + "const dir=th.dataset.dir==='asc'?'desc':'asc';th.dataset.dir=dir;"
-                + "const key=r=>{const c=r.children[i];const v=c.dataset.v!==undefined?c.dataset.v:c.textContent;"
-                + "const n=parseFloat(v);return isNaN(n)?v:n;};"
-                + "[...tb.rows].sort((a,b)=>{const x=key(a),y=key(b);const c=x<y?-1:x>y?1:0;return dir==='asc'?c:-c;})"
-                + ".forEach(r=>tb.appendChild(r));}));"
-                + "})();</script>";
+        return StaticFiles.TABLE_ADMIN_JS;
     }
 
     static String changesList(String id, String title, List<RecordChanges.Change> changes) {

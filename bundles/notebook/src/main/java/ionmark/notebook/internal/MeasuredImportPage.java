@@ -77,26 +77,18 @@ public final class MeasuredImportPage implements AdminPage {
     }
 
     static String rows(MeasuredImport.Result r) {
-        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT,
-                "<p id=\"import-summary\">%d rows: %d ready, %d with problems.</p>", r.rows().size(),
-                r.rows().stream().filter(MeasuredImport.Row::ok).count(), r.rows().stream().filter(x -> !x.ok()).count()));
-        sb.append("<table class=\"im-sites\" id=\"import-rows\"><caption>Rows of the file</caption><thead><tr>"
-                + "<th>row</th><th>id</th><th>name</th><th>measured pKa</th><th>sites</th><th>predicted now</th>"
-                + "<th>status</th></tr></thead><tbody>");
-        for (MeasuredImport.Row row : r.rows()) {
-            var m = row.compound();
-            sb.append("<tr class=\"").append(row.ok() ? "im-ok" : "im-error").append("\"><td>").append(row.line())
-                    .append("</td><td>").append(m == null ? "" : Html.esc(m.id())).append("</td><td>")
-                    .append(m == null ? "" : Html.esc(m.name())).append("</td><td>")
-                    .append(m == null ? "" : Html.esc(m.pka().toString())).append("</td><td>")
-                    .append(Html.esc(String.join(", ", row.sites()))).append("</td><td>")
-                    .append(Html.esc(row.predicted().stream().map(v -> String.format(Locale.ROOT, "%.2f", v)).toList()
-                            .toString())).append("</td><td>");
-            row.problems().forEach(p -> sb.append("✖ ").append(Html.esc(p)).append("<br>"));
-            row.notes().forEach(p -> sb.append("△ ").append(Html.esc(p)).append("<br>"));
-            sb.append(row.ok() && row.notes().isEmpty() ? "ready" : "").append("</td></tr>");
-        }
-        return sb.append("</tbody></table>").toString();
+        return Templates.render("measuredRows", Map.of("rows", r.rows(), "ready", r.rows().stream()
+                .filter(MeasuredImport.Row::ok).count(), "failing", r.rows().stream().filter(x -> !x.ok()).count()));
+    }
+
+    /** A ready row and a row with problems look different. */
+    static String rowClass(MeasuredImport.Row row) {
+        return row.ok() ? "im-ok" : "im-error";
+    }
+
+    /** Today's prediction for a row's sites, two decimals each. */
+    static String predicted(MeasuredImport.Row row) {
+        return row.predicted().stream().map(v -> String.format(Locale.ROOT, "%.2f", v)).toList().toString();
     }
 
     private String preview(MeasuredImport.Result r, AcidityTable current) {
@@ -134,22 +126,7 @@ public final class MeasuredImportPage implements AdminPage {
     }
 
     private static String form(VersionInfo head, String text, MeasuredImport.Format format, String csrf) {
-        String t = Html.esc(csrf);
-        boolean sdf = format == MeasuredImport.Format.SDF;
-        return "<h2>Measured values for a draft based on v" + head.number() + "</h2>"
-                + "<p>TSV columns: id, smiles, pka_values (separated by ';', ascending), temperature (°C), "
-                + "ionic_strength (mol/L), method, source (a reference id of the table, or the citation of a new one), "
-                + "name. SDF: the same names as data fields.</p>"
-                + "<form method=\"post\" action=\"/admin/measured\"><input type=\"hidden\" name=\"token\" value=\"" + t
-                + "\"><input type=\"hidden\" name=\"base\" value=\"" + head.number() + "\">"
-                + "<p><label>Format <select name=\"format\"><option value=\"tsv\"" + (sdf ? "" : " selected")
-                + ">TSV</option><option value=\"sdf\"" + (sdf ? " selected" : "") + ">SDF</option></select></label> "
-                + "<label>Load a file <input type=\"file\" id=\"measured-file\" accept=\".tsv,.txt,.sdf,.sd\"></label></p>"
-                + "<textarea id=\"measured-data\" name=\"data\" rows=\"14\" cols=\"110\" spellcheck=\"false\">" + Html.esc(text)
-                + "</textarea><p><label>Why (required to publish) <input name=\"comment\" size=\"70\"></label></p>"
-                + "<p><button name=\"action\" value=\"preview\">Check rows and preview</button> "
-                + "<button name=\"action\" value=\"publish\">Publish (only when every row is ready)</button></p></form>"
-                + "<script>document.getElementById('measured-file').addEventListener('change',e=>{const f=e.target.files[0];"
-                + "if(f){f.text().then(x=>{document.getElementById('measured-data').value=x;});}});</script>";
+        return Templates.render("measuredForm", Map.of("head", head.number(), "text", text, "sdf",
+                format == MeasuredImport.Format.SDF, "csrf", csrf));
     }
 }

@@ -14,6 +14,19 @@ import ionmark.host.api.Entry;
 final class QuickCheckForm {
     static final String DEFAULT_PH = "7.4";
 
+    /** A condition field as the form shows it: its value as typed and, when bad, what is wrong with it (else null). */
+    record Field(String name, String label, String value, String error) {
+        /** "true" for a bad field, else null: the template then leaves the attribute out. */
+        String invalid() {
+            return error == null ? null : "true";
+        }
+
+        /** The id of the field's message, or null. */
+        String describedBy() {
+            return error == null ? null : name + "-error";
+        }
+    }
+
     private QuickCheckForm() {
     }
 
@@ -26,22 +39,12 @@ final class QuickCheckForm {
         Double p = number(ph, "ph", -2, 16, "pH must be a number from -2 to 16", bad);
         Double temp = number(t, "temp", 0, 100, "temperature must be a number from 0 to 100 °C", bad);
         Double ionic = number(is, "ionic", 0, 5, "ionic strength must be a number from 0 to 5 M", bad);
-        StringBuilder sb = new StringBuilder("<form class=\"im-quick\" method=\"post\" id=\"quick\">");
-        sb.append("<label class=\"im-wide\">Structure: SMILES, a chemical name, or a molfile (paste it or drop the file here)"
-                + "<textarea id=\"structure\" name=\"structure\" rows=\"8\" cols=\"70\" "
-                + "ondragover=\"event.preventDefault()\" ondrop=\"event.preventDefault();const f=event.dataTransfer"
-                + ".files[0];if(f){f.text().then(x=>{this.value=x;});}\">").append(Html.esc(structure))
-                .append("</textarea></label>");
-        sb.append(field("ph", "pH", ph, bad)).append(field("temp", "°C (25 if empty)", t, bad))
-                .append(field("ionic", "ionic strength, M (0 if empty)", is, bad));
-        sb.append("<button type=\"submit\">Check</button></form>");
-        if (structure.isBlank()) {
-            if (params.containsKey("structure")) {
-                sb.append("<p class=\"im-error\" role=\"alert\">Structure: give a SMILES, a chemical name or a molfile.</p>");
-            }
-            return sb.toString();
-        }
-        if (!bad.isEmpty()) {
+        List<Field> fields = List.of(new Field("ph", "pH", ph, bad.get("ph")),
+                new Field("temp", "°C (25 if empty)", t, bad.get("temp")),
+                new Field("ionic", "ionic strength, M (0 if empty)", is, bad.get("ionic")));
+        StringBuilder sb = new StringBuilder(Templates.render("quickCheckForm", Map.of("structure", structure, "fields",
+                fields, "askForStructure", structure.isBlank() && params.containsKey("structure"))));
+        if (structure.isBlank() || !bad.isEmpty()) {
             return sb.toString();
         }
         List<String> lines = new ArrayList<>();
@@ -69,13 +72,5 @@ final class QuickCheckForm {
         }
         bad.put(name, message + ", not '" + v.strip() + "'");
         return null;
-    }
-
-    private static String field(String name, String label, String value, Map<String, String> bad) {
-        String err = bad.get(name);
-        return "<label>" + label + " <input name=\"" + name + "\" size=\"6\" value=\"" + Html.esc(value) + "\""
-                + (err == null ? "" : " aria-invalid=\"true\" aria-describedby=\"" + name + "-error\"") + ">"
-                + (err == null ? "" : "<span class=\"im-error\" id=\"" + name + "-error\" role=\"alert\">"
-                        + Html.esc(err) + "</span>") + "</label>";
     }
 }

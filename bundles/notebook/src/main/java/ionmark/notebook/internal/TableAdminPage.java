@@ -360,21 +360,11 @@ public final class TableAdminPage implements AdminPage {
                 + "<button name=\"action\" value=\"publish\" id=\"publish\">Publish</button> (the head is v" + head.number()
                 + ", the draft is based on v" + base + ")</p>"
                 + "<details id=\"raw\"><summary>Raw JSON (for power users)</summary>"
-                + "<div class=\"im-raw\"><div class=\"im-gutter\" id=\"gutter\" style=\"height:30em\"></div>"
+                + "<div class=\"im-raw\"><div class=\"im-gutter\" id=\"gutter\"></div>"
                 + "<textarea id=\"draft\" name=\"draft\" rows=\"23\" cols=\"140\" spellcheck=\"false\" wrap=\"off\">"
                 + Html.esc(draft) + "</textarea></div><div id=\"live\" aria-live=\"polite\"></div>"
                 + "<p><label>Or load a table file <input type=\"file\" id=\"upload\" accept=\".json,application/json\">"
-                + "</label> <a href=\"/admin/table?action=export\">Export the head</a></p></details></form><script>"
-                + "const d=document.getElementById('draft'),l=document.getElementById('live');let h,seq=0;"
-                + "d.addEventListener('input',()=>{clearTimeout(h);h=setTimeout(()=>{const my=++seq;"
-                + "fetch('/admin/table',{method:'POST',headers:{'Content-Type':'application/x-www-form-urlencoded'},"
-                + "body:new URLSearchParams({token:'" + t + "',action:'validate',draft:d.value})}).then(x=>x.text())"
-                + ".then(x=>{if(my===seq){const doc=new DOMParser().parseFromString(x,'text/html');"
-                + "const p=doc.getElementById('problems');l.innerHTML=p?p.innerHTML:'';}});},600);});"
-                + "document.addEventListener('click',e=>{const a=e.target.closest('[data-line]');if(a){e.preventDefault();"
-                + "window.imGoto(+a.dataset.line);}});"
-                + "document.getElementById('upload').addEventListener('change',e=>{const f=e.target.files[0];if(f){"
-                + "f.text().then(t=>{d.value=t;d.dispatchEvent(new Event('input'));});}});</script>";
+                + "</label> <a href=\"/admin/table?action=export\">Export the head</a></p></details></form>";
     }
 
     private String history(VersionInfo head, String csrf) {
