@@ -3,7 +3,7 @@ package ionmark.speciation.internal.estimate;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
-import java.util.Locale;
+import java.util.regex.Pattern;
 
 import ionmark.speciation.api.Term;
 import ionmark.speciation.internal.sites.MatchTarget;
@@ -31,21 +31,30 @@ public final class AnalogCorrection {
             return est;
         }
         List<EstimatedSite> out = new ArrayList<>(est.size());
+        int[][] ids = null; // the molecule's circular identifiers, shared by its sites' environments
         for (EstimatedSite s : est) {
-            out.add(s.site().group().permanent() ? s : correct(index, mol, s));
+            if (s.site().group().permanent()) {
+                out.add(s);
+                continue;
+            }
+            String held = heldBy(s);
+            List<SiteAnalogIndex.MeasuredSite> cands = index.candidates(s.site().group(), held);
+            if (cands.isEmpty()) {
+                out.add(s);
+                continue;
+            }
+            if (ids == null) {
+                ids = Morgan.identifiers(mol, index.settings().radius());
+            }
+            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
         }
         return out;
     }
 
-    static EstimatedSite correct(SiteAnalogIndex index, MatchTarget mol, EstimatedSite s) {
-        String held = heldBy(s);
-        List<SiteAnalogIndex.MeasuredSite> cands = index.candidates(s.site().group()).stream()
-                .filter(m -> m.held().equals(held)).toList();
-        if (cands.isEmpty()) {
-            return s;
-        }
+    /** {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment. */
+    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, EstimatedSite s,
+            List<SiteAnalogIndex.MeasuredSite> cands) {
         AnalogSettings cfg = index.settings();
-        int[] env = SiteEnvironment.of(mol, s.site(), cfg.radius());
         // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
@@ -91,26 +100,46 @@ public final class AnalogCorrection {
      * pyridazine without analogs: the diazine ring rules hold all of them.
      */
     public static String heldBy(EstimatedSite s) {
-        return String.join(" | ", s.terms().stream().filter(t -> t.label().startsWith(PAIR_RULE))
-                .map(t -> t.label().replaceFirst(" on atom \\d+", "")).sorted().toList());
+        List<String> rules = null;
+        for (Term t : s.terms()) {
+            if (t.label().startsWith(PAIR_RULE)) {
+                if (rules == null) {
+                    rules = new ArrayList<>(2);
+                }
+                rules.add(ON_ATOM.matcher(t.label()).replaceFirst(""));
+            }
+        }
+        if (rules == null) {
+            return "";
+        }
+        rules.sort(null);
+        return String.join(" | ", rules);
     }
+
+    private static final Pattern ON_ATOM = Pattern.compile(" on atom \\d+");
 
     /** How {@link PairRules} starts the derivation line of a pair rule. */
     static final String PAIR_RULE = "pair rule ";
 
     private static Term term(Used u, double part, double denom, AnalogSettings cfg) {
         SiteAnalogIndex.MeasuredSite m = u.site();
-        String label = String.format(Locale.ROOT,
-                "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant %.2f, "
-                        + "local similarity %.2f, weight %.2f of %.2f (prior %.1f)",
-                m.compound().name(), m.group(), values(m.compound().pka()), m.compound().temperature(),
-                m.compound().method().isBlank() ? "method not stated" : m.compound().method(), m.residual(), m.model(),
-                u.similarity(), u.weight(), denom, cfg.prior());
-        return new Term(label, part, "measured value in the shared table: " + m.citation());
-    }
-
-    private static String values(List<Double> v) {
-        return String.join("; ", v.stream().map(x -> String.format(Locale.ROOT, "%.2f", x)).toList());
+        // "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant
+        // %.2f, local similarity %.2f, weight %.2f of %.2f (prior %.1f)", written without a Formatter (Decimals)
+        StringBuilder label = new StringBuilder(200).append("measured analog ").append(m.compound().name())
+                .append(" (").append(m.group()).append(", measured pKa ");
+        List<Double> pka = m.compound().pka();
+        for (int i = 0; i < pka.size(); i++) {
+            Decimals.append(i == 0 ? label : label.append("; "), pka.get(i), 2, false);
+        }
+        Decimals.append(label.append(" at "), m.compound().temperature(), 0, false).append(" °C, ")
+                .append(m.compound().method().isBlank() ? "method not stated" : m.compound().method());
+        Decimals.append(label.append("): residual "), m.residual(), 2, true);
+        Decimals.append(label.append(" against the model's constant "), m.model(), 2, false);
+        Decimals.append(label.append(", local similarity "), u.similarity(), 2, false);
+        Decimals.append(label.append(", weight "), u.weight(), 2, false);
+        Decimals.append(label.append(" of "), denom, 2, false);
+        Decimals.append(label.append(" (prior "), cfg.prior(), 1, false).append(')');
+        return new Term(label.toString(), part, "measured value in the shared table: " + m.citation());
     }
 
     private static double sq(double x) {

@@ -3,7 +3,6 @@ package ionmark.speciation.internal.estimate;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
-import java.util.Locale;
 import java.util.Set;
 
 import ionmark.acidity.api.PairRule;
@@ -79,10 +78,15 @@ public final class PairRules {
     private EstimatedSite held(EstimatedSite s, EstimatedSite partner, PairRule rule) {
         boolean base = s.site().group().type() == SiteType.BASE;
         double d = base ? rule.singly() : -rule.singly();
-        String label = String.format(Locale.ROOT, "pair rule with the %s site on atom %d (%s): singly %s form held "
-                + "by %.2f, doubly %s form dearer by %.2f; the pair's interaction grows by %.2f",
-                partner.site().group().id(), AtomText.shown(partner.site().atom()), rule.name(), base ? "protonated" : "deprotonated",
-                rule.singly(), base ? "protonated" : "deprotonated", rule.doubly(), rule.interaction());
+        // "pair rule with the %s site on atom %d (%s): singly %s form held by %.2f, doubly %s form dearer by %.2f;
+        // the pair's interaction grows by %.2f", written without a Formatter (Decimals)
+        String form = base ? "protonated" : "deprotonated";
+        StringBuilder text = new StringBuilder(160).append("pair rule with the ").append(partner.site().group().id())
+                .append(" site on atom ").append(AtomText.shown(partner.site().atom())).append(" (").append(rule.name())
+                .append("): singly ").append(form).append(" form held by ");
+        Decimals.append(text, rule.singly(), 2, false).append(", doubly ").append(form).append(" form dearer by ");
+        Decimals.append(text, rule.doubly(), 2, false).append("; the pair's interaction grows by ");
+        String label = Decimals.append(text, rule.interaction(), 2, false).toString();
         return s.shifted(d, new Term(label, d, table.table().citation(rule.source()), List.of(partner.site().atom())), s.basis(), s.sd());
     }
 }

@@ -37,6 +37,8 @@ public final class SiteAnalogIndex {
     public static final SiteAnalogIndex EMPTY = new SiteAnalogIndex(List.of(), AnalogSettings.DEFAULT);
 
     private final Map<String, List<MeasuredSite>> byFamily = new HashMap<>();
+    /** The candidates of {@link #candidates}, by family, type and holding pair rules, in the family's order. */
+    private final Map<String, List<MeasuredSite>> byKey = new HashMap<>();
     private final AnalogSettings settings;
     private final int size;
 
@@ -50,6 +52,12 @@ public final class SiteAnalogIndex {
             }
         }
         byFamily.replaceAll((k, v) -> List.copyOf(v));
+        byFamily.forEach((family, all) -> {
+            for (MeasuredSite s : all) {
+                byKey.computeIfAbsent(key(family, s.type(), s.held()), k -> new ArrayList<>()).add(s);
+            }
+        });
+        byKey.replaceAll((k, v) -> List.copyOf(v));
         this.size = n;
     }
 
@@ -62,10 +70,16 @@ public final class SiteAnalogIndex {
         return size;
     }
 
-    /** Measured sites of the same family and type as {@code g} (the same class among them). */
-    public List<MeasuredSite> candidates(GroupClass g) {
-        List<MeasuredSite> all = byFamily.getOrDefault(family(g.id()), List.of());
-        return all.stream().filter(s -> s.type() == g.type()).toList();
+    /**
+     * Measured sites of the same family and type as {@code g} (the same class among them) that are held by the
+     * same pair rules ({@link AnalogCorrection#heldBy}), in the index's order; looked up, not filtered per call.
+     */
+    public List<MeasuredSite> candidates(GroupClass g, String held) {
+        return byKey.getOrDefault(key(family(g.id()), g.type(), held), List.of());
+    }
+
+    private static String key(String family, SiteType type, String held) {
+        return family + '\u0000' + type + '\u0000' + held;
     }
 
     /** A class's family: its id up to the first hyphen ({@code amine-tertiary} → {@code amine}). */

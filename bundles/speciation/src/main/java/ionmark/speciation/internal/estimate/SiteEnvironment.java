@@ -25,7 +25,11 @@ public final class SiteEnvironment {
 
     /** Sorted distinct feature hashes of the site's environment. */
     public static int[] of(MatchTarget mol, PerceivedSite site, int radius) {
-        int[][] ids = Morgan.identifiers(mol, radius);
+        return of(mol, Morgan.identifiers(mol, radius), site, radius);
+    }
+
+    /** {@link #of(MatchTarget, PerceivedSite, int)} with the molecule's identifiers ({@link Morgan#identifiers}) given. */
+    static int[] of(MatchTarget mol, int[][] ids, PerceivedSite site, int radius) {
         int[][] nbr = mol.adjacency();
         int n = mol.atomCount();
         int[] dist = distances(nbr, site.atom(), radius);
@@ -64,7 +68,14 @@ public final class SiteEnvironment {
                 }
             }
         }
-        return Arrays.stream(f, 0, size).sorted().distinct().toArray();
+        Arrays.sort(f, 0, size);
+        int distinct = 0;
+        for (int i = 0; i < size; i++) {
+            if (distinct == 0 || f[i] != f[distinct - 1]) {
+                f[distinct++] = f[i];
+            }
+        }
+        return Arrays.copyOf(f, distinct);
     }
 
     /** Tanimoto similarity of two sorted distinct feature sets. */

@@ -10,8 +10,14 @@ import java.util.Collection;
 import java.util.List;
 import java.util.Set;
 
+import org.openscience.cdk.AtomRef;
+import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
+import org.openscience.cdk.isomorphism.matchers.Expr;
+import org.openscience.cdk.isomorphism.matchers.QueryAtom;
+import org.openscience.cdk.isomorphism.matchers.QueryAtomContainer;
 import org.openscience.cdk.silent.SilentChemObjectBuilder;
+import org.openscience.cdk.smarts.Smarts;
 import org.openscience.cdk.smarts.SmartsPattern;
 
 import ionmark.speciation.internal.estimate.EstimatedSite;
@@ -35,6 +41,12 @@ public final class KnownGaps {
     }
 
     private static final List<Gap> GAPS = read();
+    /**
+     * Per gap, how many atoms of each element its pattern needs at least (element → count; query atoms that
+     * do not name one element are not counted): a molecule with fewer cannot match, and is not handed to CDK's
+     * matcher. A necessary condition only, so the warnings are the same with or without it.
+     */
+    private static final List<int[]> NEEDS = GAPS.stream().map(g -> elementsNeeded(g.smarts())).toList();
     /** Compiled patterns per thread: a compiled pattern keeps matching state. Bounded by the list's length. */
     private static final ThreadLocal<List<SmartsPattern>> PATTERNS = ThreadLocal.withInitial(KnownGaps::compile);
 
@@ -61,9 +73,16 @@ public final class KnownGaps {
     static List<String> forClasses(IAtomContainer mol, Collection<String> siteClasses) {
         List<String> out = new ArrayList<>(0);
         List<SmartsPattern> patterns = null;
+        int[] has = null;
         for (int i = 0; i < GAPS.size(); i++) {
             Gap g = GAPS.get(i);
             if (!g.classes().contains("*") && g.classes().stream().noneMatch(siteClasses::contains)) {
+                continue;
+            }
+            if (has == null) {
+                has = elementCounts(mol);
+            }
+            if (!enough(has, NEEDS.get(i))) {
                 continue;
             }
             if (patterns == null) {
@@ -75,6 +94,67 @@ public final class KnownGaps {
             }
         }
         return out;
+    }
+
+    /** Atoms per atomic number (index 0 for any atom without one). */
+    private static int[] elementCounts(IAtomContainer mol) {
+        int[] has = new int[ELEMENTS];
+        for (IAtom a : mol.atoms()) {
+            Integer z = a.getAtomicNumber();
+            has[z == null || z < 0 || z >= ELEMENTS ? 0 : z]++;
+        }
+        return has;
+    }
+
+    private static boolean enough(int[] has, int[] needs) {
+        for (int z = 1; z < ELEMENTS; z++) {
+            if (has[z] < needs[z]) {
+                return false;
+            }
+        }
+        return true;
+    }
+
+    private static final int ELEMENTS = 128;
+
+    /** The least atom count per element a match of {@code smarts} needs (hydrogen never counted). */
+    static int[] elementsNeeded(String smarts) {
+        QueryAtomContainer q = new QueryAtomContainer(SilentChemObjectBuilder.getInstance());
+        if (!Smarts.parse(q, smarts)) {
+            throw new IllegalStateException("known-gaps pattern cannot be read: " + smarts);
+        }
+        int[] needs = new int[ELEMENTS];
+        for (IAtom a : q.atoms()) {
+            IAtom atom = AtomRef.deref(a);
+            int z = atom instanceof QueryAtom qa ? element(qa.getExpression()) : 0;
+            if (z > 1 && z < ELEMENTS) {
+                needs[z]++;
+            }
+        }
+        return needs;
+    }
+
+    /** The one element an atom expression requires, 0 when it allows several or says nothing about it. */
+    private static int element(Expr e) {
+        if (e == null) {
+            return 0;
+        }
+        switch (e.type()) {
+            case ELEMENT:
+            case ALIPHATIC_ELEMENT:
+            case AROMATIC_ELEMENT:
+                return e.value();
+            case AND: {
+                int l = element(e.left());
+                return l != 0 ? l : element(e.right());
+            }
+            case OR: {
+                int l = element(e.left());
+                return l != 0 && l == element(e.right()) ? l : 0;
+            }
+            default:
+                return 0;
+        }
     }
 
     private static List<SmartsPattern> compile() {
