@@ -28,6 +28,16 @@ public final class Impact {
 
     public static Optional<ObjectNode> compare(Structure s, double ph, Analysis before, Analysis after,
             double threshold) {
+        ObjectNode o = row(s, ph, before, after, threshold);
+        return o.path("changed").isEmpty() ? Optional.empty() : Optional.of(o);
+    }
+
+    /**
+     * The comparison whatever its outcome: {@code changed} lists why it is reported (empty: it is not), and
+     * the before/after values, the change and the differing derivation lines follow either way (the impact
+     * job's Parquet rows hold every structure and pH).
+     */
+    public static ObjectNode row(Structure s, double ph, Analysis before, Analysis after, double threshold) {
         boolean errorChanged = before.ok() != after.ok();
         Integer cb = dominant(before.chargeStates());
         Integer ca = dominant(after.chargeStates());
@@ -36,9 +46,6 @@ public final class Impact {
         boolean chargeChanged = cb != null && ca != null && !cb.equals(ca);
         double delta = fa - fb;
         boolean fractionChanged = Math.abs(delta) > threshold;
-        if (!errorChanged && !chargeChanged && !fractionChanged) {
-            return Optional.empty();
-        }
         ObjectNode o = JSON.createObjectNode();
         o.put("id", s.id());
         o.put("source", s.source());
@@ -68,7 +75,7 @@ public final class Impact {
             o.put("deltaFractionNeutral", round4(delta));
         }
         derivations(o.putArray("derivationChanges"), before, after);
-        return Optional.of(o);
+        return o;
     }
 
     private static void side(ObjectNode o, Analysis a, Integer dominant) {

@@ -24,6 +24,10 @@ final class ImpactFn extends DoFn<Chunk, String> {
     static final TupleTag<String> PINNED = new TupleTag<>() {
         private static final long serialVersionUID = 1L;
     };
+    /** Every comparison, changed or not, pinned or not (with {@code --parquet}: the Parquet rows). */
+    static final TupleTag<String> ROWS = new TupleTag<>() {
+        private static final long serialVersionUID = 1L;
+    };
     private final Counter compared = Metrics.counter(ReadFiles.NS, "records");
     private final Counter changed = Metrics.counter(ReadFiles.NS, "changed");
     private final Counter pinnedChanged = Metrics.counter(ReadFiles.NS, "changed-pinned");
@@ -34,12 +38,16 @@ final class ImpactFn extends DoFn<Chunk, String> {
     private final double threshold;
     private final double temperature;
     private final double ionicStrength;
+    private final boolean rows;
     private transient Speciation b;
     private transient Speciation a;
     private transient EntryAnnotation nb;
     private transient EntryAnnotation na;
 
-    ImpactFn(EngineSpec before, EngineSpec after, double threshold, double temperature, double ionicStrength) {
+    /** @param rows also emit every comparison to {@link #ROWS} */
+    ImpactFn(EngineSpec before, EngineSpec after, double threshold, double temperature, double ionicStrength,
+            boolean rows) {
+        this.rows = rows;
         this.before = before;
         this.after = after;
         this.threshold = threshold;
@@ -119,14 +127,20 @@ final class ImpactFn extends DoFn<Chunk, String> {
     }
 
     private void emit(Structure s, double ph, Analysis x, Analysis y, MultiOutputReceiver out) {
-        Impact.compare(s, ph, x, y, threshold).ifPresent(o -> {
-            if (s.pinnedVersion() > 0) {
-                pinnedChanged.inc();
-                out.get(PINNED).output(o.toString());
-            } else {
-                changed.inc();
-                out.get(CHANGED).output(o.toString());
-            }
-        });
+        com.fasterxml.jackson.databind.node.ObjectNode o = Impact.row(s, ph, x, y, threshold);
+        String json = o.toString();
+        if (rows) {
+            out.get(ROWS).output(json);
+        }
+        if (o.path("changed").isEmpty()) {
+            return;
+        }
+        if (s.pinnedVersion() > 0) {
+            pinnedChanged.inc();
+            out.get(PINNED).output(json);
+        } else {
+            changed.inc();
+            out.get(CHANGED).output(json);
+        }
     }
 }

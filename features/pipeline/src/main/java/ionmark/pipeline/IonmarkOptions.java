@@ -51,13 +51,14 @@ public interface IonmarkOptions extends PipelineOptions {
 
     void setBrief(boolean v);
 
-    @Description("Also write the records as Parquet (records-*.parquet), one row per structure and pH")
+    @Description("Also write Parquet, one row per structure and pH: the records (records-*.parquet), or for the "
+            + "impact job every comparison, changed or not (impact-*.parquet)")
     @Default.Boolean(false)
     boolean getParquet();
 
     void setParquet(boolean v);
 
-    @Description("Output shards; 0 lets the runner choose")
+    @Description("Output shards; 0 lets the runner choose (the direct runner: one file per bundle)")
     @Default.Integer(0)
     int getShards();
 

@@ -10,10 +10,12 @@ import org.apache.beam.sdk.Pipeline;
 import org.apache.beam.sdk.io.FileIO;
 import org.apache.beam.sdk.io.TextIO;
 import org.apache.beam.sdk.transforms.Create;
+import org.apache.beam.sdk.transforms.PTransform;
 import org.apache.beam.sdk.transforms.ParDo;
 import org.apache.beam.sdk.transforms.Reshuffle;
 import org.apache.beam.sdk.values.PCollection;
 import org.apache.beam.sdk.values.PCollectionTuple;
+import org.apache.beam.sdk.values.PDone;
 import org.apache.beam.sdk.values.TupleTagList;
 
 import ionmark.speciation.api.Conditions;
@@ -27,21 +29,22 @@ public final class Jobs {
      * Annotate: {@code batch}'s record per structure and pH, in {@code out/records-*.jsonl}; with
      * {@code --parquet} the same records as rows of {@code out/records-*.parquet}.
      */
-    public static void annotate(Pipeline p, IonmarkOptions o) throws IOException {
+    public static List<BundleFiles> annotate(Pipeline p, IonmarkOptions o) throws IOException {
+        List<BundleFiles> files = new ArrayList<>();
         EngineSpec spec = EngineSpec.of(o.getTable(), o.getMaxHeavyAtoms(), o.getTimeoutMillis());
         check(o);
         PCollection<String> records = structures(p, o)
                 .apply("Annotate", ParDo.of(new AnnotateFn(spec, o.getTemp(), o.getIonic(), o.getBrief())));
-        records.apply("WriteJsonLines", write(o, "records"));
+        records.apply("WriteJsonLines", write(o, "records", files));
         if (o.getParquet()) {
-            FileIO.Write<Void, String> w = FileIO.<String>write().via(new ParquetSink())
-                    .to(o.getOut().replaceAll("/+$", "")).withPrefix("records").withSuffix(".parquet");
-            records.apply("WriteParquet", o.getShards() > 0 ? w.withNumShards(o.getShards()) : w);
+            records.apply("WriteParquet", parquet(o, "records", ParquetSink.Layout.RECORDS, files));
         }
+        return files;
     }
 
     /** Impact: what changes between two tables, in {@code out/impact-*.jsonl} and {@code out/impact-pinned-*.jsonl}. */
-    public static void impact(Pipeline p, IonmarkOptions o) throws IOException {
+    public static List<BundleFiles> impact(Pipeline p, IonmarkOptions o) throws IOException {
+        List<BundleFiles> files = new ArrayList<>();
         if (o.getBefore().isBlank() || o.getAfter().isBlank()) {
             throw new IllegalArgumentException("impact needs --before=TABLE and --after=TABLE (a file or 'shipped')");
         }
@@ -49,17 +52,21 @@ public final class Jobs {
         EngineSpec after = EngineSpec.of(o.getAfter(), o.getMaxHeavyAtoms(), o.getTimeoutMillis());
         check(o);
         PCollectionTuple out = structures(p, o).apply("Compare", ParDo.of(new ImpactFn(before, after,
-                o.getThreshold(), o.getTemp(), o.getIonic())).withOutputTags(ImpactFn.CHANGED,
-                        TupleTagList.of(ImpactFn.PINNED)));
-        out.get(ImpactFn.CHANGED).apply("WriteChanged", write(o, "impact"));
-        out.get(ImpactFn.PINNED).apply("WritePinned", write(o, "impact-pinned"));
+                o.getThreshold(), o.getTemp(), o.getIonic(), o.getParquet())).withOutputTags(ImpactFn.CHANGED,
+                        TupleTagList.of(ImpactFn.PINNED).and(ImpactFn.ROWS)));
+        out.get(ImpactFn.CHANGED).apply("WriteChanged", write(o, "impact", files));
+        out.get(ImpactFn.PINNED).apply("WritePinned", write(o, "impact-pinned", files));
+        if (o.getParquet()) {
+            out.get(ImpactFn.ROWS).apply("WriteParquet", parquet(o, "impact", ParquetSink.Layout.IMPACT, files));
+        }
+        return files;
     }
 
     private static PCollection<Chunk> structures(Pipeline p, IonmarkOptions o) {
         return p.apply("Patterns", Create.of(patterns(o.getIn())))
                 .apply("Match", FileIO.matchAll())
                 .apply("Open", FileIO.readMatches())
-                .apply("Read", ParDo.of(new ReadFiles(phs(o.getPh()))))
+                .apply("Read", ParDo.of(new ReadFiles(phs(o.getPh())))).setCoder(ChunkCoder.of())
                 // one file holds many structures: spread its chunks over the workers
                 .apply("Spread", Reshuffle.<Chunk>viaRandomKey().withNumBuckets(buckets(o)));
     }
@@ -80,9 +87,38 @@ public final class Jobs {
         return Math.max(1, o.as(org.apache.beam.runners.direct.DirectOptions.class).getTargetParallelism());
     }
 
-    private static TextIO.Write write(IonmarkOptions o, String prefix) {
-        TextIO.Write w = TextIO.write().to(o.getOut().replaceAll("/+$", "") + "/" + prefix).withSuffix(".jsonl");
+    /**
+     * JSON Lines: on the direct runner each bundle straight to its file ({@link BundleFiles}, unless
+     * {@code --shards} asks for a number of files; added to {@code files}, to be finished after the run),
+     * elsewhere {@code TextIO}.
+     */
+    static PTransform<PCollection<String>, PDone> write(IonmarkOptions o, String prefix, List<BundleFiles> files) {
+        String dir = o.getOut().replaceAll("/+$", "");
+        if (bundleFiles(o)) {
+            BundleFiles f = new BundleFiles(dir, prefix, ".jsonl", TextIO::sink);
+            files.add(f);
+            return f;
+        }
+        TextIO.Write w = TextIO.write().to(dir + "/" + prefix).withSuffix(".jsonl");
         return o.getShards() > 0 ? w.withNumShards(o.getShards()) : w;
+    }
+
+    /** Parquet rows ({@link ParquetSink}), written like {@link #write}. */
+    static PTransform<PCollection<String>, ?> parquet(IonmarkOptions o, String prefix, ParquetSink.Layout layout,
+            List<BundleFiles> files) {
+        String dir = o.getOut().replaceAll("/+$", "");
+        if (bundleFiles(o)) {
+            BundleFiles f = new BundleFiles(dir, prefix, ".parquet", () -> new ParquetSink(layout));
+            files.add(f);
+            return f;
+        }
+        FileIO.Write<Void, String> w = FileIO.<String>write().via(new ParquetSink(layout)).to(dir).withPrefix(prefix)
+                .withSuffix(".parquet");
+        return o.getShards() > 0 ? w.withNumShards(o.getShards()) : w;
+    }
+
+    private static boolean bundleFiles(IonmarkOptions o) {
+        return o.getShards() == 0 && o.getRunner().getSimpleName().equals("DirectRunner");
     }
 
     /** Checks the conditions once on the launcher, so a bad value stops the run before it starts. */

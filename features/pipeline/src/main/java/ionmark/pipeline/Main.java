@@ -53,12 +53,9 @@ public final class Main {
         o.as(DirectOptions.class).setBlockOnRun(false);
         phases.mark("options");
         Pipeline p = Pipeline.create(o);
+        java.util.List<BundleFiles> files;
         try {
-            if (job.equals("impact")) {
-                Jobs.impact(p, o);
-            } else {
-                Jobs.annotate(p, o);
-            }
+            files = job.equals("impact") ? Jobs.impact(p, o) : Jobs.annotate(p, o);
         } catch (IllegalArgumentException | java.io.IOException e) {
             err.println("ionmark pipeline: " + e.getMessage());
             return 2;
@@ -80,6 +77,15 @@ public final class Main {
             err.println("ionmark pipeline: the run ended " + s);
             return 1;
         }
+        try {
+            for (BundleFiles f : files) {
+                f.finish();
+            }
+        } catch (java.io.IOException e) {
+            err.println("ionmark pipeline: cannot name the output files: " + e.getMessage());
+            return 1;
+        }
+        phases.mark("files");
         return 0;
     }
 

@@ -16,6 +16,7 @@ import org.apache.parquet.hadoop.example.ExampleParquetWriter;
 import org.apache.parquet.hadoop.metadata.CompressionCodecName;
 import org.apache.parquet.io.OutputFile;
 import org.apache.parquet.io.PositionOutputStream;
+import org.apache.parquet.schema.MessageType;
 
 /**
  * Writes JSON records as Parquet rows ({@link ParquetRows}) into the channel Beam's {@link FileIO} opens, so
@@ -25,12 +26,36 @@ import org.apache.parquet.io.PositionOutputStream;
  */
 final class ParquetSink implements FileIO.Sink<String> {
     private static final long serialVersionUID = 1L;
+
+    /** Which JSON records become which rows. */
+    enum Layout {
+        /** The annotate job's records ({@link ParquetRows}). */
+        RECORDS(ParquetRows.SCHEMA),
+        /** The impact job's comparisons ({@link ImpactRows}). */
+        IMPACT(ImpactRows.SCHEMA);
+
+        private final MessageType schema;
+
+        Layout(MessageType schema) {
+            this.schema = schema;
+        }
+
+        Group row(String json) {
+            return this == RECORDS ? ParquetRows.of(json) : ImpactRows.of(json);
+        }
+    }
+
+    private final Layout layout;
     private transient ParquetWriter<Group> writer;
+
+    ParquetSink(Layout layout) {
+        this.layout = layout;
+    }
 
     @Override
     public void open(WritableByteChannel channel) throws IOException {
         writer = builder(new ChannelFile(channel))
-                .withType(ParquetRows.SCHEMA)
+                .withType(layout.schema)
                 .withCompressionCodec(CompressionCodecName.SNAPPY)
                 .withCodecFactory(new SnappyCodecs())
                 .build();
@@ -59,7 +84,7 @@ final class ParquetSink implements FileIO.Sink<String> {
 
     @Override
     public void write(String record) throws IOException {
-        writer.write(ParquetRows.of(record));
+        writer.write(layout.row(record));
     }
 
     /** Closes the writer, which writes the footer; Beam closes the channel itself. */

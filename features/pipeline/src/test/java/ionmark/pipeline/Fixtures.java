@@ -96,6 +96,11 @@ final class Fixtures {
         if (rc != 0) {
             throw new IllegalStateException("pipeline exited " + rc + ": " + err.toString(StandardCharsets.UTF_8));
         }
+        return lines(out, prefix);
+    }
+
+    /** Every line of the output files {@code prefix-N-of-M.jsonl} in {@code out}. */
+    static List<String> lines(Path out, String prefix) throws IOException {
         List<String> lines = new ArrayList<>();
         try (Stream<Path> s = Files.list(out)) {
             for (Path p : s.filter(p -> p.getFileName().toString().matches(java.util.regex.Pattern.quote(prefix)

@@ -30,7 +30,7 @@ class ImpactJobTest {
 
     @Test
     void aMovedClassValueReportsTheStructuresItFlipsWithTheChangedLines() throws Exception {
-        Path changed = changedTable("CCCCCCCCCCCC(=O)O", 2.0);
+        Path changed = changedTable(dir, "CCCCCCCCCCCC(=O)O", 2.0);
         Files.writeString(dir.resolve("set.smi"), "CCCCCCCCCCCC(=O)O lauric-acid\nCC(=O)O acetic-acid\nCCO ethanol\nc1ccncc1 pyridine\n");
         Path entries = Files.createDirectories(dir.resolve("entries"));
         Files.writeString(entries.resolve("pinned.md"), "# Old work-up\nTable version: v2\n\nAt pH 5 the acid "
@@ -64,7 +64,7 @@ class ImpactJobTest {
     }
 
     /** The shipped table with the class that takes {@code smiles}'s first site moved by {@code shift}. */
-    private Path changedTable(String smiles, double shift) throws Exception {
+    static Path changedTable(Path dir, String smiles, double shift) throws Exception {
         String group = Engines.get(EngineSpec.of("shipped", 300, 60_000)).analyse(smiles, Conditions.atPh(5)).sites()
                 .get(0).group();
         String json = new TableSnapshotService(null).toJson(TableSnapshotService.shipped());
