@@ -35,6 +35,7 @@ public final class CheckChannel {
     private final ChannelServer server;
     private final ChannelFile file;
     private final Path dir;
+    private final Thread onExit;
 
     @Activate
     public CheckChannel(@Reference Speciation speciation, @Reference TableService tables,
@@ -63,6 +64,18 @@ public final class CheckChannel {
         }
         this.server = s;
         this.file = f;
+        // a notebook ended by a signal (Ctrl-C, kill) may not deactivate its components: delete the file then too
+        ChannelFile ours = f;
+        ChannelServer listening = s;
+        this.onExit = new Thread(() -> {
+            if (listening != null) {
+                listening.close();
+                ours.deleteIfOurs(dir);
+            }
+        }, "ionmark-check-channel-exit");
+        if (s != null) {
+            Runtime.getRuntime().addShutdownHook(onExit);
+        }
     }
 
     /** One command line through the same {@link Cli} the local path uses; only {@code check} reaches here. */
@@ -98,6 +111,11 @@ public final class CheckChannel {
         if (server != null) {
             server.close();
             file.deleteIfOurs(dir);
+            try {
+                Runtime.getRuntime().removeShutdownHook(onExit);
+            } catch (IllegalStateException e) {
+                // the JVM is already shutting down: the hook runs anyway
+            }
         }
     }
 }

@@ -22,14 +22,19 @@ import org.junit.jupiter.api.io.TempDir;
  * prints each confirmed version; it is killed with SIGKILL at a random point; the store is reopened and
  * every confirmed version must be there with the content its hash names. The second test ends the child
  * with {@code Runtime.halt} right after one confirmed publish (what the command line did), then reads the
- * history. Rounds per backend: {@code IONMARK_KILL_ROUNDS} (default 3; {@code 50} for the full figure).
+ * history. Rounds per backend: {@code -Dionmark.killRounds=N} or {@code IONMARK_KILL_ROUNDS} (default 3 for CI;
+ * {@code 50} for the full figure). Each round prints one line to stdout: backend, round, confirmed so far, head.
  */
 class ConfirmedPublishKillTest {
     @TempDir
     Path dir;
 
+    /** Rounds per backend: the system property {@code ionmark.killRounds}, else {@code IONMARK_KILL_ROUNDS}, else 3. */
     static int rounds() {
-        String r = System.getenv("IONMARK_KILL_ROUNDS");
+        String r = System.getProperty("ionmark.killRounds", "");
+        if (r.isBlank()) {
+            r = System.getenv("IONMARK_KILL_ROUNDS");
+        }
         return r == null || r.isBlank() ? 3 : Integer.parseInt(r.strip());
     }
 
@@ -85,6 +90,8 @@ class ConfirmedPublishKillTest {
                 assertTrue(known > before, "the child confirmed nothing within 60 s");
                 try (JdbcTableStore s = new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2])) {
                     verify(s, confirmed, t[0] + " round " + round);
+                    System.out.println("kill round " + (round + 1) + "/" + rounds() + " " + backend(t[0]) + ": "
+                            + known + " confirmed versions so far, all present with their content");
                 }
             }
         }
@@ -103,11 +110,17 @@ class ConfirmedPublishKillTest {
                 assertEquals(round + 1, confirmed.size(), "one confirmed publish per run");
                 try (JdbcTableStore s = new JdbcTableStore(Backends.TABLES, t[0], t[1], t[2])) {
                     verify(s, confirmed, t[0] + " run " + round);
+                    System.out.println("halt run " + (round + 1) + "/" + rounds() + " " + backend(t[0])
+                            + ": the confirmed publish is the head");
                     int last = confirmed.keySet().stream().mapToInt(Integer::intValue).max().orElseThrow();
                     assertEquals(last, s.head().orElseThrow().number(), "history after the run names its publish as head");
                 }
             }
         }
+    }
+
+    private static String backend(String url) {
+        return url.startsWith("jdbc:h2") ? "H2" : "PostgreSQL";
     }
 
     private static void read(BufferedReader out, Map<Integer, String> confirmed) {
