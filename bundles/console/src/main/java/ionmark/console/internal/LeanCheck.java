@@ -42,7 +42,7 @@ public final class LeanCheck {
         List<String> args = CommandLineRunner.split(Files.readString(Path.of(argv[0]), StandardCharsets.UTF_8));
         Path dir = Path.of(System.getProperty("ionmark.workspace", "workspace"), ".ionmark");
         String own = System.getProperty("ionmark.table.file", "");
-        if (own.isBlank() && !namesAFile(args)) {
+        if (own.isBlank() && !namesAFile(args) && !"off".equals(System.getProperty("ionmark.channel"))) {
             // a notebook serving this workspace answers with its table (the store's head), already warm
             var answer = ChannelClient.check(dir, args);
             time.mark("channel " + (answer.isPresent() ? "answered" : "none"));
