@@ -6,6 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.Test;
@@ -44,9 +45,20 @@ class LeanCheckTest {
         assertEquals("0", ok[0], ok[1]);
         assertTrue(!ok[1].contains("there is no table store"), ok[1]);
 
-        Files.writeString(ionmark.resolve("head.json"), head.replaceFirst("\"pka\": ([0-9.]+)", "\"pka\": 9.99"));
+        assertEquals(List.of(VerifiedTables.sha256(head)), Files.readAllLines(ionmark.resolve(VerifiedTables.MARKS)),
+                "a head that validated is remembered by its SHA-256");
+        String[] again = run(ws);
+        assertEquals(ok[1], again[1], "the remembered head gives the same answer");
+
+        String tampered = head.replaceFirst("\"pka\": ([0-9.]+)", "\"pka\": 9.99");
+        Files.writeString(ionmark.resolve("head.json"), tampered);
         String[] bad = run(ws);
         assertEquals("1", bad[0], bad[1]);
         assertTrue(bad[1].contains("does not match its hash"), bad[1]);
+        // even a forged "validated before" mark does not let a text past its content hash
+        Files.write(ionmark.resolve(VerifiedTables.MARKS), List.of(VerifiedTables.sha256(tampered)));
+        String[] forged = run(ws);
+        assertEquals("1", forged[0], forged[1]);
+        assertTrue(forged[1].contains("does not match its hash"), forged[1]);
     }
 }
