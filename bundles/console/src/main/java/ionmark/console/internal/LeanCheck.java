@@ -9,7 +9,6 @@ import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.TableService;
 import ionmark.acidity.api.ValidationReport;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 
 /**
  * {@code ./ionmark check} without the OSGi framework: the launcher runs this on a plain class path of the
@@ -63,7 +62,7 @@ public final class LeanCheck {
         }
         Object engine = Class.forName(impl("speciation", "SpeciationService"))
                 .getConstructor(AcidityTable.class, int.class, int.class).newInstance(tables.current(), 300, 5000);
-        int code = new Cli((Speciation) engine, tables, (TableCalibration) engine, null, System.out, System.err)
+        int code = new Cli((Speciation) engine, tables, null, null, System.out, System.err)
                 .run(args);
         System.out.flush();
         System.exit(code);

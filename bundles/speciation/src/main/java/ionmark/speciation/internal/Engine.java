@@ -14,10 +14,8 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.internal.estimate.AnalogCorrection;
 import ionmark.speciation.internal.estimate.AnalogSettings;
-import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.LferEstimator;
 import ionmark.speciation.internal.estimate.Overrides;
@@ -38,6 +36,7 @@ import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
+import ionmark.speciation.spi.CalibrationPoint;
 
 /**
  * The pipeline for one table snapshot: structure → sites → estimates → microstates → analysis.
@@ -58,8 +57,24 @@ public final class Engine {
     private volatile SiteAnalogIndex analogs;
     /** Set while the index is built, under the lock: a measured compound read then that is no exact match gets none. */
     private boolean buildingAnalogs;
+    /** False for the engines a calibration fits class values with: analogs correct on top of the fitted model. */
+    private final boolean analogsOn;
 
     public Engine(AcidityTable table, int maxHeavyAtoms) {
+        this(table, maxHeavyAtoms, true);
+    }
+
+    /**
+     * An engine that leaves measured analogs out (exact measured compounds still count). Calibration fits class
+     * values on this model, so that the analog step, applied on top at run time, corrects what the classes do not
+     * describe instead of being absorbed into them; the analog prior can then change without refitting the table.
+     */
+    static Engine withoutAnalogs(AcidityTable table, int maxHeavyAtoms) {
+        return new Engine(table, maxHeavyAtoms, false);
+    }
+
+    private Engine(AcidityTable table, int maxHeavyAtoms, boolean analogsOn) {
+        this.analogsOn = analogsOn;
         this.table = new CompiledTable(table);
         this.overrides = new Overrides(this.table);
         this.reader = new StructureReader(maxHeavyAtoms);
@@ -132,7 +147,7 @@ public final class Engine {
         est = pairs.apply(target, est, inter, new HashSet<>());
         if (measured.isPresent()) {
             est = measuredFit.fit(mol, adj, inter, est, measured.get());
-        } else {
+        } else if (analogsOn) {
             est = AnalogCorrection.apply(analogIndex(), target, est);
         }
         List<Integer> uncovered = SitePerceiver.uncovered(mol, perceived);
@@ -175,9 +190,9 @@ public final class Engine {
         }
     }
 
-    /** Calibration input from one observation with one experimental value (see {@link CalibrationPoints#of}). */
-    public Optional<Calibration.Point> calibrationPoint(Observation o) {
-        return calibration.of(o);
+    /** Calibration input from a compound with one experimental value (see {@link CalibrationPoints#of}). */
+    public Optional<CalibrationPoint> calibrationPoint(String structure, List<Double> pka) {
+        return calibration.of(structure, pka);
     }
 
     public Curve curve(String input, Conditions c, double from, double to, double step) throws StructureException {
