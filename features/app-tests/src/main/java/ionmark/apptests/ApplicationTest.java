@@ -57,6 +57,27 @@ class ApplicationTest {
         }
     }
 
+    /**
+     * The runtime does not need calibration: this framework is the notebook application without the calibration
+     * bundle (tests.bndrun, like ionmark.bndrun, does not ask for it and nothing pulls it in), every bundle above
+     * is active, and the console's optional import of the calibration API is left unwired.
+     */
+    @Test
+    void theRuntimeRunsWithoutTheCalibrationBundle() throws InterruptedException {
+        List<String> names = java.util.Arrays.stream(ctx.getBundles()).map(Bundle::getSymbolicName).toList();
+        assertFalse(names.contains("ionmark.calibration"), "the calibration bundle was resolved into the runtime");
+        Bundle console = java.util.Arrays.stream(ctx.getBundles())
+                .filter(b -> "ionmark.console".equals(b.getSymbolicName())).findFirst().orElseThrow();
+        assertEquals(Bundle.ACTIVE, console.getState());
+        var wiring = console.adapt(org.osgi.framework.wiring.BundleWiring.class);
+        assertTrue(wiring.getRequiredWires("osgi.wiring.package").stream()
+                .noneMatch(w -> "ionmark.calibration.api".equals(w.getCapability().getAttributes().get("osgi.wiring.package"))));
+        // what the calibration bundle would use is there all the same: the speciation SPI
+        service(ionmark.speciation.spi.ModelEngines.class);
+        Analysis a = service(Speciation.class).analyse("CC(=O)O", Conditions.atPh(7.4));
+        assertTrue(a.ok(), a.error());
+    }
+
     @Test
     void everyProductServiceIsRegistered() throws InterruptedException {
         service(TableService.class);

@@ -5,7 +5,6 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 import java.util.Locale;
@@ -13,12 +12,14 @@ import java.util.Locale;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.ValidationReport;
 import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.calibration.api.Observation;
+import ionmark.calibration.api.TruthFile;
+import ionmark.calibration.internal.CalibrationService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.MacroPairing;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.internal.SpeciationService;
+import ionmark.speciation.spi.MacroPairing;
 
 /**
  * Does the stated sd cover held-out errors? Calibrates a base table without one fold of a truth file, or
@@ -50,18 +51,18 @@ public final class SdCoverage {
         }
         TableSnapshotService tables = new TableSnapshotService(null);
         AcidityTable table = args[1].equals("shipped") ? TableSnapshotService.shipped() : load(tables, Path.of(args[1]));
-        List<Observation> truth = readTruth(Path.of(args[2]));
+        List<Observation> truth = TruthFile.read(Path.of(args[2]));
         int[] fold = args[3].equals("all") ? null : new int[] {Integer.parseInt(args[3].split("/")[0]),
                 Integer.parseInt(args[3].split("/")[1])};
         SpeciationService s = new SpeciationService(table, 300, 30_000);
         if (args[0].equals("calibrate")) {
-            List<Observation> data = truth.stream().filter(o -> fold == null || !inFold(o.id(), fold[0], fold[1])).toList();
-            var r = s.calibrate(table, data, "calibration", "Calibration data " + args[2] + ".");
+            List<Observation> data = truth.stream().filter(o -> fold == null || !TruthFile.inFold(o.id(), fold[0], fold[1])).toList();
+            var r = new CalibrationService(s).calibrate(table, data, "calibration", "Calibration data " + args[2] + ".");
             Files.writeString(Path.of(args[4]), tables.toJson(r.table()), StandardCharsets.UTF_8);
             System.out.println(r.fits().size() + " classes fitted on " + data.size() + " compounds");
             return;
         }
-        List<Observation> data = truth.stream().filter(o -> fold == null || inFold(o.id(), fold[0], fold[1])).toList();
+        List<Observation> data = truth.stream().filter(o -> fold == null || TruthFile.inFold(o.id(), fold[0], fold[1])).toList();
         PrintStream rows = args.length > 4 ? new PrintStream(Files.newOutputStream(Path.of(args[4])), true,
                 StandardCharsets.UTF_8) : null;
         if (rows != null) {
@@ -112,34 +113,5 @@ public final class SdCoverage {
             throw new IllegalArgumentException(p + " does not validate: " + r.errors());
         }
         return r.table().orElseThrow();
-    }
-
-    /** The truth TSV of {@code ./ionmark accuracy}: id, SMILES, ';'-joined pKa values. */
-    static List<Observation> readTruth(Path p) throws IOException {
-        List<Observation> out = new ArrayList<>();
-        for (String line : Files.readAllLines(p, StandardCharsets.UTF_8)) {
-            String[] f = line.split("\t");
-            if (line.isBlank() || line.startsWith("id\t") || f.length < 3) {
-                continue;
-            }
-            List<Double> v = new ArrayList<>();
-            for (String x : f[2].split(";")) {
-                if (!x.isBlank()) {
-                    v.add(Double.parseDouble(x.strip()));
-                }
-            }
-            v.sort(Double::compare);
-            out.add(new Observation(f[0], f[1], v));
-        }
-        return out;
-    }
-
-    /** The folds of {@code ./ionmark accuracy --fold K/N} (same hash of the compound id). */
-    static boolean inFold(String id, int k, int n) {
-        int h = 0;
-        for (char c : id.toCharArray()) {
-            h = 31 * h + c;
-        }
-        return Math.floorMod(h * 0x9E3779B1, n) == k;
     }
 }

@@ -81,7 +81,7 @@ final class Fixtures {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         List<String> args = new ArrayList<>(List.of("batch", "--in", in.toString()));
         args.addAll(List.of(extra));
-        int rc = new Cli(sp, tables, sp, null, new PrintStream(out, true, StandardCharsets.UTF_8),
+        int rc = new Cli(sp, tables, null, null, new PrintStream(out, true, StandardCharsets.UTF_8),
                 new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8)).run(args);
         if (rc != 0) {
             throw new IllegalStateException("batch exited " + rc);

@@ -12,11 +12,12 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 
+import ionmark.calibration.api.Observation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.spi.MacroPairing;
 
 /**
  * The accuracy benchmark: predicts every compound of a truth file, scores macroscopic pKa values
@@ -70,7 +71,7 @@ final class Accuracy {
                 groups.add(near == null ? "?" : near.group());
                 sds.add(near == null ? Double.NaN : near.sd());
             }
-            out.add(new Scored(o, pred, ionmark.speciation.api.MacroPairing.assign(o.pka(), pred), groups, sds, null));
+            out.add(new Scored(o, pred, MacroPairing.assign(o.pka(), pred), groups, sds, null));
             bar.step(i + 1);
         }
         bar.done();
@@ -203,37 +204,5 @@ final class Accuracy {
         sb.append(String.format(Locale.ROOT, "<text x=\"%d\" y=\"20\">within 1.0: %.1f %%, MAE %.2f, n = %d</text>", pad
                 + 6, 100 * sum.within1(), sum.mae(), sum.matched()));
         return sb.append("</svg>\n").toString();
-    }
-
-    /** Reads a truth TSV: id, smiles, ';'-joined pKa values (header line 'id\tsmiles…' skipped). */
-    static List<Observation> readTruth(Path p) throws IOException {
-        List<Observation> out = new ArrayList<>();
-        for (String line : Files.readAllLines(p, StandardCharsets.UTF_8)) {
-            if (line.isBlank() || line.startsWith("id\t")) {
-                continue;
-            }
-            String[] f = line.split("\t");
-            if (f.length < 3) {
-                continue;
-            }
-            List<Double> v = new ArrayList<>();
-            for (String x : f[2].split(";")) {
-                if (!x.isBlank()) {
-                    v.add(Double.parseDouble(x.strip()));
-                }
-            }
-            v.sort(Double::compare);
-            out.add(new Observation(f[0], f[1], v));
-        }
-        return out;
-    }
-
-    /** Fold membership by a stable hash of the id: fold k of n. */
-    static boolean inFold(String id, int k, int n) {
-        int h = 0;
-        for (char c : id.toCharArray()) {
-            h = 31 * h + c;
-        }
-        return Math.floorMod(h * 0x9E3779B1, n) == k;
     }
 }

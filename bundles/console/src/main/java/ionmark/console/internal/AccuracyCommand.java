@@ -10,7 +10,8 @@ import java.util.Set;
 import java.util.function.Predicate;
 
 import ionmark.acidity.api.TableService;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
+import ionmark.calibration.api.TruthFile;
 import ionmark.speciation.api.Speciation;
 
 /**
@@ -39,7 +40,7 @@ final class AccuracyCommand implements Command {
         int[] f = fold(a.flags().get("--fold"));
         String subset = a.flags().get("--subset");
         FrozenSplit.in(subset, ""); // a bad subset name is a usage error before any work
-        Predicate<String> keep = id -> (f == null || Accuracy.inFold(id, f[0], f[1]))
+        Predicate<String> keep = id -> (f == null || TruthFile.inFold(id, f[0], f[1]))
                 && FrozenSplit.in(subset, id);
         List<Observation> data = truth(a).stream().filter(o -> keep.test(o.id())).toList();
         List<ChargeStates.Truth> charges;
@@ -103,7 +104,7 @@ final class AccuracyCommand implements Command {
             throw new Cli.UsageException("--truth FILE is required");
         }
         try {
-            return Accuracy.readTruth(Path.of(a.flags().get("--truth")));
+            return TruthFile.read(Path.of(a.flags().get("--truth")));
         } catch (IOException | RuntimeException e) {
             throw new Cli.UsageException("cannot read truth file: " + e.getMessage());
         }

@@ -11,9 +11,10 @@ import java.util.Set;
 
 import ionmark.acidity.api.TableService;
 import ionmark.acidity.api.ValidationReport;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
+import ionmark.calibration.api.TableCalibration;
+import ionmark.calibration.api.TruthFile;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 import ionmark.speciation.api.TableRegression;
 
 /**
@@ -47,7 +48,7 @@ final class CalibrateCommand implements Command {
         }
         int[] f = AccuracyCommand.fold(a.flags().get("--fold"));
         List<Observation> data = AccuracyCommand.truth(a).stream()
-                .filter(o -> f == null || !Accuracy.inFold(o.id(), f[0], f[1])).toList();
+                .filter(o -> f == null || !TruthFile.inFold(o.id(), f[0], f[1])).toList();
         String ref = a.flags().getOrDefault("--ref", "calibration");
         String citation = a.flags().getOrDefault("--citation", "Calibration data " + a.flags().get("--truth") + ".");
         TableCalibration.Result r = calibration.calibrate(tables.current(), data, ref, citation);

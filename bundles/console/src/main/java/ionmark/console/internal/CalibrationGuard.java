@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Locale;
 
 import ionmark.acidity.api.AcidityTable;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.api.TableRegression;
 

@@ -13,8 +13,8 @@ import java.util.Set;
 
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.MacroPairing;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.spi.MacroPairing;
 
 /**
  * The charge-state measure: what a chemist reads on a card. For a truth file that also gives

@@ -19,7 +19,6 @@ import org.osgi.service.component.annotations.ReferencePolicy;
 import ionmark.acidity.api.TableService;
 import ionmark.host.api.HostAuditor;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 
 /**
  * In a running notebook: answers {@code ./ionmark check} for the command line, so that a quick check from a
@@ -38,8 +37,7 @@ public final class CheckChannel {
     private final Thread onExit;
 
     @Activate
-    public CheckChannel(@Reference Speciation speciation, @Reference TableService tables,
-            @Reference TableCalibration calibration, BundleContext ctx) {
+    public CheckChannel(@Reference Speciation speciation, @Reference TableService tables, BundleContext ctx) {
         boolean notebook = ctx.getProperty(CommandLineRunner.ARGS_FILE) == null
                 && !"false".equals(ctx.getProperty("org.apache.felix.http.enable"));
         String ws = ctx.getProperty("ionmark.workspace");
@@ -49,7 +47,7 @@ public final class CheckChannel {
         if (notebook) {
             try {
                 String token = ChannelFile.newToken();
-                s = new ChannelServer(0, token, args -> run(speciation, tables, calibration, args), this::denied);
+                s = new ChannelServer(0, token, args -> run(speciation, tables, args), this::denied);
                 f = new ChannelFile(s.port(), token);
                 f.write(dir);
             } catch (IOException e) {
@@ -79,14 +77,13 @@ public final class CheckChannel {
     }
 
     /** One command line through the same {@link Cli} the local path uses; only {@code check} reaches here. */
-    static ChannelAnswer run(Speciation speciation, TableService tables, TableCalibration calibration,
-            List<String> args) {
+    static ChannelAnswer run(Speciation speciation, TableService tables, List<String> args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         int code;
         try (PrintStream o = new PrintStream(out, true, StandardCharsets.UTF_8);
                 PrintStream e = new PrintStream(err, true, StandardCharsets.UTF_8)) {
-            code = new Cli(speciation, tables, calibration, null, o, e).run(args);
+            code = new Cli(speciation, tables, null, null, o, e).run(args);
         }
         return new ChannelAnswer(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
     }

@@ -6,9 +6,9 @@ import java.util.List;
 import java.util.Map;
 
 import ionmark.acidity.api.TableService;
+import ionmark.calibration.api.TableCalibration;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.measured.MeasuredImport;
 import ionmark.store.api.TableStore;
@@ -17,6 +17,10 @@ import ionmark.store.api.TableStore;
  * The command line: dispatches to one {@link Command} per command ({@code check}, {@code batch},
  * {@code table}, {@code accuracy}, {@code annotate}) and owns the usage text and the argument parser.
  * Exit codes: 0 done, 1 the input could not be analysed or the table has errors, 2 usage.
+ *
+ * <p>{@code accuracy} and {@code table calibrate} need the calibration bundle ({@code ionmark.calibration}); the
+ * console imports its API optionally, so that the notebook runtime resolves without it. Built with no
+ * calibration service, the console does not touch a calibration class, and those two commands say what is missing.
  */
 public final class Cli {
     static final String USAGE = """
@@ -40,6 +44,7 @@ public final class Cli {
     private final Map<String, Command> commands;
     private final PrintStream err;
 
+    /** {@code calibration} may be null: the runtime has no calibration bundle. */
     public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
             PrintStream out, PrintStream err) {
         this(speciation, tables, calibration, store, null, out, err);
@@ -49,15 +54,28 @@ public final class Cli {
     public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
             MeasuredImport imports, PrintStream out, PrintStream err) {
         TableRegression regression = speciation instanceof TableRegression tr ? tr : null;
+        // no calibration class is loaded unless the calibration service is there
+        Command calibrate = calibration == null ? missingCalibration("table calibrate", err)
+                : new CalibrateCommand(speciation, tables, calibration, regression, out, err);
+        Command accuracy = calibration == null ? missingCalibration("accuracy", err)
+                : new AccuracyCommand(speciation, tables, out, err);
         this.commands = Map.of(
                 "check", new CheckCommand(speciation, out, err),
                 "batch", new BatchCommand(speciation, out, err),
-                "table", new TableCommand(tables, store, imports,
-                        new CalibrateCommand(speciation, tables, calibration, regression, out, err),
+                "table", new TableCommand(tables, store, imports, calibrate,
                         new TableCheckCommand(tables, store, regression, imports, out, err), out, err),
-                "accuracy", new AccuracyCommand(speciation, tables, out, err),
+                "accuracy", accuracy,
                 "annotate", raw -> AnnotateCommand.inFramework(out, err).run(raw));
         this.err = err;
+    }
+
+    /** The message of a command that needs the calibration bundle in a runtime without it (exit 1). */
+    static Command missingCalibration(String name, PrintStream err) {
+        return raw -> {
+            err.println("ionmark: " + name + " needs the calibration bundle (ionmark.calibration), which this runtime"
+                    + " does not include; ./ionmark runs it in the runtime that does (features/app/calibration.bndrun)");
+            return 1;
+        };
     }
 
     /** Runs one command line; never throws for bad arguments. */

@@ -15,7 +15,6 @@ import org.osgi.service.component.annotations.Reference;
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Speciation;
 import ionmark.store.api.TableStore;
-import ionmark.speciation.api.TableCalibration;
 
 /**
  * When the framework was started by {@code ./ionmark check|batch|table}, runs that command once the
@@ -65,10 +64,31 @@ public final class CommandLineRunner {
         }
     }
 
+    /**
+     * The calibration service when the calibration bundle is in this runtime, else null. Found by name, not by a
+     * reference: the console imports the calibration API optionally, and a component whose constructor names a
+     * type the bundle cannot load would not start.
+     */
+    static Object calibration(BundleContext ctx) throws InterruptedException {
+        if (Arrays.stream(ctx.getBundles()).noneMatch(b -> CALIBRATION_BUNDLE.equals(b.getSymbolicName()))) {
+            return null;
+        }
+        org.osgi.util.tracker.ServiceTracker<Object, Object> t = new org.osgi.util.tracker.ServiceTracker<>(ctx,
+                CALIBRATION_SERVICE, null);
+        t.open();
+        try {
+            return t.waitForService(STORE_WAIT_MS);
+        } finally {
+            t.close();
+        }
+    }
+
+    static final String CALIBRATION_BUNDLE = "ionmark.calibration";
+    static final String CALIBRATION_SERVICE = "ionmark.calibration.api.TableCalibration";
+
     @Activate
     public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
-            @Reference TableCalibration calibration, @Reference ionmark.speciation.measured.MeasuredImport imports,
-            BundleContext ctx) {
+            @Reference ionmark.speciation.measured.MeasuredImport imports, BundleContext ctx) {
         String file = ctx.getProperty(ARGS_FILE);
         if (file == null || file.isBlank()) {
             return;
@@ -84,7 +104,9 @@ public final class CommandLineRunner {
                     System.err.println("ionmark: the table store did not start (see the message above); nothing was run");
                     code = 1;
                 } else {
-                    code = new Cli(speciation, tables, calibration, store, imports, System.out, System.err).run(args);
+                    Object calibration = calibration(ctx);
+                    code = (calibration == null ? new Cli(speciation, tables, null, store, imports, System.out, System.err)
+                            : CalibrationLink.cli(speciation, tables, calibration, store, imports)).run(args);
                 }
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + (e.getMessage() == null ? e.toString() : e.getMessage()));

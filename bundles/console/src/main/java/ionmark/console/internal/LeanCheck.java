@@ -8,7 +8,6 @@ import java.util.List;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 
 /**
  * {@code ./ionmark check} without the OSGi framework: the launcher runs this on a plain class path of the
@@ -80,7 +79,7 @@ public final class LeanCheck {
         Object engine = Class.forName(impl("speciation", "SpeciationService"))
                 .getConstructor(AcidityTable.class, int.class, int.class).newInstance(tables.current(), 300, 5000);
         time.mark("engine");
-        int code = new Cli((Speciation) engine, tables, (TableCalibration) engine, null, System.out, System.err)
+        int code = new Cli((Speciation) engine, tables, null, null, System.out, System.err)
                 .run(args);
         System.out.flush();
         time.mark("check");

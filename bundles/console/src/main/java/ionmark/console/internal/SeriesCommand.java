@@ -9,7 +9,8 @@ import java.util.Set;
 import java.util.TreeMap;
 
 import ionmark.acidity.api.AcidityTable;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
+import ionmark.calibration.api.TruthFile;
 import ionmark.speciation.api.Speciation;
 
 /**
@@ -58,7 +59,7 @@ final class SeriesCommand {
         }
         List<Observation> data;
         try {
-            data = Accuracy.readTruth(Path.of(a.v("--truth"))).stream().filter(o -> !SeriesExperiment.frozen(o.id()))
+            data = TruthFile.read(Path.of(a.v("--truth"))).stream().filter(o -> !SeriesExperiment.frozen(o.id()))
                     .toList();
         } catch (IOException | RuntimeException e) {
             throw new Cli.UsageException("cannot read truth file: " + e.getMessage());

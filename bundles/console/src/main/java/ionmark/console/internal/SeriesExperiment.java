@@ -21,9 +21,9 @@ import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.TableVersion;
+import ionmark.calibration.api.Observation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
 
 /**

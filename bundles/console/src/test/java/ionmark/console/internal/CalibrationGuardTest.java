@@ -11,7 +11,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 
 import ionmark.acidity.api.AcidityTable;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
 
 /**
  * A calibration that makes the reference set worse than the margin is refused. The "fit" here is the

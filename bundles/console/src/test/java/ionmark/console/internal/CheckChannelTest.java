@@ -33,7 +33,7 @@ class CheckChannelTest {
     private static ChannelAnswer local(String... args) {
         ByteArrayOutputStream out = new ByteArrayOutputStream();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
-        int code = new Cli(CliTest.SPECIATION, CliTest.TABLES, CliTest.SPECIATION, null,
+        int code = new Cli(CliTest.SPECIATION, CliTest.TABLES, null, null,
                 new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8))
                 .run(List.of(args));
         return new ChannelAnswer(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
@@ -41,7 +41,7 @@ class CheckChannelTest {
 
     private ChannelServer server(String token) throws Exception {
         return new ChannelServer(0, token,
-                args -> CheckChannel.run(CliTest.SPECIATION, CliTest.TABLES, CliTest.SPECIATION, args),
+                args -> CheckChannel.run(CliTest.SPECIATION, CliTest.TABLES, args),
                 (address, why) -> denied.add(address + " " + why));
     }
 

@@ -18,12 +18,14 @@ import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 
 import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.calibration.internal.CalibrationService;
 import ionmark.speciation.internal.SpeciationService;
 
 /** The command line, run in-process with the real services built by plain new. */
 class CliTest {
     static final TableSnapshotService TABLES = new TableSnapshotService(null);
     static final SpeciationService SPECIATION = new SpeciationService(TABLES.current(), 300, 10_000);
+    static final CalibrationService CALIBRATION = new CalibrationService(SPECIATION);
     final ByteArrayOutputStream out = new ByteArrayOutputStream();
     final ByteArrayOutputStream err = new ByteArrayOutputStream();
 
@@ -31,7 +33,7 @@ class CliTest {
     Path dir;
 
     int run(String... args) {
-        return new Cli(SPECIATION, TABLES, SPECIATION, null, new PrintStream(out, true, StandardCharsets.UTF_8),
+        return new Cli(SPECIATION, TABLES, CALIBRATION, null, new PrintStream(out, true, StandardCharsets.UTF_8),
                 new PrintStream(err, true, StandardCharsets.UTF_8)).run(List.of(args));
     }
 
@@ -145,10 +147,22 @@ class CliTest {
         assertEquals(1, run("check", "C1CC("));
     }
 
+    /** The notebook runtime has no calibration bundle: the commands that need it say so, the others still run. */
+    @Test
+    void withoutTheCalibrationBundleAccuracyAndCalibrateSayWhatIsMissing() {
+        Cli lean = new Cli(SPECIATION, TABLES, null, null, new PrintStream(out, true, StandardCharsets.UTF_8),
+                new PrintStream(err, true, StandardCharsets.UTF_8));
+        assertEquals(1, lean.run(List.of("accuracy", "--truth", "x.tsv")));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("accuracy needs the calibration bundle"), err.toString());
+        assertEquals(1, lean.run(List.of("table", "calibrate", "--truth", "x.tsv", "--out", "y.json")));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("table calibrate needs the calibration bundle"));
+        assertEquals(0, lean.run(List.of("check", "CC(=O)O")));
+    }
+
     @Test
     void scoringPairsOneToOneByLeastTotalError() {
         // the same pairing as the reviewers' script: 4.1 pairs with 4.0, 9.9 with 10.0, 6.0 stays unpaired
-        List<int[]> pairs = ionmark.speciation.api.MacroPairing.assign(List.of(4.0, 10.0), List.of(9.9, 6.0, 4.1));
+        List<int[]> pairs = ionmark.speciation.spi.MacroPairing.assign(List.of(4.0, 10.0), List.of(9.9, 6.0, 4.1));
         assertEquals(2, pairs.size());
         assertTrue(pairs.stream().anyMatch(p -> p[0] == 0 && p[1] == 2));
         assertTrue(pairs.stream().anyMatch(p -> p[0] == 1 && p[1] == 0));

@@ -14,7 +14,8 @@ import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 import ionmark.acidity.internal.TableSnapshotService;
-import ionmark.speciation.api.Observation;
+import ionmark.calibration.api.Observation;
+import ionmark.calibration.api.TruthFile;
 import ionmark.speciation.internal.SpeciationService;
 
 /**
@@ -33,7 +34,7 @@ class DevelopmentSetAccuracyTest {
         Path shared = Path.of(System.getProperty("ionmark.shared", "../../../shared"));
         Path truth = shared.resolve("data/iupac-dev.tsv");
         assumeTrue(Files.isRegularFile(truth), "development data not present at " + truth + ": accuracy test skipped");
-        List<Observation> data = Accuracy.readTruth(truth);
+        List<Observation> data = TruthFile.read(truth);
         SpeciationService s = new SpeciationService(TableSnapshotService.shipped(), 300, 30_000);
         var scored = Accuracy.run(s, data, null, new Progress(new PrintStream(OutputStream.nullOutputStream()), 0));
         Accuracy.Summary sum = Accuracy.summarise(scored, s);

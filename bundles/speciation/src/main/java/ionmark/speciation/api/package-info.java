@@ -9,7 +9,13 @@
  * a.fractionNeutral();             // about 0.5 (net charge 0, zwitterions included)
  * a.fractionUncharged();           // about 0.5 (no charged site; since 1.2)
  * }</pre>
+ *
+ * <p>2.0.0 (a major version: types were removed): the calibration and scoring types ({@code TableCalibration},
+ * {@code ClassFit}, {@code Observation}) moved to {@code ionmark.calibration.api} in the calibration bundle, which
+ * the runtime does not need; {@code MacroPairing} moved to {@code ionmark.speciation.spi}. What a notebook host
+ * calls stays here: {@code Speciation}, its values, and {@code TableRegression} (the table admin page's
+ * reference-set check of a draft).
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.3.0")
+@org.osgi.annotation.versioning.Version("2.0.0")
 package ionmark.speciation.api;

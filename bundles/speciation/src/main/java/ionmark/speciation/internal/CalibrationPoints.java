@@ -8,14 +8,13 @@ import java.util.function.Function;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.Relation;
 import ionmark.acidity.api.SiteType;
-import ionmark.speciation.api.Observation;
-import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.LferEstimator;
 import ionmark.speciation.internal.sites.CompiledTable;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
+import ionmark.speciation.spi.CalibrationPoint;
 
 /** Calibration input: which class and substituent sum an observed value speaks for. */
 final class CalibrationPoints {
@@ -36,12 +35,12 @@ final class CalibrationPoints {
      * bases, the most acidic when all are acids). Mixed acid–base compounds are not used. Raw
      * estimates, no overrides.
      */
-    Optional<Calibration.Point> of(Observation o) {
+    Optional<CalibrationPoint> of(String structure, List<Double> pka) {
         try {
-            if (o.pka().size() != 1) {
+            if (pka.size() != 1) {
                 return Optional.empty();
             }
-            StructureReader.Prepared prep = reader.read(o.structure());
+            StructureReader.Prepared prep = reader.read(structure);
             List<EstimatedSite> est = LferEstimator.estimate(table, prep.molecule(),
                     SitePerceiver.perceive(table, prep.molecule())).stream()
                     .filter(s -> !s.site().group().permanent() && s.pka() > -3 && s.pka() < 17).toList();
@@ -52,13 +51,13 @@ final class CalibrationPoints {
             Comparator<EstimatedSite> byPka = Comparator.comparingDouble(EstimatedSite::pka);
             EstimatedSite first = bases > 0 ? est.stream().max(byPka).orElseThrow() : est.stream().min(byPka)
                     .orElseThrow();
-            if (est.size() > 1 && !firstStepNearest(o, bases > 0)) {
+            if (est.size() > 1 && !firstStepNearest(structure, pka.get(0), bases > 0)) {
                 return Optional.empty();
             }
             GroupClass g = first.site().group();
             double sigma = g.relation() == Relation.NONE || g.rho() == 0 || Double.isNaN(g.rho())
                     ? 0 : -(first.pka() - g.pka()) / g.rho();
-            return Optional.of(new Calibration.Point(g.id(), sigma, o.pka().get(0)));
+            return Optional.of(new CalibrationPoint(g.id(), sigma, pka.get(0)));
         } catch (StructureException | RuntimeException e) {
             return Optional.empty();
         }
@@ -71,13 +70,12 @@ final class CalibrationPoints {
      * acid, the first lying below the measured range), and giving it to the first site would drag
      * that class toward the later step.
      */
-    private boolean firstStepNearest(Observation o, boolean bases) {
-        List<Double> macro = macroPka.apply(o.structure()).stream()
+    private boolean firstStepNearest(String structure, double x, boolean bases) {
+        List<Double> macro = macroPka.apply(structure).stream()
                 .filter(v -> v > -3 && v < 17).toList();
         if (macro.size() < 2) {
             return true;
         }
-        double x = o.pka().get(0);
         int nearest = 0;
         for (int j = 1; j < macro.size(); j++) {
             if (Math.abs(macro.get(j) - x) < Math.abs(macro.get(nearest) - x)) {

@@ -14,10 +14,8 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.internal.estimate.AnalogCorrection;
 import ionmark.speciation.internal.estimate.AnalogSettings;
-import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.estimate.LferEstimator;
 import ionmark.speciation.internal.estimate.Overrides;
@@ -38,6 +36,7 @@ import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.sites.SitePerceiver;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureReader;
+import ionmark.speciation.spi.CalibrationPoint;
 
 /**
  * The pipeline for one table snapshot: structure → sites → estimates → microstates → analysis.
@@ -191,9 +190,9 @@ public final class Engine {
         }
     }
 
-    /** Calibration input from one observation with one experimental value (see {@link CalibrationPoints#of}). */
-    public Optional<Calibration.Point> calibrationPoint(Observation o) {
-        return calibration.of(o);
+    /** Calibration input from a compound with one experimental value (see {@link CalibrationPoints#of}). */
+    public Optional<CalibrationPoint> calibrationPoint(String structure, List<Double> pka) {
+        return calibration.of(structure, pka);
     }
 
     public Curve curve(String input, Conditions c, double from, double to, double step) throws StructureException {

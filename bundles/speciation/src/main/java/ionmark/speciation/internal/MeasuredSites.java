@@ -6,7 +6,6 @@ import java.util.List;
 
 import ionmark.acidity.api.MeasuredCompound;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.MacroPairing;
 import ionmark.speciation.internal.estimate.AnalogCorrection;
 import ionmark.speciation.internal.estimate.AnalogSettings;
 import ionmark.speciation.internal.estimate.EstimatedSite;
@@ -15,6 +14,7 @@ import ionmark.speciation.internal.estimate.SiteEnvironment;
 import ionmark.speciation.internal.microstates.Problem;
 import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.structure.StructureException;
+import ionmark.speciation.spi.MacroPairing;
 
 /**
  * Builds the {@link SiteAnalogIndex} of an engine's table. Each measured compound goes through the

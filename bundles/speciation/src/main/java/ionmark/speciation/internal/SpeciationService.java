@@ -13,16 +13,15 @@ import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Speciation;
-import ionmark.speciation.api.TableCalibration;
 import ionmark.speciation.api.TableRegression;
-import ionmark.speciation.internal.estimate.Calibration;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureKey;
 import ionmark.speciation.internal.work.AnalysisPool;
 import ionmark.speciation.internal.work.Budget;
 import ionmark.speciation.internal.work.OverBudgetException;
+import ionmark.speciation.spi.ModelEngine;
+import ionmark.speciation.spi.ModelEngines;
 
 /**
  * The speciation service: one compiled {@link Engine} per table snapshot. Every call compares the
@@ -31,12 +30,13 @@ import ionmark.speciation.internal.work.OverBudgetException;
  * callback would need the table service to reference this service while this service references
  * the table service: a cycle that Declarative Services may leave unbound.) Each structure runs on a bounded
  * pool under a time budget its loops check ({@link AnalysisPool}, {@link Budget}); finished results are kept by
- * (structure, conditions, table version) in a bounded cache ({@link ResultCache}).
+ * (structure, conditions, table version) in a bounded cache ({@link ResultCache}). It also offers engines for
+ * any table to the calibration bundle ({@link ModelEngines}, the speciation SPI), with the same size limit.
  */
-@Component(service = {Speciation.class, TableCalibration.class, TableRegression.class},
+@Component(service = {Speciation.class, TableRegression.class, ModelEngines.class},
         configurationPid = "ionmark.speciation")
 @Designate(ocd = SpeciationConfiguration.class)
-public final class SpeciationService implements Speciation, TableCalibration, TableRegression {
+public final class SpeciationService implements Speciation, TableRegression, ModelEngines {
     private final AtomicReference<Engine> engine = new AtomicReference<>();
     private final TableService tables;
     private final int maxHeavyAtoms;
@@ -199,27 +199,13 @@ public final class SpeciationService implements Speciation, TableCalibration, Ta
     }
 
     @Override
-    public Result calibrate(AcidityTable base, java.util.List<Observation> data, String referenceId, String citation) {
-        Engine e = new Engine(base, maxHeavyAtoms);
-        java.util.List<Calibration.Point> points = data.parallelStream().map(e::calibrationPoint)
-                .flatMap(java.util.Optional::stream).toList();
-        Result first = Calibration.fit(base, points, referenceId, citation);
-        ModelCalibration.Outcome second = new ModelCalibration(maxHeavyAtoms).refine(first.table(), data, referenceId);
-        java.util.Map<String, ModelCalibration.Move> moved = new java.util.HashMap<>();
-        second.moves().forEach(m -> moved.put(m.group(), m));
-        java.util.List<ionmark.speciation.api.ClassFit> fits = new java.util.ArrayList<>();
-        java.util.Set<String> seen = new java.util.HashSet<>();
-        for (ionmark.speciation.api.ClassFit f : first.fits()) {
-            ModelCalibration.Move m = moved.get(f.group());
-            fits.add(m == null ? f : f.refined(m.after(), m.rhoAfter(), m.compounds()));
-            seen.add(f.group());
-        }
-        for (ModelCalibration.Move m : second.moves()) {
-            if (!seen.contains(m.group())) {
-                fits.add(ionmark.speciation.api.ClassFit.refinedOnly(m.group(), m.compounds(), m.before(), m.after(), m.rhoBefore(), m.rhoAfter()));
-            }
-        }
-        return new Result(second.table(), fits);
+    public ModelEngine engine(AcidityTable table) {
+        return new EngineView(new Engine(table, maxHeavyAtoms));
+    }
+
+    @Override
+    public ModelEngine withoutAnalogs(AcidityTable table) {
+        return new EngineView(Engine.withoutAnalogs(table, maxHeavyAtoms));
     }
 
     private final java.util.Map<String, SpeciationService> pinned = java.util.Collections.synchronizedMap(

@@ -9,8 +9,7 @@ import java.util.Optional;
 import org.junit.jupiter.api.Test;
 
 import ionmark.acidity.internal.TableSnapshotService;
-import ionmark.speciation.api.Observation;
-import ionmark.speciation.internal.estimate.Calibration;
+import ionmark.speciation.spi.CalibrationPoint;
 
 /**
  * The one-site calibration stage takes a compound with one experimental value only when that value
@@ -21,14 +20,14 @@ import ionmark.speciation.internal.estimate.Calibration;
 class CalibrationPointTest {
     static final Engine ENGINE = new Engine(TableSnapshotService.shipped(), 300);
 
-    static Optional<Calibration.Point> point(String smiles, double value) {
-        return ENGINE.calibrationPoint(new Observation("x", smiles, List.of(value)));
+    static Optional<CalibrationPoint> point(String smiles, double value) {
+        return ENGINE.calibrationPoint(smiles, List.of(value));
     }
 
     @Test
     void aLoneSecondStepOfAnAlkylPhosphateIsNotGivenToTheFirstSite() {
         assertTrue(point("COP(=O)(O)O", 6.31).isEmpty(), "second step alone");
-        Optional<Calibration.Point> first = point("COP(=O)(O)O", 1.54);
+        Optional<CalibrationPoint> first = point("COP(=O)(O)O", 1.54);
         assertTrue(first.isPresent(), "first step alone");
         assertEquals("phosphate-oh", first.get().group());
         assertEquals(1.54, first.get().pka(), 1e-9);
@@ -42,7 +41,7 @@ class CalibrationPointTest {
 
     @Test
     void aCompoundWithOneSiteIsAlwaysUsed() {
-        Optional<Calibration.Point> p = point("CC(=O)O", 4.76);
+        Optional<CalibrationPoint> p = point("CC(=O)O", 4.76);
         assertTrue(p.isPresent());
         assertEquals("carboxylic-aliphatic", p.get().group());
     }

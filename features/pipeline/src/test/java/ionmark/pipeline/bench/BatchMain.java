@@ -29,7 +29,7 @@ public final class BatchMain {
         SpeciationService sp = new SpeciationService(tables.current(), EngineSpec.MAX_HEAVY_ATOMS, timeout);
         PrintStream out = new PrintStream(new java.io.FileOutputStream(java.io.FileDescriptor.out), false,
                 StandardCharsets.UTF_8);
-        int rc = new Cli(sp, tables, sp, null, out, System.err).run(concat("batch", rest));
+        int rc = new Cli(sp, tables, null, null, out, System.err).run(concat("batch", rest));
         out.flush();
         System.exit(rc);
     }

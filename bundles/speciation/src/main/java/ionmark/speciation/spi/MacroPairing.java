@@ -1,4 +1,4 @@
-package ionmark.speciation.api;
+package ionmark.speciation.spi;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -7,10 +7,8 @@ import java.util.List;
 /**
  * Pairs predicted with experimental macroscopic pKa values one to one by least total absolute error
  * (exhaustive when small, greedy otherwise, as the team's reviewers score), counting experimental
- * values without a partner as misses. Shared by the accuracy report and by calibration, so that a
- * table is fitted to the same pairing it is scored by.
- *
- * @since 1.1
+ * values without a partner as misses. Shared by the accuracy report, by calibration and by the
+ * measured-analog index, so that a table is fitted to the same pairing it is scored by.
  */
 public final class MacroPairing {
     public static final long EXHAUSTIVE_LIMIT = 200_000;

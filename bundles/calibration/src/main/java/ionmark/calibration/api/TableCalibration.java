@@ -1,4 +1,4 @@
-package ionmark.speciation.api;
+package ionmark.calibration.api;
 
 import java.util.List;
 
@@ -10,7 +10,7 @@ import ionmark.acidity.api.AcidityTable;
  * Fits each group class's reference pKa (and reaction constant, where the data span enough σ) by
  * least squares to compounds with one experimental value, paired with the site that titrates first;
  * then refines each class's reference pKa against every compound with a site of that class, through
- * the whole model and scored with {@link MacroPairing} (robust least squares, one class at a time).
+ * the whole model and scored with {@link ionmark.speciation.spi.MacroPairing} (robust least squares, one class at a time).
  *
  * <pre>{@code
  * Result r = calibration.calibrate(tables.current(), observations, "calib-dept-2026",

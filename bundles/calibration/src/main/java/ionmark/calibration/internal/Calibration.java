@@ -1,4 +1,4 @@
-package ionmark.speciation.internal.estimate;
+package ionmark.calibration.internal;
 
 import java.util.ArrayList;
 import java.util.Arrays;
@@ -11,8 +11,9 @@ import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.Relation;
-import ionmark.speciation.api.ClassFit;
-import ionmark.speciation.api.TableCalibration;
+import ionmark.calibration.api.ClassFit;
+import ionmark.calibration.api.TableCalibration;
+import ionmark.speciation.spi.CalibrationPoint;
 
 /**
  * Per-class least squares: pKa_exp = pKa0 − ρ·Σ, Σ the class's substituent sum for that compound.
@@ -23,23 +24,19 @@ import ionmark.speciation.api.TableCalibration;
  * would move by more than max(2.5, 3·sd) is not applied (the class definition, not its number, is
  * then in question): the fit is reported with {@code rejected} and the class keeps its values.
  */
-public final class Calibration {
+final class Calibration {
     static final double MIN_SD = 0.25;
-
-    /** One usable point: the class, its substituent sum Σ and the experimental value. */
-    public record Point(String group, double sigma, double pka) {
-    }
 
     private Calibration() {
     }
 
-    public static TableCalibration.Result fit(AcidityTable base, List<Point> points, String refId, String citation) {
-        Map<String, List<Point>> byGroup = new LinkedHashMap<>();
+    static TableCalibration.Result fit(AcidityTable base, List<CalibrationPoint> points, String refId, String citation) {
+        Map<String, List<CalibrationPoint>> byGroup = new LinkedHashMap<>();
         points.forEach(p -> byGroup.computeIfAbsent(p.group(), k -> new ArrayList<>()).add(p));
         List<GroupClass> groups = new ArrayList<>();
         List<ClassFit> fits = new ArrayList<>();
         for (GroupClass g : base.groups()) {
-            List<Point> ps = byGroup.getOrDefault(g.id(), List.of());
+            List<CalibrationPoint> ps = byGroup.getOrDefault(g.id(), List.of());
             if (ps.isEmpty() || g.permanent()) {
                 groups.add(g);
                 continue;
@@ -67,10 +64,10 @@ public final class Calibration {
         return new TableCalibration.Result(base.withGroups(groups).withReferences(refs), fits);
     }
 
-    static ClassFit fitOne(GroupClass g, List<Point> ps) {
+    static ClassFit fitOne(GroupClass g, List<CalibrationPoint> ps) {
         boolean withRho = g.relation() != Relation.NONE && ps.size() >= 8 && spread(ps) > 0.15;
         double[] ab = ols(ps, withRho, g.rho());
-        List<Point> kept = new ArrayList<>();
+        List<CalibrationPoint> kept = new ArrayList<>();
         double[] res = residuals(ps, ab);
         double[] abs = Arrays.stream(res).map(Math::abs).sorted().toArray();
         double mad = abs.length == 0 ? 0 : abs[abs.length / 2];
@@ -106,7 +103,7 @@ public final class Calibration {
         double sd = Math.max(MIN_SD, Math.sqrt((n * sdFit * sdFit + k * g.sd() * g.sd()) / (n + k)));
         double r2 = Double.NaN;
         if (withRho) {
-            double mean = kept.stream().mapToDouble(Point::pka).average().orElse(0);
+            double mean = kept.stream().mapToDouble(CalibrationPoint::pka).average().orElse(0);
             double tot = kept.stream().mapToDouble(p -> (p.pka() - mean) * (p.pka() - mean)).sum();
             r2 = tot > 0 ? 1 - ss / tot : Double.NaN;
         }
@@ -118,18 +115,18 @@ public final class Calibration {
     }
 
     /** [pKa0, ρ] by ordinary least squares (ρ fixed when not fitted). */
-    static double[] ols(List<Point> ps, boolean withRho, double rho) {
+    static double[] ols(List<CalibrationPoint> ps, boolean withRho, double rho) {
         int n = ps.size();
         if (!withRho) {
             double r = Double.isNaN(rho) ? 0 : rho;
             double a = ps.stream().mapToDouble(p -> p.pka() + r * p.sigma()).sum() / n;
             return new double[] {a, rho};
         }
-        double mx = ps.stream().mapToDouble(Point::sigma).average().orElse(0);
-        double my = ps.stream().mapToDouble(Point::pka).average().orElse(0);
+        double mx = ps.stream().mapToDouble(CalibrationPoint::sigma).average().orElse(0);
+        double my = ps.stream().mapToDouble(CalibrationPoint::pka).average().orElse(0);
         double sxy = 0;
         double sxx = 0;
-        for (Point p : ps) {
+        for (CalibrationPoint p : ps) {
             sxy += (p.sigma() - mx) * (p.pka() - my);
             sxx += (p.sigma() - mx) * (p.sigma() - mx);
         }
@@ -137,13 +134,13 @@ public final class Calibration {
         return new double[] {my - slope * mx, -slope};
     }
 
-    static double[] residuals(List<Point> ps, double[] ab) {
+    static double[] residuals(List<CalibrationPoint> ps, double[] ab) {
         double rho = Double.isNaN(ab[1]) ? 0 : ab[1];
         return ps.stream().mapToDouble(p -> p.pka() - (ab[0] - rho * p.sigma())).toArray();
     }
 
-    static double spread(List<Point> ps) {
-        double m = ps.stream().mapToDouble(Point::sigma).average().orElse(0);
+    static double spread(List<CalibrationPoint> ps) {
+        double m = ps.stream().mapToDouble(CalibrationPoint::sigma).average().orElse(0);
         return Math.sqrt(ps.stream().mapToDouble(p -> (p.sigma() - m) * (p.sigma() - m)).sum() / ps.size());
     }
 

@@ -1,4 +1,4 @@
-package ionmark.speciation.api;
+package ionmark.calibration.api;
 
 /**
  * The least-squares fit of one group class.

@@ -1,4 +1,4 @@
-package ionmark.speciation.api;
+package ionmark.calibration.api;
 
 import java.util.List;
 

@@ -1,4 +1,4 @@
-package ionmark.speciation.internal;
+package ionmark.calibration.internal;
 
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -14,17 +14,19 @@ import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.Relation;
+import ionmark.calibration.api.Observation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.MacroPairing;
-import ionmark.speciation.api.Observation;
 import ionmark.speciation.api.Site;
+import ionmark.speciation.spi.MacroPairing;
+import ionmark.speciation.spi.ModelEngine;
+import ionmark.speciation.spi.ModelEngines;
 
 /**
  * Second calibration stage: each class's reference pKa refined against every compound that has a
  * site of that class, through the whole model (substituent terms, site interactions,
  * microstates, macroscopic constants), scored with the same one-to-one pairing as the accuracy
- * report. Measured analogs are left out ({@code Engine.withoutAnalogs}): they correct on top of the fitted model.
+ * report. Measured analogs are left out ({@code ModelEngines.withoutAnalogs}): they correct on top of the fitted model.
  *
  * <p>The first stage ({@code Calibration}) can only use compounds with one reported value and sites
  * of one type, so the many multiprotic compounds (amino acids, hydroxy-azines with a ring nitrogen,
@@ -82,15 +84,15 @@ final class ModelCalibration {
     record Outcome(AcidityTable table, List<Move> moves) {
     }
 
-    private final int maxHeavyAtoms;
+    private final ModelEngines engines;
 
-    ModelCalibration(int maxHeavyAtoms) {
-        this.maxHeavyAtoms = maxHeavyAtoms;
+    ModelCalibration(ModelEngines engines) {
+        this.engines = engines;
     }
 
     Outcome refine(AcidityTable start, List<Observation> data, String refId) {
         List<Observation> usable = data.stream().filter(o -> !o.pka().isEmpty()).toList();
-        Engine e0 = Engine.withoutAnalogs(start, maxHeavyAtoms);
+        ModelEngine e0 = engines.withoutAnalogs(start);
         Map<String, List<Observation>> byClass = new LinkedHashMap<>();
         Map<String, List<Observation>> withPartner = new HashMap<>();
         usable.parallelStream().map(o -> Map.entry(o, e0.analyse(o.structure(), Conditions.noPh(), true)))
@@ -190,7 +192,7 @@ final class ModelCalibration {
         t = withHonestSd(t, usable, refId);
         List<Move> moves = new ArrayList<>();
         List<GroupClass> groups = new ArrayList<>();
-        Engine end = Engine.withoutAnalogs(t, maxHeavyAtoms);
+        ModelEngine end = engines.withoutAnalogs(t);
         for (GroupClass g : t.groups()) {
             double before = origin.getOrDefault(g.id(), g.pka());
             double rhoBefore = rhoOrigin.getOrDefault(g.id(), g.rho());
@@ -245,7 +247,7 @@ final class ModelCalibration {
         if (start.pairs().isEmpty()) {
             return new PairsRefined(start, pairMoves);
         }
-        Engine e0 = Engine.withoutAnalogs(start, maxHeavyAtoms);
+        ModelEngine e0 = engines.withoutAnalogs(start);
         Map<String, List<Observation>> byRule = new LinkedHashMap<>();
         usable.parallelStream().map(o -> Map.entry(o, e0.pairRules(o.structure()))).toList().forEach(en ->
                 en.getValue().forEach(r -> byRule.computeIfAbsent(r, k -> new ArrayList<>()).add(en.getKey())));
@@ -255,7 +257,7 @@ final class ModelCalibration {
             if (obs.size() < MIN_COMPOUNDS || !refinable(r0)) {
                 continue;
             }
-            java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(Engine.withoutAnalogs(x, maxHeavyAtoms), obs)
+            java.util.function.ToDoubleFunction<AcidityTable> objective = x -> loss(engines.withoutAnalogs(x), obs)
                     + PRIOR_WEIGHT * (huber(pair(x, r0.id()).singly() - r0.singly())
                             + huber(pair(x, r0.id()).doubly() - r0.doubly()));
             double[] best = {objective.applyAsDouble(t)};
@@ -336,7 +338,7 @@ final class ModelCalibration {
      * {@link #MAX_SD}.
      */
     AcidityTable withHonestSd(AcidityTable t, List<Observation> obs, String refId) {
-        Engine e = Engine.withoutAnalogs(t, maxHeavyAtoms);
+        ModelEngine e = engines.withoutAnalogs(t);
         Map<String, List<Double>> errors = new HashMap<>();
         List<Map.Entry<String, Double>> all = obs.parallelStream().flatMap(o -> classErrors(e.analyse(o.structure(),
                 Conditions.noPh(), true), o).stream()).toList();
@@ -405,7 +407,7 @@ final class ModelCalibration {
     }
 
     /** Sum over compounds of the paired Huber losses and the misses. */
-    static double loss(Engine e, List<Observation> obs) {
+    static double loss(ModelEngine e, List<Observation> obs) {
         return obs.parallelStream().mapToDouble(o -> loss(e.analyse(o.structure(), Conditions.noPh(), true), o)).sum();
     }
 
@@ -457,7 +459,7 @@ final class ModelCalibration {
 
     /** Loss over the class's compounds plus the prior, for one table. */
     private double objective(AcidityTable t, String id, List<Observation> obs, double[] origin0) {
-        return loss(Engine.withoutAnalogs(t, maxHeavyAtoms), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2])
+        return loss(engines.withoutAnalogs(t), obs) + prior(group(t, id), origin0[0], origin0[1], origin0[2])
                 + PRIOR_WEIGHT * huber(REACH_PRIOR_SHIFT * (t.interaction().reachOf(id) - origin0[3]));
     }
 

@@ -1,8 +1,11 @@
-package ionmark.speciation.internal;
+package ionmark.calibration.internal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -11,9 +14,12 @@ import org.junit.jupiter.api.Test;
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.calibration.api.Observation;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
-import ionmark.speciation.api.Observation;
+import ionmark.speciation.internal.SpeciationService;
+import ionmark.speciation.spi.ModelEngine;
+import ionmark.speciation.spi.ModelEngines;
 
 /**
  * The whole-model refinement recovers a known displacement: "experimental" values are made by the
@@ -23,6 +29,15 @@ import ionmark.speciation.api.Observation;
  */
 class ModelCalibrationTest {
     static final AcidityTable TABLE = TableSnapshotService.shipped();
+    static final ModelEngines ENGINES = new SpeciationService(TABLE, 300, 30_000);
+
+    /** The speciation bundle's reference set (SMILES in the second column). */
+    static List<String> referenceSet() throws IOException {
+        try (InputStream in = SpeciationService.class.getResourceAsStream("/ionmark/speciation/reference-set.tsv")) {
+            return new String(in.readAllBytes(), StandardCharsets.UTF_8).lines()
+                    .filter(l -> !l.isBlank() && !l.startsWith("#")).map(String::strip).toList();
+        }
+    }
 
     static AcidityTable moved(String id, double by) {
         List<GroupClass> gs = new ArrayList<>();
@@ -32,12 +47,12 @@ class ModelCalibrationTest {
         return TABLE.withGroups(gs);
     }
 
-    /** Data made by the model the calibration fits: class values without the measured-analog step. */
     static List<Observation> observedWith(AcidityTable truth) throws Exception {
-        Engine e = Engine.withoutAnalogs(truth, 300);
+        // the model the refinement fits on: without measured analogs (they correct on top at run time)
+        ModelEngine e = ENGINES.withoutAnalogs(truth);
         List<Observation> out = new ArrayList<>();
         int i = 0;
-        for (String line : ReferenceSetTest.lines("reference-set.tsv")) {
+        for (String line : referenceSet()) {
             String smiles = line.split("\t")[1];
             Analysis a = e.analyse(smiles, Conditions.noPh(), true);
             if (a.ok() && !a.macroPka().isEmpty()) {
@@ -55,7 +70,7 @@ class ModelCalibrationTest {
     void aDisplacedClassIsMovedBackWithinOneStep() throws Exception {
         String id = "amine-primary";
         List<Observation> data = observedWith(moved(id, 0.6));
-        ModelCalibration.Outcome o = new ModelCalibration(300).refine(TABLE, data, "test-fit");
+        ModelCalibration.Outcome o = new ModelCalibration(ENGINES).refine(TABLE, data, "test-fit");
         double found = pka(o.table(), id) - pka(TABLE, id);
         // the prior (three compounds at the old value) holds it back a little; the last step is 0.075
         assertEquals(0.6, found, 0.2, "refined shift of " + id);
@@ -65,7 +80,7 @@ class ModelCalibrationTest {
     @Test
     void classesTheDataDoNotContradictStayWhereTheyAre() throws Exception {
         List<Observation> data = observedWith(TABLE);
-        ModelCalibration.Outcome o = new ModelCalibration(300).refine(TABLE, data, "test-fit");
+        ModelCalibration.Outcome o = new ModelCalibration(ENGINES).refine(TABLE, data, "test-fit");
         for (GroupClass g : TABLE.groups()) {
             assertEquals(g.pka(), pka(o.table(), g.id()), 1e-9, g.id());
         }
@@ -89,13 +104,13 @@ class ModelCalibrationTest {
         ionmark.acidity.api.PairRule start = rule(plain, "malonic-dialkyl");
         AcidityTable truth = plain.withPairs(plain.pairs().stream()
                 .map(r -> r == start ? r.withValues(1.7, 1.8, r.source(), r.note()) : r).toList());
-        Engine e = new Engine(truth, 300);
+        ModelEngine e = ENGINES.engine(truth);
         List<Observation> data = new ArrayList<>();
         for (String smiles : List.of("CCC(CC)(C(=O)O)C(=O)O", "CC(C)(C(=O)O)C(=O)O", "CCCC(CCC)(C(=O)O)C(=O)O",
                 "CCC(C)(C(=O)O)C(=O)O", "CC(C)C(C(=O)O)(C(=O)O)C(C)C", "CCC(C(=O)O)(C(=O)O)c1ccccc1")) {
             data.add(new Observation("m" + data.size(), smiles, e.analyse(smiles, Conditions.noPh(), true).macroPka()));
         }
-        ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
+        ModelCalibration.PairsRefined r = new ModelCalibration(ENGINES).refinePairs(plain, data, "test-fit");
         ionmark.acidity.api.PairRule found = rule(r.table(), "malonic-dialkyl");
         // the prior (three compounds at the starting values), the robust loss and the step grid hold each
         // value short of the truth: at least 40 % of the way, never beyond it
@@ -119,13 +134,13 @@ class ModelCalibrationTest {
         assertEquals("ionmark-azine-pairs", start.source());
         AcidityTable weak = plain.withPairs(plain.pairs().stream()
                 .map(r -> r == start ? r.withValues(0, 0, r.source(), r.note()) : r).toList());
-        Engine e = new Engine(weak, 300);
+        ModelEngine e = ENGINES.engine(weak);
         List<Observation> data = new ArrayList<>();
         for (String smiles : List.of("Cc1cnccn1", "CCc1cnccn1", "Cc1cnc(C)cn1", "Cc1ncc(C)nc1C", "Cc1nc2ccccc2nc1C",
                 "Clc1cnccn1", "COc1cnccn1")) {
             data.add(new Observation("m" + data.size(), smiles, e.analyse(smiles, Conditions.noPh(), true).macroPka()));
         }
-        ModelCalibration.PairsRefined r = new ModelCalibration(300).refinePairs(plain, data, "test-fit");
+        ModelCalibration.PairsRefined r = new ModelCalibration(ENGINES).refinePairs(plain, data, "test-fit");
         ionmark.acidity.api.PairRule found = rule(r.table(), "azine-ring-n-1,4");
         assertEquals(start, found);
         assertTrue(r.moves().stream().noneMatch(m -> m.toString().contains("azine-ring-n-1,4")), r.moves().toString());
@@ -140,14 +155,14 @@ class ModelCalibrationTest {
     @Test
     void classSdIsWidenedForTheConstantsFittedToTheSameErrors() {
         AcidityTable plain = withoutMeasured();
-        Engine e = new Engine(plain, 300);
+        ModelEngine e = ENGINES.engine(plain);
         List<Observation> data = new ArrayList<>();
         for (String smiles : List.of("CCN", "CCCN", "CCCCN", "CC(C)CN", "CCCCCN", "NCC1CCCCC1")) {
             double v = e.analyse(smiles, Conditions.noPh(), true).macroPka().get(0) + 0.5;
             data.add(new Observation("a" + data.size(), smiles, List.of(v)));
         }
         GroupClass before = plain.groups().stream().filter(g -> g.id().equals("amine-primary")).findFirst().orElseThrow();
-        AcidityTable after = new ModelCalibration(300).withHonestSd(plain, data, "test-fit");
+        AcidityTable after = new ModelCalibration(ENGINES).withHonestSd(plain, data, "test-fit");
         double widened = 0.5 * Math.sqrt(6.0 / 3.0);
         double want = Math.sqrt((6 * widened * widened + 3 * before.sd() * before.sd()) / 9);
         double got = after.groups().stream().filter(g -> g.id().equals("amine-primary")).findFirst().orElseThrow().sd();
@@ -168,7 +183,7 @@ class ModelCalibrationTest {
     void onlyCompoundsWhoseEveryConstantIsObservedCanTellAReachFactor() {
         // the reach fit leaves out compounds with a predicted constant in range that no experimental value
         // claims: weakening the rule could move that free constant onto another site's value
-        Engine e = new Engine(TABLE, 300);
+        ModelEngine e = ENGINES.engine(TABLE);
         Analysis cysteamine = e.analyse("NCCS", Conditions.noPh(), true);
         assertEquals(2, cysteamine.macroPka().size());
         // handbook constants 8.35 and 10.81 (Benesch and Benesch, from memory); values themselves do not matter
