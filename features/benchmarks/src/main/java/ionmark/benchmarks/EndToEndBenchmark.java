@@ -43,6 +43,8 @@ public class EndToEndBenchmark {
     final Conditions ph74 = Conditions.atPh(7.4);
 
     @Setup
+    // CDK 2.11 deprecates daylight() without a public replacement; the benchmark needs the engine's Daylight model
+    @SuppressWarnings("deprecation")
     public void setUp() {
         engine = new Engine(TableSnapshotService.shipped(), 300);
         parser = new SmilesParser(SilentChemObjectBuilder.getInstance());

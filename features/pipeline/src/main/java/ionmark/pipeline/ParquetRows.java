@@ -1,6 +1,5 @@
 package ionmark.pipeline;
 
-import java.util.Iterator;
 import java.util.Map;
 
 import org.apache.parquet.example.data.Group;
@@ -83,8 +82,7 @@ final class ParquetRows {
         }
         if (r.path("chargeStates").isObject()) {
             Group map = g.addGroup("chargeStates");
-            for (Iterator<Map.Entry<String, JsonNode>> it = r.path("chargeStates").fields(); it.hasNext();) {
-                Map.Entry<String, JsonNode> e = it.next();
+            for (Map.Entry<String, JsonNode> e : r.path("chargeStates").properties()) {
                 map.addGroup("key_value").append("key", Integer.parseInt(e.getKey())).append("value",
                         e.getValue().asDouble());
             }

@@ -19,7 +19,7 @@ final class SnappyCodecs implements CompressionCodecFactory {
         return new BytesInputCompressor() {
             @Override
             public BytesInput compress(BytesInput bytes) throws IOException {
-                return codec == CompressionCodecName.SNAPPY ? BytesInput.from(Snappy.compress(bytes.toByteArray()))
+                return codec == CompressionCodecName.SNAPPY ? BytesInput.from(Snappy.compress(heapBytes(bytes)))
                         : bytes;
             }
 
@@ -44,7 +44,7 @@ final class SnappyCodecs implements CompressionCodecFactory {
                     return bytes;
                 }
                 byte[] out = new byte[uncompressedSize];
-                Snappy.uncompress(bytes.toByteArray(), 0, (int) bytes.size(), out, 0);
+                Snappy.uncompress(heapBytes(bytes), 0, (int) bytes.size(), out, 0);
                 return BytesInput.from(out);
             }
 
@@ -53,7 +53,7 @@ final class SnappyCodecs implements CompressionCodecFactory {
                     int uncompressedSize) throws IOException {
                 byte[] in = new byte[compressedSize];
                 input.get(in);
-                output.put(decompress(BytesInput.from(in), uncompressedSize).toByteArray());
+                output.put(heapBytes(decompress(BytesInput.from(in), uncompressedSize)));
             }
 
             @Override
@@ -70,5 +70,11 @@ final class SnappyCodecs implements CompressionCodecFactory {
         if (codec != CompressionCodecName.SNAPPY && codec != CompressionCodecName.UNCOMPRESSED) {
             throw new IllegalArgumentException("Parquet output supports SNAPPY and UNCOMPRESSED pages, not " + codec);
         }
+    }
+
+    /** Snappy's Java API takes heap arrays; Parquet's allocator-based replacement would only add a buffer life cycle. */
+    @SuppressWarnings("deprecation")
+    private static byte[] heapBytes(BytesInput bytes) throws IOException {
+        return bytes.toByteArray();
     }
 }

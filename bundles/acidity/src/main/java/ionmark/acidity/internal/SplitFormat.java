@@ -63,7 +63,7 @@ final class SplitFormat {
         JsonNode classes = fitted == null ? JSON.createObjectNode() : fitted.path("classes");
         JsonNode pairFits = fitted == null ? JSON.createObjectNode() : fitted.path("pairs");
         ObjectNode reach = JSON.createObjectNode();
-        curated.path("interaction").path("reach").fields().forEachRemaining(e -> reach.set(e.getKey(), e.getValue()));
+        curated.path("interaction").path("reach").properties().forEach(e -> reach.set(e.getKey(), e.getValue()));
         ArrayNode groups = out.putArray("groups");
         Set<String> groupIds = new HashSet<>();
         JsonNode cg = curated.path("groups");
@@ -121,7 +121,7 @@ final class SplitFormat {
         }
         if (fit.has("sources") && record.has("sources")) {
             ObjectNode s = (ObjectNode) record.get("sources");
-            fit.get("sources").fields().forEachRemaining(e -> s.set(e.getKey(), e.getValue()));
+            fit.get("sources").properties().forEach(e -> s.set(e.getKey(), e.getValue()));
         } else if (fit.has("sources")) {
             record.set("sources", fit.get("sources").deepCopy());
         }
@@ -141,7 +141,7 @@ final class SplitFormat {
 
     static Map<String, String> fragments(JsonNode n, List<Problem> problems) {
         Map<String, String> m = new LinkedHashMap<>();
-        n.fields().forEachRemaining(e -> {
+        n.properties().forEach(e -> {
             if (!e.getValue().isTextual() || REFERENCE.matcher(e.getValue().asText()).find()) {
                 problems.add(TableCodec.error("curated $.fragments." + e.getKey(),
                         "a fragment is SMARTS text and may not use other fragments"));

@@ -218,7 +218,7 @@ final class TableCodec {
 
     private static Map<String, Double> numbers(JsonNode n) {
         Map<String, Double> m = new TreeMap<>();
-        n.fields().forEachRemaining(e -> m.put(e.getKey(), e.getValue().asDouble()));
+        n.properties().forEach(e -> m.put(e.getKey(), e.getValue().asDouble()));
         return m;
     }
 
@@ -267,7 +267,7 @@ final class TableCodec {
             if (!r.isObject()) {
                 f.problems.add(error(p + ".reach", "must map group class ids to factors"));
             } else {
-                r.fields().forEachRemaining(e -> reach.put(e.getKey(), f.number(r, p + ".reach", e.getKey(), true)));
+                r.properties().forEach(e -> reach.put(e.getKey(), f.number(r, p + ".reach", e.getKey(), true)));
             }
         }
         return new SiteInteraction(shifts, f.number(n, p, "decay", true), f.number(n, p, "cutoff", true),
@@ -284,7 +284,7 @@ final class TableCodec {
             f.problems.add(error(p + ".sources", "sources must map a field name to a reference id"));
             return m;
         }
-        s.fields().forEachRemaining(e -> m.put(e.getKey(), e.getValue().asText("")));
+        s.properties().forEach(e -> m.put(e.getKey(), e.getValue().asText("")));
         return m;
     }
 

@@ -84,7 +84,9 @@ public final class TableFiles {
     /** exec:java runs in the module directory; the paths in the docs are from the project root. */
     private static Path root() {
         Path here = Path.of("").toAbsolutePath();
-        return Files.isDirectory(here.resolve("bundles")) ? here : here.getParent().getParent();
+        Path bundles = here.getParent();
+        Path module = bundles == null ? null : bundles.getParent();
+        return Files.isDirectory(here.resolve("bundles")) || module == null ? here : module;
     }
 
     private static String required(Map<String, String> opt, String key) {

@@ -40,7 +40,7 @@ final class AddMeasured {
             err.println("ionmark: cannot read " + file + ": " + e.getMessage());
             return 1;
         }
-        String name = file.getFileName().toString().toLowerCase(Locale.ROOT);
+        String name = String.valueOf(file.getFileName()).toLowerCase(Locale.ROOT);
         MeasuredImport.Format f = format != null ? MeasuredImport.Format.valueOf(format.toUpperCase(Locale.ROOT))
                 : name.endsWith(".sdf") || name.endsWith(".sd") ? MeasuredImport.Format.SDF : MeasuredImport.Format.TSV;
         AcidityTable head = tables.current();

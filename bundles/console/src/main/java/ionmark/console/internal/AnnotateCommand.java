@@ -80,7 +80,7 @@ final class AnnotateCommand {
             err.println("ionmark: cannot read " + p + ": " + e.getMessage());
             return 1;
         }
-        String name = p.getFileName().toString().replaceFirst("\\.md$", "");
+        String name = String.valueOf(p.getFileName()).replaceFirst("\\.md$", "");
         Entry entry = MarkdownEntries.parse(name, text);
         AnnotatedEntry r = annotation.annotate(entry);
         if (format.equals("json")) {

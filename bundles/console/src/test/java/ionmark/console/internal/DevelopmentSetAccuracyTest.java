@@ -20,14 +20,18 @@ import ionmark.speciation.internal.SpeciationService;
 
 /**
  * Accuracy on the development set (../shared/data/iupac-dev.tsv, IUPAC Digitized pKa Dataset subset,
- * CC BY-NC 4.0; read at test time, never copied into the project). Floors just below today's
- * measured figures, so that a change cannot silently lose accuracy; the targets (80 %, 0.6) are not
- * met yet and are tracked in the README.
+ * CC BY-NC 4.0; read at test time, never copied into the project), so that a change cannot silently
+ * lose accuracy. The test scores the whole file, compounds the fit has seen included: table v31 measures
+ * within 1.0 = 83.0 %, MAE 0.585 here (December 2026), above the 5-fold cross-validated figures on the
+ * open 85 % (80.5 %, 0.627; README §7). The floors sit a small margin below what this test measures
+ * (1.5 points, 0.025 units): floors at the cross-validated figures would let a loss of four points pass.
+ * A recalibration that moves the figure resets the floors the same way. Tagged slow: {@code mvn -B verify
+ * -Pslow} runs it.
  */
 @Tag("slow")
 class DevelopmentSetAccuracyTest {
-    static final double WITHIN1_FLOOR = 0.64;
-    static final double MAE_CEILING = 1.0;
+    static final double WITHIN1_FLOOR = 0.815;
+    static final double MAE_CEILING = 0.61;
 
     @Test
     void developmentSetAccuracyDoesNotRegress() throws IOException {

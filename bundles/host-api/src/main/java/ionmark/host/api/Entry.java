@@ -11,7 +11,7 @@ import java.util.Objects;
  * @param blocks   content in order
  * @param pinnedTableVersion a table version the entry is pinned to (0: follow the current table)
  * @param notices  what the host could not read as written (an unclosed fence, an empty structure block), in
- *                 words a chemist understands; empty when none (since 1.1)
+ *                 words a chemist understands; empty when none
  */
 public record Entry(String id, String title, List<Block> blocks, int pinnedTableVersion, List<String> notices) {
     public Entry {

@@ -7,7 +7,7 @@ import java.util.regex.Pattern;
 
 /**
  * Reads an entry written in Markdown, the reference host's format, so that a host, a script and the
- * command line see one entry the same way (since 1.1).
+ * command line see one entry the same way.
  *
  * <p>A fenced block {@code ```smiles}, {@code ```molfile} or {@code ```rxn} is a structure;
  * {@code ```smiles ph=7.4} gives it its own pH. Headings start sections; a line {@code Table version: v3}

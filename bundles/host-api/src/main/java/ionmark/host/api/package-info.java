@@ -11,5 +11,5 @@
  * }</pre>
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.1.0")
+@org.osgi.annotation.versioning.Version("1.0.0")
 package ionmark.host.api;

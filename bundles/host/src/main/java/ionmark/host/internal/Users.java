@@ -67,7 +67,9 @@ final class Users {
         users.put(name, new String[] {String.join(",", roles), hash(password)});
         StringBuilder sb = new StringBuilder("# Ionmark users: name = roles : pbkdf2-sha256$iterations$salt$hash\n");
         users.forEach((n, v) -> sb.append(n).append(" = ").append(v[0]).append(" : ").append(v[1]).append('\n'));
-        Files.createDirectories(file.getParent());
+        // a bare file name has no parent: the folder is then the working directory
+        Files.createDirectories(java.util.Objects.requireNonNull(file.toAbsolutePath().getParent(),
+                "the users file needs a folder"));
         Files.writeString(file, sb, StandardCharsets.UTF_8);
         try {
             Files.setPosixFilePermissions(file, PosixFilePermissions.fromString("rw-------"));

@@ -6,7 +6,7 @@ import ionmark.speciation.api.Speciation;
 /**
  * The notebook's reading of entries outside an OSGi framework (a pipeline worker, a script): the same reader
  * the notebook's cards and {@code ionmark annotate} use, so every caller gets one answer per structure and
- * condition (since 1.1).
+ * condition.
  *
  * <pre>{@code
  * EntryAnnotation notebook = EntryAnnotations.of(speciation);

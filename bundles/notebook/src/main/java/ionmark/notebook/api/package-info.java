@@ -10,8 +10,8 @@
  * }
  * }</pre>
  *
- * <p>Outside a framework, {@link ionmark.notebook.api.EntryAnnotations#of} gives the same reading (1.1).
+ * <p>Outside a framework, {@link ionmark.notebook.api.EntryAnnotations#of} gives the same reading.
  */
 @org.osgi.annotation.bundle.Export
-@org.osgi.annotation.versioning.Version("1.1.0")
+@org.osgi.annotation.versioning.Version("1.0.0")
 package ionmark.notebook.api;

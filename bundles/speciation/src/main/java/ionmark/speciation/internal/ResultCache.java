@@ -33,7 +33,7 @@ final class ResultCache {
 
             @Override
             protected boolean removeEldestEntry(Map.Entry<Key, Object> e) {
-                return size() > ResultCache.this.capacity;
+                return super.size() > ResultCache.this.capacity;
             }
         };
     }

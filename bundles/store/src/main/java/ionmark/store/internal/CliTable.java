@@ -69,7 +69,9 @@ final class CliTable {
     /** Writes the head file atomically, owner-only (0600). */
     static void write(Path head, String json) {
         try {
-            Path tmp = Files.createTempFile(head.getParent(), "head", ".tmp");
+            // beside the head file (a bare name's folder is the working directory), so the move stays atomic
+            Path dir = java.util.Objects.requireNonNull(head.toAbsolutePath().getParent(), "the head file needs a folder");
+            Path tmp = Files.createTempFile(dir, "head", ".tmp");
             StoreOpener.ownerOnly(tmp, "rw-------");
             Files.writeString(tmp, json, StandardCharsets.UTF_8);
             Files.move(tmp, head, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);

@@ -19,6 +19,7 @@ class TwoInstancesTest {
     Path dir;
 
     @Test
+    @SuppressWarnings("try") // the followers are held open for the body; they work in the background
     void aPublishOnOneInstanceReachesTheOtherWithinFiveSeconds() throws Exception {
         for (JdbcTableStore base : Backends.fresh(dir)) {
             base.publish(Backends.smallTable(), 0, "seed", "seed");

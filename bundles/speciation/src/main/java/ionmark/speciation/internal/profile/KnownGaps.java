@@ -169,11 +169,11 @@ public final class KnownGaps {
 
     private static List<Gap> read() {
         List<Gap> out = new ArrayList<>();
-        try (InputStream in = KnownGaps.class.getResourceAsStream(RESOURCE)) {
-            if (in == null) {
-                throw new IllegalStateException("the known-gaps list " + RESOURCE + " is missing from the bundle");
-            }
-            BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8));
+        InputStream in = KnownGaps.class.getResourceAsStream(RESOURCE);
+        if (in == null) {
+            throw new IllegalStateException("the known-gaps list " + RESOURCE + " is missing from the bundle");
+        }
+        try (BufferedReader r = new BufferedReader(new InputStreamReader(in, StandardCharsets.UTF_8))) {
             for (String line = r.readLine(); line != null; line = r.readLine()) {
                 if (line.isBlank() || line.startsWith("#")) {
                     continue;

@@ -259,8 +259,9 @@ final class MobileSites {
             }
         }
         if (!lost.isEmpty()) {
+            @SuppressWarnings("rawtypes") // CDK's setStereoElements takes a raw List<IStereoElement>
             List<IStereoElement> keep = new ArrayList<>();
-            for (IStereoElement se : mol.stereoElements()) {
+            for (IStereoElement<?, ?> se : mol.stereoElements()) {
                 if (!(se instanceof IDoubleBondStereochemistry db && lost.contains(db.getStereoBond()))) {
                     keep.add(se);
                 }

@@ -1,6 +1,13 @@
 package ionmark.speciation.internal.structure;
 
 import java.util.List;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.TimeoutException;
 
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
@@ -14,11 +21,22 @@ import ionmark.speciation.api.Conditions;
 import ionmark.speciation.internal.Engine;
 
 /**
- * Random and mutated SMILES and molfiles thrown at the reader and the whole engine: every input
- * ends in an analysis or a one-line error, never an exception and never a hang (jqwik's timeout).
+ * Random and mutated SMILES and molfiles thrown at the reader on its own and at the whole engine.
+ * The reader is called directly, without the engine's catch-all for runtime exceptions: every input
+ * ends in a read structure or a {@link StructureException} with a one-line message, never another
+ * exception. Every call has a time limit ({@link #LIMIT_SECONDS}), so a hang fails instead of
+ * stopping the build.
  */
 class ReaderFuzzTest {
     static final Engine ENGINE = new Engine(TableSnapshotService.shipped(), 300);
+    static final StructureReader READER = new StructureReader(300);
+    /** Far above the few milliseconds a read takes, so that only a hang or a runaway search fails on a loaded machine. */
+    static final int LIMIT_SECONDS = 20;
+    static final ExecutorService WORKER = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "reader-fuzz");
+        t.setDaemon(true);
+        return t;
+    });
     static final List<String> SEEDS = List.of("CC(=O)O", "NCC(=O)O", "c1ccncc1", "OC(=O)c1ccc(N)cc1",
             "CN1CCN(CC1)c1ccccc1", "OP(=O)(O)O", "C[N+](C)(C)C", "O=C1NC(=O)c2ccccc12", "c1nn[nH]n1",
             "CC(C)Cc1ccc(cc1)C(C)C(=O)O", "[O-][n+]1ccccc1", "NC(N)=N");
@@ -74,9 +92,36 @@ class ReaderFuzzTest {
     }
 
     private static void check(String input) {
-        Analysis a = ENGINE.analyse(input, Conditions.atPh(7.4));
+        String refusal = withinLimit(input, () -> {
+            try {
+                READER.read(input);
+                return null;
+            } catch (StructureException e) {
+                return String.valueOf(e.getMessage());
+            }
+        });
+        if (refusal != null && (refusal.isBlank() || refusal.contains("\n"))) {
+            throw new AssertionError("the reader's refusal must be one non-empty line, was: " + refusal);
+        }
+        Analysis a = withinLimit(input, () -> ENGINE.analyse(input, Conditions.atPh(7.4)));
         if (!a.ok() && (a.error() == null || a.error().isBlank() || a.error().contains("\n"))) {
             throw new AssertionError("error must be one non-empty line, was: " + a.error());
+        }
+    }
+
+    /** Runs the call on the worker; an exception other than the declared refusal, or no answer in time, fails. */
+    private static <T> T withinLimit(String input, Callable<T> call) {
+        Future<T> f = WORKER.submit(call);
+        try {
+            return f.get(LIMIT_SECONDS, TimeUnit.SECONDS);
+        } catch (TimeoutException e) {
+            f.cancel(true);
+            throw new AssertionError("no answer within " + LIMIT_SECONDS + " s for: " + input, e);
+        } catch (ExecutionException e) {
+            throw new AssertionError("threw " + e.getCause() + " for: " + input, e.getCause());
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new AssertionError("interrupted", e);
         }
     }
 }
