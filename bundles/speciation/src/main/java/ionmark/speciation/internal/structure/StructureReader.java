@@ -173,7 +173,7 @@ public final class StructureReader {
                         throw new StructureException("cannot read molfile: the V3000 record is damaged or incomplete");
                     }
                     addImplicitHydrogens(mol);
-                    return mol;
+                    return bondsWithinRecord(mol);
                 }
             }
             try (MDLV2000Reader r = new MDLV2000Reader(new StringReader(record))) {
@@ -181,12 +181,28 @@ public final class StructureReader {
                 if (mol == null) {
                     throw new StructureException("cannot read molfile: the record is damaged or incomplete");
                 }
-                return mol;
+                return bondsWithinRecord(mol);
             }
         } catch (CDKException | java.io.IOException | RuntimeException e) {
             throw new StructureException("cannot read molfile: " + String.valueOf(e.getMessage()).lines().findFirst()
                     .orElse("unreadable"));
         }
+    }
+
+    /**
+     * The reader accepts a bond line that names an atom number beyond the atom block (it makes a stray atom
+     * outside the structure); such a record is damaged, and its bonds cannot be trusted.
+     */
+    private static IAtomContainer bondsWithinRecord(IAtomContainer mol) throws StructureException {
+        for (IBond b : mol.bonds()) {
+            for (IAtom a : b.atoms()) {
+                if (a == null || a.getIndex() < 0 || a.getIndex() >= mol.getAtomCount() || mol.indexOf(a) < 0) {
+                    throw new StructureException("cannot read molfile: bond " + (mol.indexOf(b) + 1)
+                            + " names an atom the atom block does not have");
+                }
+            }
+        }
+        return mol;
     }
 
     private static void addImplicitHydrogens(IAtomContainer mol) throws CDKException {
