@@ -173,7 +173,7 @@ public final class StructureReader {
                         throw new StructureException("cannot read molfile: the V3000 record is damaged or incomplete");
                     }
                     addImplicitHydrogens(mol);
-                    return bondsWithinRecord(mol);
+                    return mol;
                 }
             }
             try (MDLV2000Reader r = new MDLV2000Reader(new StringReader(record))) {
@@ -181,28 +181,12 @@ public final class StructureReader {
                 if (mol == null) {
                     throw new StructureException("cannot read molfile: the record is damaged or incomplete");
                 }
-                return bondsWithinRecord(mol);
+                return mol;
             }
         } catch (CDKException | java.io.IOException | RuntimeException e) {
             throw new StructureException("cannot read molfile: " + String.valueOf(e.getMessage()).lines().findFirst()
                     .orElse("unreadable"));
         }
-    }
-
-    /**
-     * The reader accepts a bond line that names an atom number beyond the atom block (it makes a stray atom
-     * outside the structure); such a record is damaged, and its bonds cannot be trusted.
-     */
-    private static IAtomContainer bondsWithinRecord(IAtomContainer mol) throws StructureException {
-        for (IBond b : mol.bonds()) {
-            for (IAtom a : b.atoms()) {
-                if (a == null || a.getIndex() < 0 || a.getIndex() >= mol.getAtomCount() || mol.indexOf(a) < 0) {
-                    throw new StructureException("cannot read molfile: bond " + (mol.indexOf(b) + 1)
-                            + " names an atom the atom block does not have");
-                }
-            }
-        }
-        return mol;
     }
 
     private static void addImplicitHydrogens(IAtomContainer mol) throws CDKException {
@@ -239,8 +223,12 @@ public final class StructureReader {
         return best;
     }
 
-    /** Whether the bonds join every atom into one component (union–find over the bond list). */
-    static boolean connected(IAtomContainer mol) {
+    /**
+     * Whether the bonds join every atom into one component (union–find over the bond list). A bond to an atom
+     * outside the structure (a molfile bond line naming an atom number beyond the atom block, which the reader
+     * accepts) is a damaged record.
+     */
+    static boolean connected(IAtomContainer mol) throws StructureException {
         int n = mol.getAtomCount();
         int[] parent = new int[n];
         for (int i = 0; i < n; i++) {
@@ -248,8 +236,13 @@ public final class StructureReader {
         }
         int components = n;
         for (IBond b : mol.bonds()) {
-            int u = root(parent, b.getBegin().getIndex());
-            int w = root(parent, b.getEnd().getIndex());
+            int bi = b.getBegin().getIndex();
+            int ei = b.getEnd().getIndex();
+            if (bi < 0 || ei < 0 || bi >= n || ei >= n) {
+                throw new StructureException("cannot read molfile: a bond names an atom the atom block does not have");
+            }
+            int u = root(parent, bi);
+            int w = root(parent, ei);
             if (u != w) {
                 parent[u] = w;
                 components--;
