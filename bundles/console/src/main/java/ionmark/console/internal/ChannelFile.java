@@ -20,10 +20,13 @@ import java.util.Optional;
 record ChannelFile(int port, String token) {
     static final String NAME = "cli-channel";
 
+    /** One secure generator for the process: seeding a new one per token is waste, not extra safety. */
+    private static final SecureRandom RANDOM = new SecureRandom();
+
     /** A fresh random token: 32 bytes from the system's secure generator, in hex. */
     static String newToken() {
         byte[] b = new byte[32];
-        new SecureRandom().nextBytes(b);
+        RANDOM.nextBytes(b);
         return HexFormat.of().formatHex(b);
     }
 

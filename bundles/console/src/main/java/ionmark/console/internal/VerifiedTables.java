@@ -81,7 +81,11 @@ final class VerifiedTables {
         }
         AcidityTable t = LeanTables.shipped();
         try {
-            Path tmp = Files.createTempFile(cached.getParent(), "shipped", ".tmp");
+            Path dir = cached.toAbsolutePath().getParent();
+            if (dir == null) {
+                return t;
+            }
+            Path tmp = Files.createTempFile(dir, "shipped", ".tmp");
             Files.writeString(tmp, new LeanTables(t).toJson(t), StandardCharsets.UTF_8);
             Files.move(tmp, cached, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
         } catch (IOException e) {
