@@ -35,6 +35,8 @@ public final class CpuRatio {
     private CpuRatio() {
     }
 
+    // CDK 2.11 deprecates daylight() without a public replacement; the benchmark needs the engine's Daylight model
+    @SuppressWarnings("deprecation")
     public static void main(String[] args) throws CDKException {
         Engine engine = new Engine(TableSnapshotService.shipped(), 300);
         SmilesParser parser = new SmilesParser(SilentChemObjectBuilder.getInstance());
