@@ -23,7 +23,8 @@ public final class AnalogCorrection {
     private AnalogCorrection() {
     }
 
-    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight) {
+    /** An analog used, its weight, and whether that weight was cut for a residual far from the others'. */
+    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
     }
 
     public static List<EstimatedSite> apply(SiteAnalogIndex index, MatchTarget mol, List<EstimatedSite> est) {
@@ -61,7 +62,7 @@ public final class AnalogCorrection {
             double sim = SiteEnvironment.tanimoto(env, m.env());
             double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
             if (w > 0) {
-                best.merge(m.compound().id(), new Used(m, sim, w), (a, b) -> a.weight() >= b.weight() ? a : b);
+                best.merge(m.compound().id(), new Used(m, sim, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
             }
         }
         if (best.isEmpty()) {
@@ -72,6 +73,9 @@ public final class AnalogCorrection {
                 .thenComparing(u -> u.site().compound().id()));
         if (used.size() > cfg.maxAnalogs()) {
             used = used.subList(0, cfg.maxAnalogs());
+        }
+        if (cfg.huber() > 0 && used.size() > 2) {
+            used = robust(used, cfg.huber());
         }
         double sumW = used.stream().mapToDouble(Used::weight).sum();
         double mean = used.stream().mapToDouble(u -> u.weight() * u.site().residual()).sum() / sumW;
@@ -88,6 +92,32 @@ public final class AnalogCorrection {
             now = now.shifted(part, term(u, part, denom, cfg), "analog", i == used.size() - 1 ? sd : now.sd());
         }
         return now;
+    }
+
+    /**
+     * Huber weights around the weighted median of the residuals: an analog whose residual lies more than
+     * {@code c} units from the others' centre keeps only c/|r − median| of its weight. One misassigned
+     * measurement (a constant of another site fitted to this one) then cannot drag a series' correction.
+     */
+    static List<Used> robust(List<Used> used, double c) {
+        List<Used> byResidual = new ArrayList<>(used);
+        byResidual.sort(Comparator.comparingDouble(u -> u.site().residual()));
+        double total = used.stream().mapToDouble(Used::weight).sum();
+        double acc = 0;
+        double median = byResidual.get(0).site().residual();
+        for (Used u : byResidual) {
+            acc += u.weight();
+            if (acc >= total / 2) {
+                median = u.site().residual();
+                break;
+            }
+        }
+        List<Used> out = new ArrayList<>(used.size());
+        for (Used u : used) {
+            double d = Math.abs(u.site().residual() - median);
+            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true));
+        }
+        return out;
     }
 
     /**
@@ -138,7 +168,10 @@ public final class AnalogCorrection {
         Decimals.append(label.append(", local similarity "), u.similarity(), 2, false);
         Decimals.append(label.append(", weight "), u.weight(), 2, false);
         Decimals.append(label.append(" of "), denom, 2, false);
-        Decimals.append(label.append(" (prior "), cfg.prior(), 1, false).append(')');
+        Decimals.append(label.append(" (prior "), cfg.prior(), 2, false).append(')');
+        if (u.damped()) {
+            label.append("; weight cut: residual far from the other analogs'");
+        }
         return new Term(label.toString(), part, "measured value in the shared table: " + m.citation());
     }
 
