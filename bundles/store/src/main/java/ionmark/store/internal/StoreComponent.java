@@ -54,7 +54,8 @@ public final class StoreComponent implements TableStore {
         }
         boolean cli = ctx.getProperty(CLI_PROPERTY) != null && !ctx.getProperty(CLI_PROPERTY).isBlank();
         String configured = config.jdbcUrl().strip();
-        this.dir = configured.isEmpty() ? StoreOpener.folder(ctx.getProperty("ionmark.workspace")) : null;
+        String workspace = config.workspace().isBlank() ? ctx.getProperty("ionmark.workspace") : config.workspace();
+        this.dir = configured.isEmpty() ? StoreOpener.folder(workspace) : null;
         this.url = dir == null ? configured : StoreOpener.h2Url(dir);
         this.password = config.passwordFile().isBlank() ? "" : Files.readAllLines(Path.of(config.passwordFile()))
                 .stream().findFirst().orElse("").strip();

@@ -16,6 +16,11 @@ import org.osgi.service.metatype.annotations.ObjectClassDefinition;
             + "password itself in configuration)")
     String passwordFile() default "";
 
+    @AttributeDefinition(name = "Workspace folder", description = "The notebook's workspace, whose .ionmark folder "
+            + "holds the H2 store when the JDBC URL is empty. Empty: the framework property ionmark.workspace, else "
+            + "./workspace")
+    String workspace() default "";
+
     @AttributeDefinition(name = "Head poll interval (s)", description = "How often every instance checks for a new "
             + "head; a new version reaches every notebook within this time", min = "1")
     int pollSeconds() default 2;
