@@ -24,9 +24,11 @@ class ChargeStateMeasureTest {
     /**
      * Measured with table v29 when the measure was added: overall 0.886 (pH 2 0.911, 7.4 0.870, 10 0.878),
      * 5 spurious constants; with table v31 (drug-like families, docs/druglike-families.md): overall 0.943
-     * (pH 2 0.943, 7.4 0.967, 10 0.919), 3 spurious constants.
+     * (pH 2 0.943, 7.4 0.967, 10 0.919), 3 spurious constants; with the families after v31 (sulfonyl amidines,
+     * 2-sulfinyl benzimidazoles, 2,6-dialkyl phenols, nitroethenediamines, diarylamino, unmeasured sites of measured
+     * compounds): overall 0.965 (pH 2 0.951, 7.4 0.976, 10 0.967), 3 spurious constants.
      */
-    static final double OVERALL_FLOOR = 0.93;
+    static final double OVERALL_FLOOR = 0.955;
     static final int SPURIOUS_CEILING = 4;
 
     static final Path FILE = Path.of("../../docs/data/druglike-charge.tsv");

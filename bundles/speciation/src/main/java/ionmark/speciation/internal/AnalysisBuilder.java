@@ -102,9 +102,12 @@ final class AnalysisBuilder {
                 chargeStates = ChargeProfile.fromMeasured(p, c.ph());
                 corrections.add("charge states from the measured macroscopic constants of "
                         + p.measured().get().name() + (c.temperature() == Conditions.STANDARD_TEMPERATURE
-                                && c.ionicStrength() == 0 ? " (exact, independent of the site model)"
+                                && c.ionicStrength() == 0 ? (ChargeProfile.hasUnmeasuredSite(p) ? ""
+                                        : " (exact, independent of the site model)")
                                         : ", moved to the stated conditions by the model's temperature and ionic-strength"
-                                                + " shifts"));
+                                                + " shifts")
+                        + (ChargeProfile.hasUnmeasuredSite(p) ? "; sites without a measured value in their dominant"
+                                + " form by the model, in the field of the measured sites" : ""));
             }
             double mean = 0;
             for (var e : chargeStates.entrySet()) {

@@ -8,6 +8,7 @@ import ionmark.acidity.api.SiteType;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.Problem;
+import ionmark.speciation.internal.microstates.SiteModel;
 
 /**
  * Charge over pH for a prepared problem: from the measured macroscopic constants when the structure
@@ -52,20 +53,25 @@ public final class ChargeProfile {
 
     /**
      * Charge-state fractions from measured macroscopic constants: the state that has lost d protons
-     * has weight 10^(Σ_(j≤d) (pH − pK_j)). Sites without measured values stay in their dominant form.
+     * has weight 10^(Σ_(j≤d) (pH − pK_j)). Sites without measured values stay in their dominant form,
+     * judged by their pKa in the field of the measured sites and the permanent charges
+     * ({@link #unmeasuredDeprotonated}): barbital's second N-H (site value 8.2) is not ionised at pH 10
+     * once the first N-H, two bonds away, carries its charge (second constant 12.7).
      */
     public static Map<Integer, Double> fromMeasured(Problem p, double ph) {
         List<Double> pk = p.measuredHere();
         int z0 = p.permanentCharge();
+        int i = -1;
         for (EstimatedSite s : p.sites()) {
             if (s.site().group().permanent()) {
                 continue;
             }
+            i++;
             boolean base = s.site().group().type() == SiteType.BASE;
             if ("measured".equals(s.basis())) {
                 z0 += base ? 1 : 0;
             } else {
-                boolean dep = ph > s.pka();
+                boolean dep = unmeasuredDeprotonated(p, i, ph);
                 z0 += base ? (dep ? 0 : 1) : (dep ? -1 : 0);
             }
         }
@@ -84,6 +90,36 @@ public final class ChargeProfile {
             out.merge(z0 - d, Math.pow(10, logw[d] - max) / sum, Double::sum);
         }
         return out;
+    }
+
+    /** Whether a titratable site of the problem has no measured value (it then takes its dominant form). */
+    public static boolean hasUnmeasuredSite(Problem p) {
+        return p.sites().stream().anyMatch(s -> !s.site().group().permanent() && !"measured".equals(s.basis()));
+    }
+
+    /**
+     * Whether titratable site {@code i} (model order) without a measured value is deprotonated at a pH:
+     * its model pKa moved by the interaction with the mean charge of each measured site (from that
+     * site's value in the model, the one fitted to the measured constants) and by the permanent
+     * charges: pKa' = pKa − Σ W_ij·q_j − Φ_i (an anion nearby raises an acid's or a base's constant).
+     */
+    static boolean unmeasuredDeprotonated(Problem p, int i, double ph) {
+        SiteModel m = p.model();
+        double shift = -m.background()[i];
+        int j = -1;
+        for (EstimatedSite s : p.sites()) {
+            if (s.site().group().permanent()) {
+                continue;
+            }
+            j++;
+            if (j == i || !"measured".equals(s.basis())) {
+                continue;
+            }
+            double dep = 1 / (1 + Math.pow(10, m.pka()[j] - ph));
+            double q = m.base()[j] ? 1 - dep : -dep;
+            shift -= m.w()[i][j] * q;
+        }
+        return ph > m.pka()[i] + shift;
     }
 
     /** The solver's charge states (titratable sites only) moved by the permanent charge. */
