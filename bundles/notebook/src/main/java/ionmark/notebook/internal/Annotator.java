@@ -35,6 +35,7 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
     private final AtomicReference<TableStore> store = new AtomicReference<>();
     private final AtomicReference<TableService> tables = new AtomicReference<>();
     private final AtomicReference<SeenEntries> seen = new AtomicReference<>();
+    private final CardCache cards = new CardCache(CardCache.DEFAULT_CHARS);
 
     /** Without a table store: pinned entries are annotated with the current table, and their cards say so. */
     @Activate
@@ -132,7 +133,7 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
             out.add(new Decoration(0, sb.append("</ul>").toString()));
         }
         for (AnnotatedStructure s : a.structures()) {
-            out.add(new Decoration(s.block(), new Card(s).html()));
+            out.add(new Decoration(s.block(), card(s)));
         }
         long distinct = a.structures().stream().filter(AnnotatedStructure::ok).map(AnnotatedStructure::words).distinct()
                 .count();
@@ -140,6 +141,16 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
             out.add(new Decoration(entry.blocks().size() - 1, separations(a.separations())));
         }
         return out;
+    }
+
+    /** The card of one structure, drawn once per distinct content ({@link CardCache}). */
+    String card(AnnotatedStructure s) {
+        return cards.html(s, x -> new Card(x).html());
+    }
+
+    /** The rendered-card cache (tests). */
+    CardCache cards() {
+        return cards;
     }
 
     static String separations(List<Separation> found) {

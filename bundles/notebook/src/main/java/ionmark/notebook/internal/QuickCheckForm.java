@@ -53,7 +53,7 @@ final class QuickCheckForm {
         List<Block> blocks = List.of(new Block(Block.Kind.TEXT, String.join(" ", lines), null, 0),
                 new Block(Block.Kind.STRUCTURE, structure, p, 0));
         for (var s : annotator.annotate(new Entry("quick-check", "Quick check", blocks, 0)).structures()) {
-            sb.append(new Card(s).html());
+            sb.append(annotator.card(s));
         }
         return sb.toString();
     }
