@@ -42,7 +42,7 @@ final class QuickCheckForm {
         List<Field> fields = List.of(new Field("ph", "pH", ph, bad.get("ph")),
                 new Field("temp", "°C (25 if empty)", t, bad.get("temp")),
                 new Field("ionic", "ionic strength, M (0 if empty)", is, bad.get("ionic")));
-        StringBuilder sb = new StringBuilder(Templates.render("quickCheckForm", Map.of("structure", structure, "fields",
+        StringBuilder sb = new StringBuilder(Html.TEMPLATES.render("quickCheckForm", Map.of("structure", structure, "fields",
                 fields, "askForStructure", structure.isBlank() && params.containsKey("structure"))));
         if (structure.isBlank() || !bad.isEmpty()) {
             return sb.toString();
