@@ -1,9 +1,10 @@
 #!/usr/bin/env bash
 # Load benchmark: C clients send quick checks to a notebook for S seconds (QuickCheckLoad); exit 1 on any error.
 # usage: features/benchmarks/load-quick-check.sh [CLIENTS] [SECONDS] [PORT]   (after mvn -B -DskipTests install)
+# IONMARK_JAR=path/to/ionmark.jar runs another build (to alternate an old and a new build under the same load)
 set -euo pipefail
 root="$(cd "$(dirname "${BASH_SOURCE[0]}")/../.." && pwd)"
-jar="$root/features/app/target/ionmark.jar"
+jar="${IONMARK_JAR:-$root/features/app/target/ionmark.jar}"
 clients="${1:-50}"; seconds="${2:-60}"; port="${3:-18281}"
 ws="$(mktemp -d)"
 java -Dorg.osgi.service.http.port="$port" -Dgosh.args=--nointeractive -Dionmark.workspace="$ws" -jar "$jar" \

@@ -33,23 +33,23 @@ final class EntryPages {
 
     /** The entry list with its search, then the side panels and the administration pages the user may open. */
     static String list(List<Row> rows, String query, boolean mayEdit, List<SidePanel> panels, List<AdminPage> admin) {
-        return Templates.render("entries", Map.of("rows", rows, "query", query, "mayEdit", mayEdit, "panels", panels,
+        return Pages.TEMPLATES.render("entries", Map.of("rows", rows, "query", query, "mayEdit", mayEdit, "panels", panels,
                 "admin", admin));
     }
 
     static String newEntry(String token, String message) {
-        return Templates.render("newEntry", Map.of("token", token, "message", message));
+        return Pages.TEMPLATES.render("newEntry", Map.of("token", token, "message", message));
     }
 
     static String history(String id, List<EntryHistory.Save> saves) {
         List<EntryHistory.Save> newestFirst = new ArrayList<>(saves);
         Collections.reverse(newestFirst);
-        return Templates.render("history", Map.of("id", id, "newestFirst", newestFirst));
+        return Pages.TEMPLATES.render("history", Map.of("id", id, "newestFirst", newestFirst));
     }
 
     /** One saved text of an entry. */
     static String savedText(String id, int number, String text) {
-        return Templates.render("savedText", Map.of("id", id, "number", number, "text", text));
+        return Pages.TEMPLATES.render("savedText", Map.of("id", id, "number", number, "text", text));
     }
 
     /** The editor with its live preview beside it (stacked on narrow screens). */
@@ -64,14 +64,14 @@ final class EntryPages {
             case 400 -> "Cannot use that request";
             default -> "Something went wrong";
         };
-        return Templates.render("error", Map.of("status", status, "title", title, "message", message, "signInLink",
+        return Pages.TEMPLATES.render("error", Map.of("status", status, "title", title, "message", message, "signInLink",
                 status == 403 && !signedIn));
     }
 
     /** What the host could not read in the entry, and a word when no annotator is running yet. */
     static String notices(Entry e, boolean annotatorsReady) {
         boolean loading = !annotatorsReady && e.blocks().stream().anyMatch(WebShell::isStructure);
-        return Templates.render("notices", Map.of("loading", loading, "notices", e.notices()));
+        return Pages.TEMPLATES.render("notices", Map.of("loading", loading, "notices", e.notices()));
     }
 
     /** An id for a new entry from its title: lower-case words joined by hyphens, unique in the workspace. */

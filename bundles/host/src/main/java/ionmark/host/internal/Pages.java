@@ -8,6 +8,7 @@ import java.util.Map;
 import ionmark.host.api.Block;
 import ionmark.host.api.Entry;
 import ionmark.host.api.SidePanel;
+import ionmark.host.templates.PageTemplates;
 import gg.jte.Content;
 
 /**
@@ -15,6 +16,9 @@ import gg.jte.Content;
  * text is escaped by the template engine; contributed HTML (cards, panels, admin pages) is placed as is.
  */
 final class Pages {
+    /** The shell's templates, precompiled into this package ({@code src/main/jte}). */
+    static final PageTemplates TEMPLATES = PageTemplates.beside(Pages.class);
+
     private Pages() {
     }
 
@@ -41,19 +45,19 @@ final class Pages {
         p.put("title", title);
         p.put("signedIn", signedIn);
         p.put("body", (Content) out -> out.writeContent(body));
-        return Templates.render("page", p);
+        return TEMPLATES.render("page", p);
     }
 
     static String signIn(String token, String message) {
-        return Templates.render("signIn", Map.of("token", token, "message", message));
+        return TEMPLATES.render("signIn", Map.of("token", token, "message", message));
     }
 
     static String entry(Entry e, Map<Integer, List<String>> decorations, List<SidePanel> panels) {
-        return Templates.render("entry", Map.of("id", e.id(), "parts", parts(e, decorations)));
+        return TEMPLATES.render("entry", Map.of("id", e.id(), "parts", parts(e, decorations)));
     }
 
     static String body(Entry e, Map<Integer, List<String>> decorations) {
-        return Templates.render("body", Map.of("parts", parts(e, decorations)));
+        return TEMPLATES.render("body", Map.of("parts", parts(e, decorations)));
     }
 
     /** The entry's blocks as parts: headings, paragraphs, tables; a molfile or RXN block folded under its title. */
@@ -89,16 +93,16 @@ final class Pages {
 
     /** The editor with its live preview beside it (stacked on narrow screens). */
     static String editor(String id, String text, String token) {
-        return Templates.render("editor", Map.of("id", id, "text", text, "token", token));
+        return TEMPLATES.render("editor", Map.of("id", id, "text", text, "token", token));
     }
 
     /** A side panel's or administration page's title over the HTML its bundle built. */
     static String contributed(String title, String html) {
-        return Templates.render("contributed", Map.of("title", title, "html", html));
+        return TEMPLATES.render("contributed", Map.of("title", title, "html", html));
     }
 
     /** The line shown where a contributor's annotations failed. */
     static String annotationsFailed(String message) {
-        return Templates.render("annotationsFailed", Map.of("message", message));
+        return TEMPLATES.render("annotationsFailed", Map.of("message", message));
     }
 }

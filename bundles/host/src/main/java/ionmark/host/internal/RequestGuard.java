@@ -25,7 +25,12 @@ final class RequestGuard {
     static final int MAX_ANNOTATING = Math.max(2, Runtime.getRuntime().availableProcessors());
     static final long BUSY_WAIT_MS = 2000;
 
-    private final Semaphore annotating = new Semaphore(MAX_ANNOTATING);
+    /**
+     * Fair: waiting requests get a slot in the order they came. An unfair semaphore let a request that arrived just
+     * as a slot freed take it ahead of those already waiting, so under load some waited the full busy wait and were
+     * turned away while later ones went first (the long tail).
+     */
+    private final Semaphore annotating = new Semaphore(MAX_ANNOTATING, true);
 
     /** A body over the limit, found while it is read. */
     static final class TooLarge extends RuntimeException {

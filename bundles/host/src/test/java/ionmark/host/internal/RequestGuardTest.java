@@ -169,4 +169,57 @@ class RequestGuardTest {
         g.run(request("GET", "/signin", 0, new byte[0]), signIn.proxy(), (q, s) -> { });
         assertEquals(200, signIn.status);
     }
+
+    @Test
+    void aFreedSlotGoesToTheRequestThatWaitedLongestNotToANewcomer() throws Exception {
+        RequestGuard g = new RequestGuard();
+        int slots = RequestGuard.MAX_ANNOTATING;
+        CountDownLatch held = new CountDownLatch(slots);
+        CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch releaseFirst = new CountDownLatch(1);
+        java.util.List<String> order = java.util.Collections.synchronizedList(new java.util.ArrayList<>());
+        Thread[] holders = new Thread[slots];
+        for (int i = 0; i < slots; i++) {
+            boolean comesBack = i == 0;
+            holders[i] = new Thread(() -> {
+                try {
+                    g.run(request("GET", "/entry/e", 0, new byte[0]), new Answer().proxy(), (q, s) -> {
+                        held.countDown();
+                        try {
+                            (comesBack ? releaseFirst : release).await();
+                        } catch (InterruptedException e) {
+                            Thread.currentThread().interrupt();
+                        }
+                    });
+                    if (comesBack) { // frees its slot and asks again at once: a newcomer at the moment a slot frees
+                        g.run(request("GET", "/entry/e", 0, new byte[0]), new Answer().proxy(),
+                                (q, s) -> order.add("newcomer"));
+                    }
+                } catch (java.io.IOException e) {
+                    throw new AssertionError(e);
+                }
+            });
+            holders[i].start();
+        }
+        held.await();
+        Thread waiter = new Thread(() -> {
+            try {
+                g.run(request("GET", "/entry/w", 0, new byte[0]), new Answer().proxy(), (q, s) -> order.add("waiter"));
+            } catch (java.io.IOException e) {
+                throw new AssertionError(e);
+            }
+        });
+        waiter.start();
+        while (waiter.getState() != Thread.State.TIMED_WAITING) {
+            Thread.sleep(5);
+        }
+        releaseFirst.countDown(); // one slot frees; the other slots stay held until the end
+        holders[0].join(10_000);
+        waiter.join(10_000);
+        release.countDown();
+        for (Thread t : holders) {
+            t.join(10_000);
+        }
+        assertEquals(java.util.List.of("waiter", "newcomer"), order);
+    }
 }

@@ -23,11 +23,11 @@ final class AdminForms {
 
     /** Hidden fields every task form carries: the token, the draft's base and (filled on submit) the draft. */
     static String hidden(String csrf, int base) {
-        return Templates.render("adminHidden", Map.of("csrf", csrf, "base", base));
+        return Html.TEMPLATES.render("adminHidden", Map.of("csrf", csrf, "base", base));
     }
 
     static String search(String csrf, int base, String query) {
-        return Templates.render("adminSearch", Map.of("csrf", csrf, "base", base, "query", query));
+        return Html.TEMPLATES.render("adminSearch", Map.of("csrf", csrf, "base", base, "query", query));
     }
 
     static String measured(String csrf, int base, AcidityTable t, MeasuredCompound m) {
@@ -39,7 +39,7 @@ final class AdminForms {
         p.put("m", m);
         p.put("pka", v);
         p.put("references", t.references());
-        return Templates.render("adminMeasured", p);
+        return Html.TEMPLATES.render("adminMeasured", p);
     }
 
     static String classValue(String csrf, int base, AcidityTable t, GroupClass g, Set<String> calibrations) {
@@ -55,11 +55,11 @@ final class AdminForms {
         p.put("now", now);
         p.put("sourceId", "source-" + (calibrations.isEmpty() ? "m" : "c"));
         p.put("references", t.references().stream().filter(r -> !calibrations.contains(r.id())).toList());
-        return Templates.render("adminClassValue", p);
+        return Html.TEMPLATES.render("adminClassValue", p);
     }
 
     static String reference(String csrf, int base) {
-        return Templates.render("adminReference", Map.of("csrf", csrf, "base", base));
+        return Html.TEMPLATES.render("adminReference", Map.of("csrf", csrf, "base", base));
     }
 
     /** Absent text (a missing source) as nothing, as the page always showed it. */
@@ -77,7 +77,7 @@ final class AdminForms {
     }
 
     static String messages(List<String> errors, List<String> notes) {
-        return Templates.render("adminMessages", Map.of("errors", errors, "notes", notes));
+        return Html.TEMPLATES.render("adminMessages", Map.of("errors", errors, "notes", notes));
     }
 
     /**
@@ -88,16 +88,8 @@ final class AdminForms {
         return StaticFiles.TABLE_ADMIN_JS;
     }
 
-    static String changesList(String id, String title, List<RecordChanges.Change> changes) {
-        StringBuilder sb = new StringBuilder("<div id=\"" + id + "\"><h3>" + Html.esc(title) + " (" + changes.size()
-                + ")</h3><ul class=\"im-changes\">");
-        for (RecordChanges.Change c : changes) {
-            sb.append("<li>").append(Html.esc(shorten(c.text()))).append("</li>");
-        }
-        return sb.append("</ul></div>").toString();
-    }
-
-    private static String shorten(String s) {
+    /** A change shortened for a list (a whole record can run to thousands of characters). */
+    static String shorten(String s) {
         return s.length() > 600 ? s.substring(0, 600) + "…" : s;
     }
 

@@ -35,6 +35,7 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
     private final AtomicReference<TableStore> store = new AtomicReference<>();
     private final AtomicReference<TableService> tables = new AtomicReference<>();
     private final AtomicReference<SeenEntries> seen = new AtomicReference<>();
+    private final CardCache cards = new CardCache(CardCache.DEFAULT_CHARS);
 
     /** Without a table store: pinned entries are annotated with the current table, and their cards say so. */
     @Activate
@@ -127,12 +128,10 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
         List<Decoration> out = new ArrayList<>();
         List<String> own = a.warnings().stream().filter(w -> !entry.notices().contains(w)).toList();
         if (!own.isEmpty()) {
-            StringBuilder sb = new StringBuilder("<ul class=\"im-entrywarn\" role=\"alert\">");
-            own.forEach(w -> sb.append("<li>").append(Html.esc(w)).append("</li>"));
-            out.add(new Decoration(0, sb.append("</ul>").toString()));
+            out.add(new Decoration(0, Html.TEMPLATES.render("entryWarnings", "warnings", own).strip()));
         }
         for (AnnotatedStructure s : a.structures()) {
-            out.add(new Decoration(s.block(), new Card(s).html()));
+            out.add(new Decoration(s.block(), card(s)));
         }
         long distinct = a.structures().stream().filter(AnnotatedStructure::ok).map(AnnotatedStructure::words).distinct()
                 .count();
@@ -142,23 +141,22 @@ public final class Annotator implements EntryDecorator, EntryAnnotation {
         return out;
     }
 
+    /** The card of one structure, drawn once per distinct content ({@link CardCache}). */
+    String card(AnnotatedStructure s) {
+        return cards.html(s, x -> new Card(x).html());
+    }
+
+    /** The rendered-card cache (tests). */
+    CardCache cards() {
+        return cards;
+    }
+
     static String separations(List<Separation> found) {
-        StringBuilder sb = new StringBuilder("<section class=\"im-separations\"><h3>pH ranges that separate the "
-                + "structures of this entry</h3>");
-        if (found.isEmpty()) {
-            sb.append("<p>No pH range between 0 and 14 leaves one structure at least 99 % neutral while another is at "
-                    + "least 99 % charged.</p>");
-        } else {
-            sb.append("<table class=\"im-sites\"><thead><tr><th>pH range</th><th>to the organic phase (≥ 99 % "
-                    + "neutral)</th><th>stays in water (≥ 99 % charged)</th></tr></thead><tbody>");
-            for (Separation s : found) {
-                sb.append("<tr><td>").append(String.format(Locale.ROOT, "%.1f–%.1f", s.from(), s.to())).append("</td><td>")
-                        .append(Html.esc(s.extracted())).append("</td><td>").append(Html.esc(s.retained()))
-                        .append("</td></tr>");
-            }
-            sb.append("</tbody></table>");
-        }
-        return sb.append("<p class=\"im-small\">From each structure's estimated charge states; partition estimates "
-                + "are for planning.</p></section>").toString();
+        return Html.TEMPLATES.render("separations", "found", found).strip();
+    }
+
+    /** A separating range as the table shows it. */
+    static String range(Separation s) {
+        return String.format(Locale.ROOT, "%.1f–%.1f", s.from(), s.to());
     }
 }

@@ -167,8 +167,16 @@ final class Depiction {
                     .depict(mol).toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             return trim(svg);
         } catch (Exception | LinkageError e) {
-            return "<p class=\"im-nodepict\">(no drawing: " + Html.esc(String.valueOf(e.getMessage())) + ")</p>";
+            return noDrawing(String.valueOf(e.getMessage()), null);
         }
+    }
+
+    /** What stands in for a drawing: why there is none, or the species' SMILES. */
+    private static String noDrawing(String reason, String smiles) {
+        java.util.Map<String, Object> p = new java.util.HashMap<>();
+        p.put("reason", reason);
+        p.put("smiles", smiles);
+        return Html.TEMPLATES.render("noDrawing", p).strip();
     }
 
     /** The SVG element alone, without the XML prolog and the generator's description. */
@@ -185,7 +193,7 @@ final class Depiction {
                     .toSvgStr(org.openscience.cdk.depict.Depiction.UNITS_PX);
             return trim(svg);
         } catch (Exception | LinkageError e) {
-            return "<code>" + Html.esc(smiles) + "</code>";
+            return noDrawing(null, smiles);
         }
     }
 }

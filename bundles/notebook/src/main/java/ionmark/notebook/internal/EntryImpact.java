@@ -65,30 +65,25 @@ final class EntryImpact {
         return states.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey).orElse(0);
     }
 
+    /** One row as the report shows it, its numbers formatted. */
+    record Shown(String id, String title, String structure, String ph, String charge, double sortValue, String neutral,
+            String pinned) {
+    }
+
     static String html(List<Row> rows, int entriesSeen, double threshold) {
-        StringBuilder sb = new StringBuilder(String.format(Locale.ROOT, "<div id=\"entries-heading-block\"><h3 "
-                + "id=\"entries-heading\">Notebook entries that change</h3><p>%d entries seen by the notebook; structures whose main charge state changes or "
-                + "whose fraction neutral moves by more than %.2f at the entry's stated pH:</p>", entriesSeen, threshold));
-        if (rows.isEmpty()) {
-            return sb.append("<p id=\"entries-none\">None.</p></div>").toString();
-        }
-        sb.append("<table class=\"im-sites\" id=\"entries\"><thead><tr><th data-sort>entry</th><th>structure</th>"
-                + "<th>pH</th><th>main charge head → draft</th><th data-sort>fraction neutral head → draft</th>"
-                + "<th>pinned</th></tr></thead><tbody>");
         rows.sort(Comparator.comparing((Row r) -> r.entry().id()));
+        List<Shown> shown = new ArrayList<>();
         for (Row r : rows) {
             int pin = r.entry().pinnedTableVersion();
-            sb.append("<tr><td><a href=\"/entry/").append(Html.esc(r.entry().id())).append("\">")
-                    .append(Html.esc(r.entry().title())).append("</a></td><td><code>").append(Html.esc(r.structure().length() > 60
-                            ? r.structure().substring(0, 60) + "…" : r.structure())).append("</code></td><td>")
-                    .append(String.format(Locale.ROOT, "%.2f", r.ph())).append("</td><td>")
-                    .append(signed(r.chargeHead())).append(" → ").append(signed(r.chargeDraft())).append("</td><td data-v=\"")
-                    .append(Math.abs(r.neutralDraft() - r.neutralHead())).append("\">")
-                    .append(String.format(Locale.ROOT, "%.3f → %.3f", r.neutralHead(), r.neutralDraft())).append("</td><td>")
-                    .append(pin > 0 ? "pinned to v" + pin + ": keeps showing v" + pin + "; unpinned it would show the draft's"
-                            : "no: shows the new version once published").append("</td></tr>");
+            shown.add(new Shown(r.entry().id(), r.entry().title(), r.structure().length() > 60
+                    ? r.structure().substring(0, 60) + "…" : r.structure(), String.format(Locale.ROOT, "%.2f", r.ph()),
+                    signed(r.chargeHead()) + " → " + signed(r.chargeDraft()), Math.abs(r.neutralDraft() - r.neutralHead()),
+                    String.format(Locale.ROOT, "%.3f → %.3f", r.neutralHead(), r.neutralDraft()), pin > 0 ? "pinned to v"
+                            + pin + ": keeps showing v" + pin + "; unpinned it would show the draft's"
+                            : "no: shows the new version once published"));
         }
-        return sb.append("</tbody></table></div>").toString();
+        return TableAdminPage.render("entryImpact", "seen", entriesSeen, "threshold", String.format(Locale.ROOT, "%.2f",
+                threshold), "rows", shown);
     }
 
     private static String signed(int z) {

@@ -77,7 +77,7 @@ public final class MeasuredImportPage implements AdminPage {
     }
 
     static String rows(MeasuredImport.Result r) {
-        return Templates.render("measuredRows", Map.of("rows", r.rows(), "ready", r.rows().stream()
+        return Html.TEMPLATES.render("measuredRows", Map.of("rows", r.rows(), "ready", r.rows().stream()
                 .filter(MeasuredImport.Row::ok).count(), "failing", r.rows().stream().filter(x -> !x.ok()).count()));
     }
 
@@ -92,41 +92,27 @@ public final class MeasuredImportPage implements AdminPage {
     }
 
     private String preview(MeasuredImport.Result r, AcidityTable current) {
-        StringBuilder sb = new StringBuilder("<h2>Preview</h2>").append(rows(r));
-        if (!r.ok()) {
-            return sb.append("<p class=\"im-error\" role=\"alert\">Correct the rows marked ✖ and preview again; "
-                    + "nothing goes into the draft until every row is ready.</p>").toString();
-        }
-        List<MeasuredImport.Move> moves = imports.analogMoves(current, r.draft(), List.of());
-        sb.append("<table class=\"im-sites\" id=\"import-moves\"><caption>Predictions the new values move through "
-                + "their analogs (reference set)</caption><thead><tr><th>compound</th><th>site</th><th>head</th>"
-                + "<th>draft</th><th>moved by</th></tr></thead><tbody>");
-        for (MeasuredImport.Move m : moves) {
-            sb.append(String.format(Locale.ROOT, "<tr><td>%s</td><td>%s</td><td>%.2f</td><td>%.2f</td><td>%s</td></tr>",
-                    Html.esc(m.name()), Html.esc(m.site()), m.head(), m.draft(), Html.esc(String.join(", ", m.movedBy()))));
-        }
-        return sb.append("</tbody></table>").append(moves.isEmpty() ? "<p>No reference compound moves.</p>" : "")
-                .toString();
+        return TableAdminPage.render("measuredPreview", "rows", rows(r), "ok", r.ok(), "moves", r.ok()
+                ? imports.analogMoves(current, r.draft(), List.of()) : List.of());
     }
 
     private String publish(MeasuredImport.Result r, VersionInfo head, Map<String, String> params, HostUser user) {
         try {
             VersionInfo v = store.publish(tables.toJson(r.draft()), Integer.parseInt(params.getOrDefault("base", "-1")),
                     user.name(), params.getOrDefault("comment", ""));
-            return "<p class=\"im-ok\" role=\"status\">Published v" + v.number() + " with " + r.rows().size()
-                    + " measured compounds. Every notebook uses it from now on.</p>";
+            return TableAdminPage.notice("ok", true, null, "Published v" + v.number() + " with " + r.rows().size()
+                    + " measured compounds. Every notebook uses it from now on.", List.of());
         } catch (StoreConflictException e) {
-            return "<p class=\"im-error\" role=\"alert\">" + Html.esc(e.getMessage()) + "</p>";
+            return TableAdminPage.notice("error", true, null, e.getMessage(), List.of());
         } catch (StoreRejectedException e) {
-            return "<p class=\"im-error\" role=\"alert\">Not published:</p><ul>" + String.join("", e.problems().stream()
-                    .map(p -> "<li>" + Html.esc(p) + "</li>").toList()) + "</ul>";
+            return TableAdminPage.notice("error", true, null, "Not published:", e.problems());
         } catch (NumberFormatException e) {
-            return "<p class=\"im-error\">The base version is missing.</p>";
+            return TableAdminPage.notice("error", false, null, "The base version is missing.", List.of());
         }
     }
 
     private static String form(VersionInfo head, String text, MeasuredImport.Format format, String csrf) {
-        return Templates.render("measuredForm", Map.of("head", head.number(), "text", text, "sdf",
+        return Html.TEMPLATES.render("measuredForm", Map.of("head", head.number(), "text", text, "sdf",
                 format == MeasuredImport.Format.SDF, "csrf", csrf));
     }
 }

@@ -1,5 +1,6 @@
 package ionmark.notebook.internal;
 
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
@@ -8,52 +9,68 @@ import ionmark.speciation.api.Site;
 
 /**
  * Each site's protonated fraction against pH 0–14 as SVG, with axis titles, a legend naming every curve by
- * its row in the site table, and the stated pH (both ends of a stated range) marked.
+ * its row in the site table, and the stated pH (both ends of a stated range) marked. The numbers are worked out
+ * here; {@code plot.jte} writes the SVG.
  */
 final class Plot {
     static final int W = 520;
     static final int H = 170;
-    private static final int LEFT = 52;
-    private static final int TOP = 10;
-    private static final int PW = W - LEFT - 16;
+    static final int LEFT = 52;
+    static final int TOP = 10;
+    static final int PW = W - LEFT - 16;
     private static final String[] DASH = {"", "7 4", "2 3", "9 3 2 3", "1 2"};
+
+    /** What {@code plot.jte} draws, every coordinate already formatted. */
+    record View(int total, String bandX, String bandWidth, List<Mark> marks, List<Tick> ticks, List<Tick> fractions,
+            String phTitleX, String fractionTitleY, List<Line> lines) {
+    }
+
+    /** A stated pH: the red line and its label. */
+    record Mark(String x, String labelX, String label) {
+    }
+
+    /** An axis tick: where and its text. */
+    record Tick(String at, String text) {
+    }
+
+    /** One site's curve and its legend entry; {@code dash} is null for a solid line. */
+    record Line(String d, String stroke, String dash, String legend, int legendX, int legendY) {
+    }
 
     private Plot() {
     }
 
     static String svg(Curve c, List<Site> sites, Double low, Double high) {
+        return Html.TEMPLATES.render("plot", "plot", view(c, sites, low, high)).strip();
+    }
+
+    static View view(Curve c, List<Site> sites, Double low, Double high) {
         int legendRows = (sites.size() + 1) / 2;
         int total = TOP + H + 44 + 18 * legendRows;
-        StringBuilder sb = new StringBuilder("<svg class=\"im-plot\" xmlns=\"http://www.w3.org/2000/svg\" viewBox=\"0 0 "
-                + W + " " + total + "\" width=\"" + W + "\" height=\"" + total + "\" role=\"img\" aria-label=\"fraction "
-                + "protonated at each site against pH\" font-family=\"DejaVu Sans, sans-serif\">");
+        String bandX = null;
+        String bandWidth = null;
+        List<Mark> marks = new ArrayList<>();
         if (low != null) {
             double x1 = x(low);
             double x2 = x(high == null ? low : high);
             if (x2 - x1 > 1) {
-                sb.append(String.format(Locale.ROOT, "<rect x=\"%.1f\" y=\"%d\" width=\"%.1f\" height=\"%d\" "
-                        + "fill=\"#e8edf5\"/>", x1, TOP, x2 - x1, H));
+                bandX = f1(x1);
+                bandWidth = f1(x2 - x1);
             }
-            mark(sb, low);
+            marks.add(mark(low));
             if (high != null && high > low) {
-                mark(sb, high);
+                marks.add(mark(high));
             }
         }
-        sb.append("<rect x=\"" + LEFT + "\" y=\"" + TOP + "\" width=\"" + PW + "\" height=\"" + H
-                + "\" fill=\"none\" stroke=\"#5b6475\"/>");
+        List<Tick> ticks = new ArrayList<>();
         for (int ph = 0; ph <= 14; ph += 2) {
-            sb.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" x2=\"%.1f\" y1=\"%d\" y2=\"%d\" stroke=\"#5b6475\"/>"
-                    + "<text x=\"%.1f\" y=\"%d\" font-size=\"11\" text-anchor=\"middle\">%d</text>", x(ph), x(ph), TOP + H,
-                    TOP + H + 4, x(ph), TOP + H + 16, ph));
+            ticks.add(new Tick(f1(x(ph)), String.valueOf(ph)));
         }
-        for (double f : new double[] {0, 0.5, 1}) {
-            sb.append(String.format(Locale.ROOT, "<text x=\"%d\" y=\"%.1f\" font-size=\"11\" text-anchor=\"end\">%s</text>",
-                    LEFT - 4, y(f) + 4, f == 0.5 ? "0.5" : String.valueOf((int) f)));
+        List<Tick> fractions = new ArrayList<>();
+        for (String f : new String[] {"0", "0.5", "1"}) {
+            fractions.add(new Tick(f1(y(Double.parseDouble(f)) + 4), f));
         }
-        sb.append(String.format(Locale.ROOT, "<text x=\"%.1f\" y=\"%d\" font-size=\"12\" text-anchor=\"middle\">pH</text>",
-                LEFT + PW / 2.0, TOP + H + 32));
-        sb.append(String.format(Locale.ROOT, "<text transform=\"translate(14 %.1f) rotate(-90)\" font-size=\"12\" "
-                + "text-anchor=\"middle\">fraction protonated</text>", TOP + H / 2.0));
+        List<Line> lines = new ArrayList<>();
         for (int k = 0; k < sites.size(); k++) {
             Site s = sites.get(k);
             double[] f = c.siteProtonated().get(s.atom());
@@ -62,21 +79,13 @@ final class Plot {
             }
             StringBuilder d = new StringBuilder();
             for (int i = 0; i < f.length; i++) {
-                d.append(i == 0 ? "M" : "L").append(String.format(Locale.ROOT, "%.1f %.1f", x(c.ph()[i]), y(f[i])));
+                d.append(i == 0 ? "M" : "L").append(f1(x(c.ph()[i]))).append(' ').append(f1(y(f[i])));
             }
             String dash = DASH[k % DASH.length];
-            String stroke = s.type().equals("acid") ? "#6a3d9a" : "#1b7837";
-            sb.append("<path d=\"").append(d).append("\" fill=\"none\" stroke=\"").append(stroke)
-                    .append("\" stroke-width=\"2\"").append(dash.isEmpty() ? "" : " stroke-dasharray=\"" + dash + "\"")
-                    .append("><title>").append(legend(k, s)).append("</title></path>");
-            int lx = LEFT + (k % 2) * (PW / 2);
-            int ly = TOP + H + 48 + 18 * (k / 2);
-            sb.append(String.format(Locale.ROOT, "<line x1=\"%d\" x2=\"%d\" y1=\"%d\" y2=\"%d\" stroke=\"%s\" "
-                    + "stroke-width=\"2\"%s/><text x=\"%d\" y=\"%d\" font-size=\"11\">%s</text>", lx, lx + 28, ly - 4,
-                    ly - 4, stroke, dash.isEmpty() ? "" : " stroke-dasharray=\"" + dash + "\"", lx + 34, ly,
-                    Html.esc(legend(k, s))));
+            lines.add(new Line(d.toString(), s.type().equals("acid") ? "#6a3d9a" : "#1b7837", dash.isEmpty() ? null : dash,
+                    legend(k, s), LEFT + (k % 2) * (PW / 2), TOP + H + 48 + 18 * (k / 2)));
         }
-        return sb.append("</svg>").toString();
+        return new View(total, bandX, bandWidth, marks, ticks, fractions, f1(LEFT + PW / 2.0), f1(TOP + H / 2.0), lines);
     }
 
     static String legend(int row, Site s) {
@@ -84,11 +93,13 @@ final class Plot {
                 + s.type() + (s.permanent() ? " (fixed)" : String.format(Locale.ROOT, ", site pKa %.2f", s.pka()));
     }
 
-    private static void mark(StringBuilder sb, double ph) {
+    private static Mark mark(double ph) {
         double x = x(ph);
-        sb.append(String.format(Locale.ROOT, "<line x1=\"%.1f\" x2=\"%.1f\" y1=\"%d\" y2=\"%d\" stroke=\"#9b1c1c\" "
-                + "stroke-width=\"2\"/><text x=\"%.1f\" y=\"%d\" font-size=\"11\" fill=\"#9b1c1c\">pH %s</text>", x, x,
-                TOP, TOP + H, Math.min(x + 3, LEFT + PW - 40), TOP + 12, StatedConditions.format(ph)));
+        return new Mark(f1(x), f1(Math.min(x + 3, LEFT + PW - 40)), "pH " + StatedConditions.format(ph));
+    }
+
+    private static String f1(double v) {
+        return String.format(Locale.ROOT, "%.1f", v);
     }
 
     private static double x(double ph) {

@@ -42,7 +42,7 @@ final class QuickCheckForm {
         List<Field> fields = List.of(new Field("ph", "pH", ph, bad.get("ph")),
                 new Field("temp", "°C (25 if empty)", t, bad.get("temp")),
                 new Field("ionic", "ionic strength, M (0 if empty)", is, bad.get("ionic")));
-        StringBuilder sb = new StringBuilder(Templates.render("quickCheckForm", Map.of("structure", structure, "fields",
+        StringBuilder sb = new StringBuilder(Html.TEMPLATES.render("quickCheckForm", Map.of("structure", structure, "fields",
                 fields, "askForStructure", structure.isBlank() && params.containsKey("structure"))));
         if (structure.isBlank() || !bad.isEmpty()) {
             return sb.toString();
@@ -53,7 +53,7 @@ final class QuickCheckForm {
         List<Block> blocks = List.of(new Block(Block.Kind.TEXT, String.join(" ", lines), null, 0),
                 new Block(Block.Kind.STRUCTURE, structure, p, 0));
         for (var s : annotator.annotate(new Entry("quick-check", "Quick check", blocks, 0)).structures()) {
-            sb.append(new Card(s).html());
+            sb.append(annotator.card(s));
         }
         return sb.toString();
     }

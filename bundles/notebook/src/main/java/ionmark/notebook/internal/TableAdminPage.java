@@ -102,13 +102,8 @@ public final class TableAdminPage implements AdminPage {
                     base = head.number();
                     store.audit(user.name(), "rebase", head.number(), r.conflicts().isEmpty() ? "ok" : "conflicts",
                             r.applied().size() + " changes carried over, " + r.conflicts().size() + " collided");
-                    sb.append("<div id=\"rebased\"><p class=\"im-ok\" role=\"status\">Your draft now rests on v")
-                            .append(head.number()).append(".</p>")
-                            .append(AdminForms.changesList("rebase-applied", "Your changes carried over", r.applied()))
-                            .append(r.conflicts().isEmpty() ? "" : AdminForms.changesList("rebase-conflicts",
-                                    "Your changes that collided with the new head (the head's value was kept)",
-                                    r.conflicts()))
-                            .append("</div>");
+                    sb.append(render("adminRebased", "head", head.number(), "applied", r.applied(), "conflicts",
+                            r.conflicts()));
                 }
                 case "rollback" -> {
                     sb.append(rollback(params, user));
@@ -118,14 +113,11 @@ public final class TableAdminPage implements AdminPage {
             }
         } else if (action.equals("export")) {
             store.audit(user.name(), "export", head.number(), "ok", "head shown for download");
-            return "<p>Table v" + head.number() + " as JSON (select all and save, or use <code>./ionmark table export</code>):"
-                    + "</p><pre class=\"im-export\">" + Html.esc(store.content(head.number()).orElse("")) + "</pre>";
+            return render("adminExport", "version", head.number(), "json", store.content(head.number()).orElse(""));
         } else if (action.equals("diff")) {
             int from = parse(params.get("from"), 1);
             int to = parse(params.get("to"), head.number());
-            sb.append("<h2>Changes from v").append(from).append(" to v").append(to).append("</h2><ul class=\"im-diff\">");
-            store.diff(from, to).forEach(l -> sb.append("<li>").append(Html.esc(l)).append("</li>"));
-            sb.append("</ul>");
+            sb.append(render("adminDiff", "from", from, "to", to, "lines", store.diff(from, to)));
         } else if (action.equals("audit")) {
             sb.append(AdminReports.audit(store.audit(200)));
         }
@@ -144,8 +136,8 @@ public final class TableAdminPage implements AdminPage {
             sb.append(AdminForms.classValue(csrf, base, table, task.group, DraftEdits.calibrations(table)));
             sb.append(AdminForms.reference(csrf, base));
         } else {
-            sb.append("<p class=\"im-error\">The draft has errors: fix them in the raw JSON below, then the forms "
-                    + "come back.</p>");
+            sb.append(notice("error", false, null, "The draft has errors: fix them in the raw JSON below, then the forms "
+                    + "come back.", List.of()));
         }
         sb.append(editor(head, base, draft, csrf)).append(history(head, csrf)).append(AdminForms.script());
         return sb.toString();
@@ -235,9 +227,7 @@ public final class TableAdminPage implements AdminPage {
             return "";
         }
         List<RecordChanges.Change> changes = RecordChanges.between(baseText, draft);
-        return "<details id=\"draft-changes\"" + (changes.isEmpty() ? "" : " open") + "><summary>Draft based on v" + base
-                + ": " + changes.size() + " change(s) not yet published</summary>"
-                + AdminForms.changesList("draft-change-list", "Changes in the draft", changes) + "</details>";
+        return render("adminDraftChanges", "base", base, "changes", changes);
     }
 
     /** A refused publish: the draft stays, with both sides' changes and the offer to rebase. */
@@ -246,13 +236,7 @@ public final class TableAdminPage implements AdminPage {
         List<RecordChanges.Change> theirs = RecordChanges.between(store.content(base).orElseThrow(),
                 store.content(head.number()).orElseThrow());
         List<RecordChanges.Change> mine = RecordChanges.between(store.content(base).orElseThrow(), draft);
-        return "<div id=\"rebase-offer\"><p>Your draft is kept. v" + head.number() + " was published by "
-                + Html.esc(head.author()) + " (" + Html.esc(head.comment()) + ") since your draft's base v" + base + ".</p>"
-                + AdminForms.changesList("their-changes", "Their changes since v" + base, theirs)
-                + AdminForms.changesList("my-changes", "Your changes", mine)
-                + "<form method=\"post\" action=\"/admin/table\" class=\"im-task\">" + AdminForms.hidden(csrf, base)
-                + "<button name=\"action\" value=\"rebase\" id=\"rebase\">Rebase my draft on v" + head.number()
-                + "</button></form></div>";
+        return render("adminConflict", "head", head, "base", base, "csrf", csrf, "theirs", theirs, "mine", mine);
     }
 
     private static int parse(String s, int otherwise) {
@@ -267,15 +251,13 @@ public final class TableAdminPage implements AdminPage {
         try {
             VersionInfo v = store.publish(draft, Integer.parseInt(params.getOrDefault("base", "-1")), user.name(),
                     params.getOrDefault("comment", ""));
-            return "<p class=\"im-ok\" role=\"status\">Published v" + v.number() + ". Every notebook uses it from now on.</p>";
+            return notice("ok", true, null, "Published v" + v.number() + ". Every notebook uses it from now on.", List.of());
         } catch (StoreConflictException e) {
-            return "<p class=\"im-error\" role=\"alert\" id=\"conflict\">Not published: " + Html.esc(e.getMessage())
-                    + "</p>";
+            return notice("error", true, "conflict", "Not published: " + e.getMessage(), List.of());
         } catch (StoreRejectedException e) {
-            return "<p class=\"im-error\" role=\"alert\">Not published:</p><ul>" + String.join("", e.problems().stream()
-                    .map(p -> "<li>" + Html.esc(p) + "</li>").toList()) + "</ul>";
+            return notice("error", true, null, "Not published:", e.problems());
         } catch (NumberFormatException e) {
-            return "<p class=\"im-error\">The base version is missing.</p>";
+            return notice("error", false, null, "The base version is missing.", List.of());
         }
     }
 
@@ -283,18 +265,18 @@ public final class TableAdminPage implements AdminPage {
         try {
             VersionInfo v = store.rollback(Integer.parseInt(params.getOrDefault("to", "-1")),
                     Integer.parseInt(params.getOrDefault("base", "-1")), user.name(), params.getOrDefault("comment", ""));
-            return "<p class=\"im-ok\" role=\"status\">Published v" + v.number() + " with the content of v"
-                    + Html.esc(params.get("to")) + ".</p>";
+            return notice("ok", true, null, "Published v" + v.number() + " with the content of v" + params.get("to") + ".",
+                    List.of());
         } catch (StoreConflictException | StoreRejectedException e) {
-            return "<p class=\"im-error\" role=\"alert\">" + Html.esc(e.getMessage()) + "</p>";
+            return notice("error", true, null, e.getMessage(), List.of());
         } catch (NumberFormatException e) {
-            return "<p class=\"im-error\">Version numbers are missing.</p>";
+            return notice("error", false, null, "Version numbers are missing.", List.of());
         }
     }
 
     private String check(VersionInfo head, String draft, String thresholdText) {
         ValidationReport r = tables.validate(draft);
-        StringBuilder sb = new StringBuilder("<h2>Check of the draft</h2>").append(problems(r, draft));
+        StringBuilder sb = new StringBuilder(render("adminCheckTitle")).append(problems(r, draft));
         if (!r.ok()) {
             return sb.toString();
         }
@@ -302,9 +284,8 @@ public final class TableAdminPage implements AdminPage {
         AcidityTable next = sealed(draft).orElseThrow();
         List<MeasuredCompound> added = next.measured().stream().filter(m -> !current.measured().contains(m)).toList();
         if (!added.isEmpty()) {
-            sb.append("<p id=\"measured-added\">Measured compounds added or changed: ").append(Html.esc(String.join(", ",
-                    added.stream().map(MeasuredCompound::name).toList()))).append(". The reference compounds they "
-                    + "move as analogs say so in the last columns.</p>");
+            sb.append(render("adminMeasuredAdded", "names", String.join(", ", added.stream().map(MeasuredCompound::name)
+                    .toList())));
         }
         sb.append(AdminReports.regression(regression.compare(current, next), next, speciation, added));
         double threshold = DraftEdits.number(thresholdText.isBlank() ? String.valueOf(EntryImpact.DEFAULT_THRESHOLD)
@@ -316,79 +297,48 @@ public final class TableAdminPage implements AdminPage {
         return sb.toString();
     }
 
+    /** A validation problem as the page lists it: error or warning, the draft line it points at (0: none). */
+    record Shown(boolean error, int line, String path, String message) {
+    }
+
     /** Problems with their JSON path and the line of the draft they point at (a link that selects it). */
     static String problems(ValidationReport r, String draft) {
         JsonLines lines = JsonLines.of(draft == null ? "" : draft);
-        StringBuilder sb = new StringBuilder("<div id=\"problems\">");
-        sb.append("<p>").append(r.errors().size()).append(" errors, ").append(r.warnings().size()).append(" warnings</p><ul>");
-        List<Problem> warnings = r.warnings();
-        for (Problem p : r.errors()) {
-            problem(sb, p, lines);
-        }
-        boolean fold = warnings.size() > 10; // a long list of warnings must not hide the errors and the report
-        if (fold) {
-            sb.append("</ul><details><summary>").append(warnings.size()).append(" warnings</summary><ul>");
-        }
-        for (Problem p : warnings) {
-            problem(sb, p, lines);
-        }
-        if (fold) {
-            sb.append("</ul></details><ul>");
-        }
-        return sb.append("</ul></div>").toString();
+        return render("adminProblems", "errors", r.errors().size(), "warnings", r.warnings().size(), "errorList",
+                shown(r.errors(), lines), "warningList", shown(r.warnings(), lines));
     }
 
-    private static void problem(StringBuilder sb, Problem p, JsonLines lines) {
-        int line = lines.lineOf(p.path(), p.message());
-        sb.append("<li class=\"").append(p.severity() == Problem.Severity.ERROR ? "im-error" : "im-warn").append("\">")
-                .append(p.severity() == Problem.Severity.ERROR ? "✖ " : "△ ");
-        if (line > 0) {
-            sb.append("<a href=\"#draft\" data-line=\"").append(line).append("\">line ").append(line).append("</a> ");
-        }
-        sb.append("<code>").append(Html.esc(p.path())).append("</code> ").append(Html.esc(p.message())).append("</li>");
+    private static List<Shown> shown(List<Problem> problems, JsonLines lines) {
+        return problems.stream().map(p -> new Shown(p.severity() == Problem.Severity.ERROR, lines.lineOf(p.path(),
+                p.message()), p.path(), p.message())).toList();
     }
 
     private static String editor(VersionInfo head, int base, String draft, String csrf) {
-        String t = Html.esc(csrf);
-        return "<h2>Check and publish</h2><form method=\"post\" action=\"/admin/table\" id=\"publish-form\">"
-                + "<input type=\"hidden\" name=\"token\" value=\"" + t + "\"><input type=\"hidden\" name=\"base\" value=\""
-                + base + "\">"
-                + "<p><label>Why (required to publish) <input name=\"comment\" id=\"comment\" size=\"70\"></label> "
-                + "<label>Report entries whose fraction neutral moves by more than <input name=\"threshold\" "
-                + "id=\"threshold\" size=\"4\" value=\"" + EntryImpact.DEFAULT_THRESHOLD + "\"></label></p>"
-                + "<p><button name=\"action\" value=\"check\" id=\"check\">Validate and compare</button> "
-                + "<button name=\"action\" value=\"publish\" id=\"publish\">Publish</button> (the head is v" + head.number()
-                + ", the draft is based on v" + base + ")</p>"
-                + "<details id=\"raw\"><summary>Raw JSON (for power users)</summary>"
-                + "<div class=\"im-raw\"><div class=\"im-gutter\" id=\"gutter\"></div>"
-                + "<textarea id=\"draft\" name=\"draft\" rows=\"23\" cols=\"140\" spellcheck=\"false\" wrap=\"off\">"
-                + Html.esc(draft) + "</textarea></div><div id=\"live\" aria-live=\"polite\"></div>"
-                + "<p><label>Or load a table file <input type=\"file\" id=\"upload\" accept=\".json,application/json\">"
-                + "</label> <a href=\"/admin/table?action=export\">Export the head</a></p></details></form>";
+        return render("adminEditor", "head", head.number(), "base", base, "draft", draft, "csrf", csrf, "threshold",
+                EntryImpact.DEFAULT_THRESHOLD);
     }
 
     private String history(VersionInfo head, String csrf) {
-        StringBuilder sb = new StringBuilder("<h2>History</h2><p><a href=\"/admin/table?action=audit\" id=\"audit-link\">"
-                + "Audit trail: who did what, when, why</a></p><table class=\"im-sites\" id=\"history\"><thead><tr>"
-                + "<th>version</th><th>author</th><th>time</th><th>why</th><th></th></tr></thead><tbody>");
-        for (VersionInfo v : store.history()) {
-            sb.append("<tr><td>v").append(v.number()).append(" <code>").append(v.hash(), 0, 8).append("</code></td><td>")
-                    .append(Html.esc(v.author())).append("</td><td><time datetime=\"").append(v.time()).append("\">")
-                    .append(AdminReports.READABLE.format(v.time())).append("</time></td><td>")
-                    .append(Html.esc(v.comment())).append("</td><td>");
-            if (v.number() > 1) {
-                sb.append("<a href=\"/admin/table?action=diff&amp;from=").append(v.number() - 1).append("&amp;to=")
-                        .append(v.number()).append("\">changes</a> ");
-            }
-            if (v.number() != head.number()) {
-                sb.append("<form method=\"post\" action=\"/admin/table\" class=\"im-inline\"><input type=\"hidden\" "
-                        + "name=\"token\" value=\"").append(Html.esc(csrf)).append("\"><input type=\"hidden\" name=\"to\" "
-                        + "value=\"").append(v.number()).append("\"><input type=\"hidden\" name=\"base\" value=\"")
-                        .append(head.number()).append("\"><input name=\"comment\" placeholder=\"why\" required> "
-                        + "<button name=\"action\" value=\"rollback\">Roll back to this</button></form>");
-            }
-            sb.append("</td></tr>");
+        return render("adminHistory", "versions", store.history(), "head", head.number(), "csrf", csrf);
+    }
+
+    /** One message: kind "ok" or "error"; {@code alert} gives it its role (status or alert); id may be null. */
+    static String notice(String kind, boolean alert, String id, String text, List<String> details) {
+        Map<String, Object> p = new java.util.HashMap<>();
+        p.put("kind", kind);
+        p.put("alert", alert);
+        p.put("id", id);
+        p.put("text", text);
+        p.put("details", details);
+        return Html.TEMPLATES.render("adminNotice", p).strip();
+    }
+
+    /** Renders a template with name-value pairs. */
+    static String render(String name, Object... pairs) {
+        Map<String, Object> p = new java.util.HashMap<>();
+        for (int i = 0; i < pairs.length; i += 2) {
+            p.put((String) pairs[i], pairs[i + 1]);
         }
-        return sb.append("</tbody></table>").toString();
+        return Html.TEMPLATES.render(name, p).strip();
     }
 }

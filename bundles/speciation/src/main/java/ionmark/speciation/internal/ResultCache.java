@@ -2,6 +2,9 @@ package ionmark.speciation.internal;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.concurrent.atomic.LongAdder;
 
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
@@ -12,30 +15,38 @@ import ionmark.speciation.api.Curve;
  * quick check answers from here. The structure part is {@link ionmark.speciation.internal.structure.StructureKey}
  * (canonical structure with the input's numbering); the table part is the table's number and content hash, so a
  * new table version never meets an old result and old results simply age out. Least recently used entries go
- * first once {@code capacity} is reached. Failures (unreadable input, over budget, busy) are not kept.
+ * first once {@code capacity} is reached. Failures (unreadable input, over budget, busy) are not kept. A hit takes
+ * no lock (under fifty concurrent quick checks the synchronized map's monitor was a queue of its own); storing and
+ * evicting, which follow an analysis that took milliseconds, are serialised.
  */
 final class ResultCache {
     record Key(String structure, Conditions conditions, String table, String what) {
     }
 
     private final int capacity;
-    private final Map<Key, Object> map;
-    private long hits;
-    private long misses;
+    /** Read without a lock: a hit only stamps its entry; storing and the eviction scan run under {@link #storing}. */
+    private final ConcurrentHashMap<Key, Held> map = new ConcurrentHashMap<>();
+    private final AtomicLong clock = new AtomicLong();
+    private final LongAdder hits = new LongAdder();
+    private final LongAdder misses = new LongAdder();
+    private final Object storing = new Object();
+
+    /** A kept result and when it was last used (a tick of {@link #clock}). */
+    private static final class Held {
+        final Object value;
+        volatile long used;
+
+        Held(Object value, long used) {
+            this.value = value;
+            this.used = used;
+        }
+    }
 
     ResultCache(int capacity) {
         if (capacity < 0) {
             throw new IllegalArgumentException("cache size must be 0 or more, not " + capacity);
         }
         this.capacity = capacity;
-        this.map = new LinkedHashMap<>(16, 0.75f, true) {
-            private static final long serialVersionUID = 1L;
-
-            @Override
-            protected boolean removeEldestEntry(Map.Entry<Key, Object> e) {
-                return super.size() > ResultCache.this.capacity;
-            }
-        };
     }
 
     /** The cached analysis, carrying this call's input text; null on a miss. */
@@ -62,35 +73,51 @@ final class ResultCache {
         }
     }
 
-    synchronized long hits() {
-        return hits;
+    long hits() {
+        return hits.sum();
     }
 
-    synchronized long misses() {
-        return misses;
+    long misses() {
+        return misses.sum();
     }
 
-    synchronized int size() {
+    int size() {
         return map.size();
     }
 
-    private synchronized Object get(Key k) {
-        Object v = k == null || capacity == 0 ? null : map.get(k);
-        if (v == null) {
-            misses++;
-        } else {
-            hits++;
+    private Object get(Key k) {
+        Held h = k == null || capacity == 0 ? null : map.get(k);
+        if (h == null) {
+            misses.increment();
+            return null;
         }
-        return v;
+        h.used = clock.incrementAndGet();
+        hits.increment();
+        return h.value;
     }
 
-    private synchronized void store(Key k, Object v) {
-        if (capacity > 0) {
-            map.put(k, v);
+    private void store(Key k, Object v) {
+        if (capacity == 0) {
+            return;
+        }
+        synchronized (storing) {
+            map.put(k, new Held(v, clock.incrementAndGet()));
+            while (map.size() > capacity) {
+                Map.Entry<Key, Held> eldest = null;
+                for (Map.Entry<Key, Held> e : map.entrySet()) {
+                    if (eldest == null || e.getValue().used < eldest.getValue().used) {
+                        eldest = e;
+                    }
+                }
+                if (eldest == null) {
+                    break;
+                }
+                map.remove(eldest.getKey());
+            }
         }
     }
 
-    private static Analysis withInput(Analysis a, String input) {
+    static Analysis withInput(Analysis a, String input) {
         if (a.input().equals(input)) {
             return a;
         }
@@ -100,7 +127,7 @@ final class ResultCache {
                 a.tableVersion(), a.error());
     }
 
-    private static Curve copy(Curve c) {
+    static Curve copy(Curve c) {
         Map<Integer, double[]> sites = new LinkedHashMap<>();
         c.siteProtonated().forEach((k, v) -> sites.put(k, v.clone()));
         Map<Integer, double[]> states = new java.util.TreeMap<>();

@@ -18,6 +18,7 @@ import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureKey;
 import ionmark.speciation.internal.work.AnalysisPool;
+import ionmark.speciation.internal.work.SingleFlight;
 import ionmark.speciation.internal.work.Budget;
 import ionmark.speciation.internal.work.OverBudgetException;
 import ionmark.speciation.spi.ModelEngine;
@@ -44,6 +45,9 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
     private final AnalysisPool pool;
     private final boolean ownPool;
     private final ResultCache cache;
+    /** Identical requests under way share one analysis or curve (see {@link SingleFlight}). */
+    private final SingleFlight<ResultCache.Key, Analysis> analysing = new SingleFlight<>();
+    private final SingleFlight<ResultCache.Key, Curve> curving = new SingleFlight<>();
 
     @Activate
     public SpeciationService(@Reference TableService tables, SpeciationConfiguration config) {
@@ -137,17 +141,18 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
             return hit;
         }
         e.analogIndex(); // table-wide work, once per table: outside any one structure's budget
-        AnalysisPool.Outcome<Analysis> o = pool.run(() -> {
-            Analysis a = e.analyse(structure, c, brief);
-            // the engine turns any exception into a failed analysis; say why when the budget ended it
-            return a.ok() || !Budget.exhausted() ? a : Analysis.failed(structure, c, version,
-                    OverBudgetException.message(pool.budgetMillis()));
+        Analysis a = analysing.run(key, () -> {
+            AnalysisPool.Outcome<Analysis> o = pool.run(() -> {
+                Analysis x = e.analyse(structure, c, brief);
+                // the engine turns any exception into a failed analysis; say why when the budget ended it
+                return x.ok() || !Budget.exhausted() ? x : Analysis.failed(structure, c, version,
+                        OverBudgetException.message(pool.budgetMillis()));
+            });
+            Analysis x = o.ok() ? o.value() : Analysis.failed(structure, c, version, o.refusal());
+            cache.put(key, x);
+            return x;
         });
-        if (!o.ok()) {
-            return Analysis.failed(structure, c, version, o.refusal());
-        }
-        cache.put(key, o.value());
-        return o.value();
+        return ResultCache.withInput(a, structure);
     }
 
     private ResultCache.Key key(Engine e, String structure, Conditions c, String what) {
@@ -180,22 +185,24 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
             return hit;
         }
         e.analogIndex();
-        AnalysisPool.Outcome<Object> o = pool.run(() -> {
-            try {
-                return e.curve(structure, c, from, to, step);
-            } catch (StructureException ex) {
-                return new IllegalArgumentException(ex.getMessage(), ex);
+        Curve curve = curving.run(key, () -> {
+            AnalysisPool.Outcome<Object> o = pool.run(() -> {
+                try {
+                    return e.curve(structure, c, from, to, step);
+                } catch (StructureException ex) {
+                    return new IllegalArgumentException(ex.getMessage(), ex);
+                }
+            });
+            if (!o.ok()) {
+                throw new IllegalArgumentException(o.refusal());
             }
+            if (o.value() instanceof IllegalArgumentException ex) {
+                throw ex;
+            }
+            cache.put(key, (Curve) o.value());
+            return (Curve) o.value();
         });
-        if (!o.ok()) {
-            throw new IllegalArgumentException(o.refusal());
-        }
-        if (o.value() instanceof IllegalArgumentException ex) {
-            throw ex;
-        }
-        Curve curve = (Curve) o.value();
-        cache.put(key, curve);
-        return curve;
+        return ResultCache.copy(curve);
     }
 
     @Override
