@@ -137,8 +137,8 @@ final class AdminReports {
         for (Site s : sites) {
             sb.append("<tr><td>").append(Html.esc(s.element())).append(s.atom() + 1).append("</td><td>")
                     .append(Html.esc(s.group())).append(" — ").append(Html.esc(s.groupName())).append("</td><td>")
-                    .append(Html.esc(s.type())).append("</td><td>").append(AdminForms.num(s.pka())).append(" ± ")
-                    .append(AdminForms.num(s.sd())).append("</td><td>").append(Html.esc(s.basis())).append("</td><td>")
+                    .append(Html.esc(s.type().label())).append("</td><td>").append(AdminForms.num(s.pka())).append(" ± ")
+                    .append(AdminForms.num(s.sd())).append("</td><td>").append(Html.esc(s.basis().label())).append("</td><td>")
                     .append(Html.esc(String.join("; ", s.derivation().stream().map(Term::label).toList())))
                     .append("</td></tr>");
         }

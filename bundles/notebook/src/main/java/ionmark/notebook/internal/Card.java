@@ -10,6 +10,7 @@ import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
+import ionmark.acidity.api.SiteType;
 
 /**
  * The annotation card of one structure, rendered to HTML and SVG for the web host from the same
@@ -33,7 +34,9 @@ record Card(AnnotatedStructure s) {
             // a refusal for time or load already says "not annotated"
             String shown = error != null && error.startsWith("not annotated") ? "N" + error.substring(1)
                     : "Cannot annotate: " + error;
-            sb.append("<p class=\"im-error\" role=\"alert\">").append(Html.esc(shown)).append("</p></section>");
+            sb.append("<p class=\"im-error\" role=\"alert\">").append(Html.esc(shown)).append("</p>")
+                    .append(s.error() == null && !s.analyses().isEmpty() ? ErrorMarker.html(s.analyses().get(0)) : "")
+                    .append("</section>");
             return sb.toString();
         }
         Analysis first = s.analyses().get(0);
@@ -129,7 +132,7 @@ record Card(AnnotatedStructure s) {
         List<Site> sites = a.sites();
         for (int row = 0; row < sites.size(); row++) {
             Site s = sites.get(row);
-            boolean acid = s.type().equals("acid");
+            boolean acid = s.type() == SiteType.ACID;
             // data-label names each cell where a narrow page stacks the row (see the host's style sheet)
             sb.append("<tr><td data-label=\"#\">").append(row + 1).append("</td><td data-label=\"atom\">")
                     .append(Html.esc(s.element())).append(AtomNumbers.shown(s.atom()))
@@ -145,7 +148,7 @@ record Card(AnnotatedStructure s) {
                     .append("</td><td data-label=\"±\">").append(s.permanent() ? "" : fmt(s.sd()))
                     .append("</td><td data-label=\"protonated\">")
                     .append(s.protonated() == null ? "–" : pct(s.protonated()))
-                    .append("</td><td data-label=\"basis\">").append(Html.esc(s.basis())).append("</td></tr>");
+                    .append("</td><td data-label=\"basis\">").append(Html.esc(s.basis().label())).append("</td></tr>");
         }
         return sb.append("</tbody></table>").toString();
     }
@@ -155,14 +158,14 @@ record Card(AnnotatedStructure s) {
         sb.append(a.macroPka().isEmpty() ? "none in −2…16" : Html.esc(a.macroPka().stream()
                 .map(v -> String.format(Locale.ROOT, "%.2f", v)).toList().toString()));
         if (a.netCharge() != null) {
-            double zw = zwitterion(a.species());
+            double zw = zwitterion(FullProfile.of(a).species());
             sb.append("; net charge ").append(signed(a.netCharge())).append("; uncharged ")
                     .append(pct(Math.max(0, a.fractionNeutral() - zw)));
             if (zw >= 0.0005) {
                 sb.append("; zwitterion ").append(pct(zw));
             }
-            if (a.logD() != null && !a.logD().isNaN()) {
-                sb.append("; logD ").append(fmt(a.logD())).append(" (logP ").append(fmt(a.logP())).append(')');
+            if (FullProfile.of(a).logD() != null && !FullProfile.of(a).logD().isNaN()) {
+                sb.append("; logD ").append(fmt(FullProfile.of(a).logD())).append(" (logP ").append(fmt(FullProfile.of(a).logP())).append(')');
             }
         }
         return sb.append("</p>").toString();
@@ -172,13 +175,13 @@ record Card(AnnotatedStructure s) {
     private static String species(List<Analysis> analyses) {
         StringBuilder sb = new StringBuilder();
         for (Analysis a : analyses) {
-            if (a.species().isEmpty()) {
+            if (FullProfile.of(a).species().isEmpty()) {
                 continue;
             }
             sb.append("<div class=\"im-species\"><h4>Species at pH ").append(StatedConditions.format(a.conditions().ph()))
                     .append("</h4>");
             int shown = 0;
-            for (Species sp : a.species()) {
+            for (Species sp : FullProfile.of(a).species()) {
                 if (sp.fraction() < 0.01 || shown == 4) {
                     continue;
                 }

@@ -5,6 +5,7 @@ import java.util.Locale;
 
 import ionmark.speciation.api.Curve;
 import ionmark.speciation.api.Site;
+import ionmark.acidity.api.SiteType;
 
 /**
  * Each site's protonated fraction against pH 0–14 as SVG, with axis titles, a legend naming every curve by
@@ -65,7 +66,7 @@ final class Plot {
                 d.append(i == 0 ? "M" : "L").append(String.format(Locale.ROOT, "%.1f %.1f", x(c.ph()[i]), y(f[i])));
             }
             String dash = DASH[k % DASH.length];
-            String stroke = s.type().equals("acid") ? "#6a3d9a" : "#1b7837";
+            String stroke = s.type() == SiteType.ACID ? "#6a3d9a" : "#1b7837";
             sb.append("<path d=\"").append(d).append("\" fill=\"none\" stroke=\"").append(stroke)
                     .append("\" stroke-width=\"2\"").append(dash.isEmpty() ? "" : " stroke-dasharray=\"" + dash + "\"")
                     .append("><title>").append(legend(k, s)).append("</title></path>");
@@ -80,8 +81,8 @@ final class Plot {
     }
 
     static String legend(int row, Site s) {
-        return (s.type().equals("acid") ? "■" : "●") + (row + 1) + " " + s.element() + AtomNumbers.shown(s.atom()) + ", "
-                + s.type() + (s.permanent() ? " (fixed)" : String.format(Locale.ROOT, ", site pKa %.2f", s.pka()));
+        return (s.type() == SiteType.ACID ? "■" : "●") + (row + 1) + " " + s.element() + AtomNumbers.shown(s.atom()) + ", "
+                + s.type().label() + (s.permanent() ? " (fixed)" : String.format(Locale.ROOT, ", site pKa %.2f", s.pka()));
     }
 
     private static void mark(StringBuilder sb, double ph) {

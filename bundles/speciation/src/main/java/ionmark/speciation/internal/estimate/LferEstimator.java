@@ -91,7 +91,7 @@ public final class LferEstimator {
         }
         double sd = Math.sqrt(g.sd() * g.sd() + Math.pow(SD_PER_UNIT_CORRECTION * Math.abs(total), 2)
                 + TailTerm.variance(total, t.fit(g.id())));
-        return new EstimatedSite(s, g.pka() + total, sd, terms, "estimated");
+        return new EstimatedSite(s, g.pka() + total, sd, terms, ionmark.speciation.api.Basis.ESTIMATED);
     }
 
     // ------------------------------------------------------------------ Hammett
