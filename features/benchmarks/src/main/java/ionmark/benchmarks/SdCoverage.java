@@ -94,7 +94,7 @@ public final class SdCoverage {
                 if (rows != null) {
                     double classPka = near.derivation().isEmpty() ? near.pka() : near.derivation().get(0).value();
                     rows.printf(Locale.ROOT, "%s\t%.3f\t%.3f\t%s\t%d\t%s\t%d\t%.2f\t%.3f\t%.3f\t%d%n", data.get(i).id(), e,
-                            near.sd(), near.group(), table.fit(near.group()).map(f -> f.n()).orElse(-1), near.basis(),
+                            near.sd(), near.group(), table.fit(near.group()).map(f -> f.n()).orElse(-1), near.basis().label(),
                             sites.size(), pred.get(p[1]), table.group(near.group()).map(g -> g.sd()).orElse(Double.NaN),
                             near.pka() - classPka, pred.size());
                 }

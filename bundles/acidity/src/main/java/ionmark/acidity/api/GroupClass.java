@@ -16,8 +16,8 @@ import java.util.Objects;
  * @param relation    linear free-energy relation followed
  * @param rho         reaction constant (Hammett ρ or inductive ρI), pKa units per unit σ
  * @param attenuation factor per bond for inductive transmission (Taft), or the ortho factor (Hammett)
- * @param resonance   which para constant applies: "p", "p-" (through-resonance with an anionic or
- *                    lone-pair centre) or "p+"
+ * @param resonance   which para constant applies (σp, or σp⁻/σp⁺ in through-resonance); {@link Resonance#PARA} when
+ *                    null
  * @param enthalpy    standard enthalpy of ionization, kJ/mol (van 't Hoff temperature correction)
  * @param sd          one standard deviation of the class estimate, pKa units
  * @param permanent   a permanently charged group: counted as a charge, never titrated
@@ -28,7 +28,7 @@ import java.util.Objects;
  * @param misses      example SMILES the class must not match
  */
 public record GroupClass(String id, String name, String smarts, SiteType type, double pka, Relation relation,
-        double rho, double attenuation, String resonance, double enthalpy, double sd, boolean permanent,
+        double rho, double attenuation, Resonance resonance, double enthalpy, double sd, boolean permanent,
         Map<String, String> sources, String note,
         java.util.List<String> matches, java.util.List<String> misses) {
 
@@ -38,7 +38,7 @@ public record GroupClass(String id, String name, String smarts, SiteType type, d
         Objects.requireNonNull(smarts, "smarts");
         Objects.requireNonNull(type, "type");
         Objects.requireNonNull(relation, "relation");
-        resonance = resonance == null ? "p" : resonance;
+        resonance = resonance == null ? Resonance.PARA : resonance;
         sources = Map.copyOf(sources == null ? Map.of() : sources);
         note = note == null ? "" : note;
         matches = java.util.List.copyOf(matches == null ? java.util.List.of() : matches);

@@ -25,11 +25,11 @@ public record Substituent(String id, String name, String smarts, double sigmaMet
     }
 
     /** The para constant for a class's resonance demand, falling back to σp where the special one is undefined. */
-    public double sigmaPara(String resonance) {
+    public double sigmaPara(Resonance resonance) {
         return switch (resonance) {
-            case "p-" -> Double.isNaN(sigmaParaMinus) ? sigmaPara : sigmaParaMinus;
-            case "p+" -> Double.isNaN(sigmaParaPlus) ? sigmaPara : sigmaParaPlus;
-            default -> sigmaPara;
+            case PARA_MINUS -> Double.isNaN(sigmaParaMinus) ? sigmaPara : sigmaParaMinus;
+            case PARA_PLUS -> Double.isNaN(sigmaParaPlus) ? sigmaPara : sigmaParaPlus;
+            case PARA -> sigmaPara;
         };
     }
 

@@ -22,6 +22,7 @@ import ionmark.acidity.api.MeasuredCompound;
 import ionmark.acidity.api.Problem;
 import ionmark.acidity.api.Reference;
 import ionmark.acidity.api.Relation;
+import ionmark.acidity.api.Resonance;
 import ionmark.acidity.api.PairRule;
 import ionmark.acidity.api.SiteInteraction;
 import ionmark.acidity.api.SiteType;
@@ -163,9 +164,15 @@ final class TableCodec {
         } catch (IllegalArgumentException e) {
             f.problems.add(error(p + ".relation", e.getMessage()));
         }
+        Resonance resonance = Resonance.PARA;
+        try {
+            resonance = Resonance.parse(n.path("resonance").asText("p"));
+        } catch (IllegalArgumentException e) {
+            f.problems.add(error(p + ".resonance", e.getMessage()));
+        }
         return new GroupClass(f.text(n, p, "id"), f.text(n, p, "name"), f.text(n, p, "smarts"), type,
                 f.number(n, p, "pka", false), rel, f.number(n, p, "rho", false), f.number(n, p, "attenuation", false),
-                n.path("resonance").asText("p"), f.number(n, p, "enthalpy", false), f.number(n, p, "sd", true),
+                resonance, f.number(n, p, "enthalpy", false), f.number(n, p, "sd", true),
                 n.path("permanent").asBoolean(false), sources(n, p, f), n.path("note").asText(""),
                 f.strings(n, p, "matches"), f.strings(n, p, "misses"));
     }
@@ -415,8 +422,8 @@ final class TableCodec {
         o.put("relation", g.relation().label());
         num(o, "rho", g.rho());
         num(o, "attenuation", g.attenuation());
-        if (!"p".equals(g.resonance())) {
-            o.put("resonance", g.resonance());
+        if (g.resonance() != Resonance.PARA) {
+            o.put("resonance", g.resonance().code());
         }
         num(o, "enthalpy", g.enthalpy());
         o.put("sd", g.sd());

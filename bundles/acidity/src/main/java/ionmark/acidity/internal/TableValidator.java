@@ -101,9 +101,6 @@ final class TableValidator {
                     range(out, p + ".attenuation", g.attenuation(), 0, 1, "attenuation factor");
                 }
             }
-            if (!Set.of("p", "p-", "p+").contains(g.resonance())) {
-                out.add(err(p + ".resonance", "resonance must be \"p\", \"p-\" or \"p+\", not \"" + g.resonance() + "\""));
-            }
             if (!Double.isNaN(g.enthalpy())) {
                 range(out, p + ".enthalpy", g.enthalpy(), -150, 150, "ionization enthalpy (kJ/mol)");
             }

@@ -152,6 +152,12 @@ class ValidatorTest {
     }
 
     @Test
+    void unknownResonanceDemand() {
+        expectError(broken(t -> t.replace("\"relation\": \"taft\",", "\"relation\": \"taft\", \"resonance\": \"p*\",")),
+                "$.groups[0].resonance", "resonance must be \"p\", \"p-\" or \"p+\", not \"p*\"");
+    }
+
+    @Test
     void unexercisedClassIsAWarningNotAnError() {
         ValidationReport r = broken(t -> t.replace("\"groups\": [\"amine\"]", "\"groups\": []"));
         assertTrue(r.ok(), r.problems().toString());

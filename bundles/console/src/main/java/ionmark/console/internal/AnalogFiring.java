@@ -10,6 +10,7 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Term;
+import ionmark.speciation.api.Basis;
 
 /**
  * Whether the analog step fires, read from the derivations of a set of predictions made with and without
@@ -65,7 +66,7 @@ final class AnalogFiring {
             if (!a.ok()) {
                 continue;
             }
-            if (a.sites().stream().anyMatch(s -> "measured".equals(s.basis()))) {
+            if (a.sites().stream().anyMatch(s -> s.basis() == Basis.MEASURED)) {
                 exact++; // the same constitution as a measured compound (a stereoisomer, a salt): its values, not analogs
                 continue;
             }

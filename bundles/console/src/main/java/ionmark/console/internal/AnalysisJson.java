@@ -5,10 +5,12 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 
 import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Profile;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
 import ionmark.speciation.api.Window;
+import ionmark.acidity.api.SiteType;
 
 /**
  * The output contract shared by {@code check}, {@code batch} and the pipeline module: one JSON object per
@@ -16,6 +18,9 @@ import ionmark.speciation.api.Window;
  */
 public final class AnalysisJson {
     static final ObjectMapper JSON = new ObjectMapper();
+    /** What the keys of a full record say when the analysis has no profile: nothing (empty, null). */
+    private static final Profile NO_PROFILE = new Profile(java.util.List.of(), null, Double.NaN, null,
+            java.util.List.of(), java.util.List.of());
 
     private AnalysisJson() {
     }
@@ -56,7 +61,7 @@ public final class AnalysisJson {
         for (Site s : a.sites()) {
             if (s.permanent()) {
                 fixed.addObject().put("atom", s.atom()).put("element", s.element()).put("group", s.group())
-                        .put("charge", s.type().equals("base") ? 1 : -1);
+                        .put("charge", s.type() == SiteType.BASE ? 1 : -1);
                 continue;
             }
             ObjectNode n = sites.addObject();
@@ -64,7 +69,7 @@ public final class AnalysisJson {
             n.put("element", s.element());
             n.put("group", s.group());
             n.put("groupName", s.groupName());
-            n.put("type", s.type());
+            n.put("type", s.type().label());
             num(n, "pka", s.pka());
             n.put("sd", round(s.sd()));
             if (s.protonated() != null) {
@@ -72,7 +77,7 @@ public final class AnalysisJson {
             } else {
                 n.putNull("protonated");
             }
-            n.put("basis", s.basis());
+            n.put("basis", s.basis().label());
             ArrayNode d = n.putArray("derivation");
             for (Term t : s.derivation()) {
                 d.addObject().put("term", t.label()).put("value", round(t.value())).put("source", t.source());
@@ -97,15 +102,16 @@ public final class AnalysisJson {
         if (brief) {
             o.put("brief", true);
         } else {
+            Profile p = a.hasProfile() ? a.profile() : NO_PROFILE;
             ArrayNode sp = o.putArray("species");
-            for (Species s : a.species()) {
+            for (Species s : p.species()) {
                 sp.addObject().put("smiles", s.smiles()).put("charge", s.charge()).put("fraction", round4(s.fraction()));
             }
-            nullable(o, "isoelectricPoint", a.isoelectricPoint());
-            num(o, "logP", a.logP());
-            nullable(o, "logD", a.logD());
-            windows(o.putArray("neutralWindows"), a.neutralWindows()); // by fractionNeutral
-            windows(o.putArray("chargedWindows"), a.chargedWindows());
+            nullable(o, "isoelectricPoint", p.isoelectricPoint());
+            num(o, "logP", p.logP());
+            nullable(o, "logD", p.logD());
+            windows(o.putArray("neutralWindows"), p.neutralWindows()); // by fractionNeutral
+            windows(o.putArray("chargedWindows"), p.chargedWindows());
         }
         a.corrections().forEach(o.putArray("corrections")::add);
         ArrayNode w = o.putArray("warnings");

@@ -3,6 +3,7 @@ package ionmark.console.internal;
 import ionmark.acidity.api.TableService;
 import ionmark.calibration.api.TableCalibration;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.measured.MeasuredImport;
 import ionmark.store.api.TableStore;
 
@@ -14,8 +15,9 @@ final class CalibrationLink {
     private CalibrationLink() {
     }
 
-    static Cli cli(Speciation speciation, TableService tables, Object calibration, TableStore store,
-            MeasuredImport imports) {
-        return new Cli(speciation, tables, (TableCalibration) calibration, store, imports, System.out, System.err);
+    static Cli cli(Speciation speciation, TableRegression regression, TableService tables, Object calibration,
+            TableStore store, MeasuredImport imports) {
+        return new Cli(speciation, regression, tables, (TableCalibration) calibration, store, imports, System.out,
+                System.err);
     }
 }

@@ -44,16 +44,24 @@ public final class Cli {
     private final Map<String, Command> commands;
     private final PrintStream err;
 
-    /** {@code calibration} may be null: the runtime has no calibration bundle. */
+    /**
+     * The commands that need only the speciation service and the table ({@code check}, {@code batch},
+     * {@code annotate}, {@code table validate|export}); {@code table check} reports validation only, and
+     * {@code table calibrate} and {@code accuracy} say that the calibration bundle is missing when
+     * {@code calibration} is null.
+     */
     public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
             PrintStream out, PrintStream err) {
-        this(speciation, tables, calibration, store, null, out, err);
+        this(speciation, null, tables, calibration, store, null, out, err);
     }
 
-    /** With the bulk import of measured values ({@code table add-measured}). */
-    public Cli(Speciation speciation, TableService tables, TableCalibration calibration, TableStore store,
-            MeasuredImport imports, PrintStream out, PrintStream err) {
-        TableRegression regression = speciation instanceof TableRegression tr ? tr : null;
+    /**
+     * Every command, each given what it needs. {@code regression} (the reference-set check of a draft), {@code
+     * calibration}, {@code store} and {@code imports} may be null: the commands that need them then leave their part
+     * out or say what is missing.
+     */
+    public Cli(Speciation speciation, TableRegression regression, TableService tables, TableCalibration calibration,
+            TableStore store, MeasuredImport imports, PrintStream out, PrintStream err) {
         // no calibration class is loaded unless the calibration service is there
         Command calibrate = calibration == null ? missingCalibration("table calibrate", err)
                 : new CalibrateCommand(speciation, tables, calibration, regression, out, err);

@@ -14,6 +14,7 @@ import org.osgi.service.component.annotations.Reference;
 
 import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.TableRegression;
 import ionmark.store.api.TableStore;
 
 /**
@@ -87,8 +88,9 @@ public final class CommandLineRunner {
     static final String CALIBRATION_SERVICE = "ionmark.calibration.api.TableCalibration";
 
     @Activate
-    public CommandLineRunner(@Reference Speciation speciation, @Reference TableService tables,
-            @Reference ionmark.speciation.measured.MeasuredImport imports, BundleContext ctx) {
+    public CommandLineRunner(@Reference Speciation speciation, @Reference TableRegression regression,
+            @Reference TableService tables, @Reference ionmark.speciation.measured.MeasuredImport imports,
+            BundleContext ctx) {
         String file = ctx.getProperty(ARGS_FILE);
         if (file == null || file.isBlank()) {
             return;
@@ -105,8 +107,9 @@ public final class CommandLineRunner {
                     code = 1;
                 } else {
                     Object calibration = calibration(ctx);
-                    code = (calibration == null ? new Cli(speciation, tables, null, store, imports, System.out, System.err)
-                            : CalibrationLink.cli(speciation, tables, calibration, store, imports)).run(args);
+                    code = (calibration == null
+                            ? new Cli(speciation, regression, tables, null, store, imports, System.out, System.err)
+                            : CalibrationLink.cli(speciation, regression, tables, calibration, store, imports)).run(args);
                 }
             } catch (IOException | RuntimeException e) {
                 System.err.println("ionmark: " + (e.getMessage() == null ? e.toString() : e.getMessage()));

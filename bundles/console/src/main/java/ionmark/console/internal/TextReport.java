@@ -3,6 +3,7 @@ package ionmark.console.internal;
 import java.util.Locale;
 
 import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.ErrorPosition;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
@@ -12,10 +13,19 @@ final class TextReport {
     private TextReport() {
     }
 
+    /** The SMILES with a caret under the character the reader stopped at, when it says; else "". */
+    static String caret(Analysis a) {
+        ErrorPosition at = a.errorPosition();
+        if (at == null || at.unit() != ErrorPosition.Unit.CHARACTER) {
+            return "";
+        }
+        return "  " + ErrorPosition.smilesAsRead(a.input()) + "\n  " + at.caret() + "\n";
+    }
+
     static String of(Analysis a) {
         StringBuilder sb = new StringBuilder();
         if (!a.ok()) {
-            return "error: " + a.error() + "\n";
+            return "error: " + a.error() + "\n" + caret(a);
         }
         sb.append("structure  ").append(a.smiles()).append('\n');
         sb.append("conditions ").append(a.conditions().hasPh() ? "pH " + a.conditions().ph() : "no pH stated")
@@ -26,7 +36,7 @@ final class TextReport {
                 "±sd", "protonated"));
         for (Site s : a.sites()) {
             sb.append(String.format(Locale.ROOT, "%-5d %-4s %-30s %-5s %7s %6s %12s%n", s.atom() + 1, s.element(),
-                    s.group(), s.type(), s.permanent() ? "fixed" : String.format(Locale.ROOT, "%.2f", s.pka()),
+                    s.group(), s.type().label(), s.permanent() ? "fixed" : String.format(Locale.ROOT, "%.2f", s.pka()),
                     s.permanent() ? "" : String.format(Locale.ROOT, "%.2f", s.sd()),
                     s.protonated() == null ? "-" : String.format(Locale.ROOT, "%.1f %%", 100 * s.protonated())));
             for (Term t : s.derivation()) {
@@ -38,8 +48,9 @@ final class TextReport {
             sb.append(String.format(Locale.ROOT, "net charge %.2f; neutral %.1f %% (uncharged %.1f %%, the rest "
                     + "zwitterions)%s%n", a.netCharge(), 100 * a.fractionNeutral(),
                     100 * (a.fractionUncharged() == null ? a.fractionNeutral() : a.fractionUncharged()),
-                    a.logD() == null ? "" : String.format(Locale.ROOT, "; logD %.2f", a.logD())));
-            for (Species s : a.species()) {
+                    !a.hasProfile() || a.profile().logD() == null ? ""
+                            : String.format(Locale.ROOT, "; logD %.2f", a.profile().logD())));
+            for (Species s : a.hasProfile() ? a.profile().species() : java.util.List.<Species>of()) {
                 if (s.fraction() >= 0.01) {
                     sb.append(String.format(Locale.ROOT, "  %5.1f %%  %+d  %s%n", 100 * s.fraction(), s.charge(),
                             s.smiles()));

@@ -24,7 +24,8 @@ class AddMeasuredTest {
     Path dir;
 
     int run(String... args) {
-        return new Cli(CliTest.SPECIATION, CliTest.TABLES, CliTest.CALIBRATION, null, new MeasuredImportService(),
+        return new Cli(CliTest.SPECIATION, CliTest.SPECIATION, CliTest.TABLES, CliTest.CALIBRATION, null,
+                new MeasuredImportService(),
                 new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(new ByteArrayOutputStream(), true,
                         StandardCharsets.UTF_8)).run(List.of(args));
     }

@@ -18,7 +18,7 @@ class CliInputTest {
     final ByteArrayOutputStream err = new ByteArrayOutputStream();
 
     int run(String... args) {
-        return new Cli(CliTest.SPECIATION, CliTest.TABLES, CliTest.CALIBRATION, null,
+        return new Cli(CliTest.SPECIATION, CliTest.SPECIATION, CliTest.TABLES, CliTest.CALIBRATION, null, null,
                 new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8))
                 .run(List.of(args));
     }

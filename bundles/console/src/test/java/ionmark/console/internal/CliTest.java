@@ -33,8 +33,9 @@ class CliTest {
     Path dir;
 
     int run(String... args) {
-        return new Cli(SPECIATION, TABLES, CALIBRATION, null, new PrintStream(out, true, StandardCharsets.UTF_8),
-                new PrintStream(err, true, StandardCharsets.UTF_8)).run(List.of(args));
+        return new Cli(SPECIATION, SPECIATION, TABLES, CALIBRATION, null, null,
+                new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8))
+                .run(List.of(args));
     }
 
     String out() {

@@ -10,6 +10,7 @@ import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
+import ionmark.acidity.api.SiteType;
 
 /**
  * The annotation card of one structure, rendered to HTML and SVG for the web host from the same
@@ -68,6 +69,16 @@ record Card(AnnotatedStructure s) {
         return s.analyses().get(0);
     }
 
+    /** An unreadable SMILES with the character the reader stopped at marked (HTML from a template), or "". */
+    String errorMarker() {
+        return s.ok() || s.error() != null || s.analyses().isEmpty() ? "" : ErrorMarker.html(s.analyses().get(0));
+    }
+
+    /** Whether the full analysis lists species (a brief one has no profile). */
+    static boolean hasSpecies(Analysis a) {
+        return !FullProfile.of(a).species().isEmpty();
+    }
+
     /** The structure drawn with its sites marked (SVG made by CDK from the analysed structure). */
     String drawing() {
         return Depiction.svg(first());
@@ -109,8 +120,8 @@ record Card(AnnotatedStructure s) {
                 lines.add(new Line(signed(t.value()), t.label(), t.source()));
             }
             out.add(new SiteRow(row + 1, x.element() + AtomNumbers.shown(x.atom()), x.groupName(), lines,
-                    x.type().equals("acid"), x.permanent() ? "fixed" : fmt(x.pka()), x.permanent() ? "" : fmt(x.sd()),
-                    x.protonated() == null ? "–" : pct(x.protonated()), x.basis()));
+                    x.type() == SiteType.ACID, x.permanent() ? "fixed" : fmt(x.pka()), x.permanent() ? "" : fmt(x.sd()),
+                    x.protonated() == null ? "–" : pct(x.protonated()), x.basis().label()));
         }
         return out;
     }
@@ -120,14 +131,14 @@ record Card(AnnotatedStructure s) {
         sb.append(a.macroPka().isEmpty() ? "none in −2…16" : a.macroPka().stream()
                 .map(v -> String.format(Locale.ROOT, "%.2f", v)).toList().toString());
         if (a.netCharge() != null) {
-            double zw = zwitterion(a.species());
+            double zw = zwitterion(FullProfile.of(a).species());
             sb.append("; net charge ").append(signed(a.netCharge())).append("; uncharged ")
                     .append(pct(Math.max(0, a.fractionNeutral() - zw)));
             if (zw >= 0.0005) {
                 sb.append("; zwitterion ").append(pct(zw));
             }
-            if (a.logD() != null && !a.logD().isNaN()) {
-                sb.append("; logD ").append(fmt(a.logD())).append(" (logP ").append(fmt(a.logP())).append(')');
+            if (FullProfile.of(a).logD() != null && !FullProfile.of(a).logD().isNaN()) {
+                sb.append("; logD ").append(fmt(FullProfile.of(a).logD())).append(" (logP ").append(fmt(FullProfile.of(a).logP())).append(')');
             }
         }
         return sb.toString();
@@ -136,7 +147,7 @@ record Card(AnnotatedStructure s) {
     /** The leading species (at least 1 %, four at most), drawn, with their share and charge. */
     static List<Drawn> species(Analysis a) {
         List<Drawn> out = new ArrayList<>();
-        for (Species sp : a.species()) {
+        for (Species sp : FullProfile.of(a).species()) {
             if (sp.fraction() < 0.01 || out.size() == 4) {
                 continue;
             }

@@ -23,6 +23,7 @@ import org.openscience.cdk.tools.manipulator.AtomContainerManipulator;
 
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Site;
+import ionmark.acidity.api.SiteType;
 
 /**
  * The analysed structure as SVG with a numbered mark at every site: a square for an acid, a circle for a
@@ -150,7 +151,7 @@ final class Depiction {
                 if (atom == null) {
                     continue;
                 }
-                boolean acid = s.type().equals("acid");
+                boolean acid = s.type() == SiteType.ACID;
                 String label = (acid ? "■" : "●") + (row + 1) + (s.permanent() ? " fixed"
                         : String.format(Locale.ROOT, " %.1f", s.pka()));
                 atom.setProperty(StandardGenerator.ANNOTATION_LABEL, label);

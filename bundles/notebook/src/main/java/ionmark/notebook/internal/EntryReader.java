@@ -194,12 +194,7 @@ final class EntryReader {
             return new AnnotatedStructure(f.block(), f.words(), f.source(), f.structure(), used, analyses, null, List.of(),
                     analyses.get(0).error());
         }
-        Curve curve;
-        try {
-            curve = speciation.curve(f.structure(), new Conditions(null, t, is), 0, 14, 0.1);
-        } catch (IllegalArgumentException e) {
-            curve = null;
-        }
+        Curve curve = speciation.curve(f.structure(), new Conditions(null, t, is), 0, 14, 0.1).curve(); // null: no plot
         List<Partition> phases = WorkupPhases.partitions(WorkupPhases.step(sectionText(entry, b.section())), analyses);
         return new AnnotatedStructure(f.block(), f.words(), f.source(), f.structure(), used, analyses, curve, phases,
                 null);

@@ -6,6 +6,7 @@ import java.util.Locale;
 
 import ionmark.speciation.api.Curve;
 import ionmark.speciation.api.Site;
+import ionmark.acidity.api.SiteType;
 
 /**
  * Each site's protonated fraction against pH 0–14 as SVG, with axis titles, a legend naming every curve by
@@ -82,15 +83,15 @@ final class Plot {
                 d.append(i == 0 ? "M" : "L").append(f1(x(c.ph()[i]))).append(' ').append(f1(y(f[i])));
             }
             String dash = DASH[k % DASH.length];
-            lines.add(new Line(d.toString(), s.type().equals("acid") ? "#6a3d9a" : "#1b7837", dash.isEmpty() ? null : dash,
+            lines.add(new Line(d.toString(), s.type() == SiteType.ACID ? "#6a3d9a" : "#1b7837", dash.isEmpty() ? null : dash,
                     legend(k, s), LEFT + (k % 2) * (PW / 2), TOP + H + 48 + 18 * (k / 2)));
         }
         return new View(total, bandX, bandWidth, marks, ticks, fractions, f1(LEFT + PW / 2.0), f1(TOP + H / 2.0), lines);
     }
 
     static String legend(int row, Site s) {
-        return (s.type().equals("acid") ? "■" : "●") + (row + 1) + " " + s.element() + AtomNumbers.shown(s.atom()) + ", "
-                + s.type() + (s.permanent() ? " (fixed)" : String.format(Locale.ROOT, ", site pKa %.2f", s.pka()));
+        return (s.type() == SiteType.ACID ? "■" : "●") + (row + 1) + " " + s.element() + AtomNumbers.shown(s.atom()) + ", "
+                + s.type().label() + (s.permanent() ? " (fixed)" : String.format(Locale.ROOT, ", site pKa %.2f", s.pka()));
     }
 
     private static Mark mark(double ph) {

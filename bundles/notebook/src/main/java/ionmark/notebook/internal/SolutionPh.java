@@ -10,6 +10,7 @@ import java.util.concurrent.ConcurrentHashMap;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Speciation;
+import ionmark.speciation.api.Basis;
 
 /**
  * The pH of a reagent solution from its composition by charge balance, with each weak acid system's charge taken
@@ -68,7 +69,7 @@ final class SolutionPh {
             // micro constants giving pKa 5.74 and about 10.9 instead of the measured 6.35 and 10.33 that analyse uses
             weak.add(new ChargeBalance.Weak(p.molar(), ph -> netCharge(p.smiles(), ph)));
             boolean measured = !a.sites().isEmpty() && a.sites().stream().filter(s -> !s.permanent())
-                    .allMatch(s -> s.basis().equals("measured"));
+                    .allMatch(s -> s.basis() == Basis.MEASURED);
             said.add(p.name() + " pKa " + list(a.macroPka().stream().mapToDouble(Double::doubleValue).toArray())
                     + " (table " + a.tableVersion() + (measured ? ", measured" : ", estimated") + ")");
             key.append('|').append(p.molar()).append(' ').append(p.smiles()).append('@').append(a.tableVersion());

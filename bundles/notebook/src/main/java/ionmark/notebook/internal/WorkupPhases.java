@@ -57,9 +57,9 @@ final class WorkupPhases {
             return out;
         }
         for (Analysis a : analyses) {
-            if (a.ok() && a.conditions().hasPh() && a.logD() != null && !a.logD().isNaN()) {
-                double d = Math.pow(10, a.logD()) * step.ratio();
-                out.add(new Partition(a.conditions().ph(), a.logD(), step.solvent(), step.ratio(), step.ratioAssumed(),
+            if (a.ok() && a.conditions().hasPh() && FullProfile.of(a).logD() != null && !FullProfile.of(a).logD().isNaN()) {
+                double d = Math.pow(10, FullProfile.of(a).logD()) * step.ratio();
+                out.add(new Partition(a.conditions().ph(), FullProfile.of(a).logD(), step.solvent(), step.ratio(), step.ratioAssumed(),
                         d / (1 + d)));
             }
         }
@@ -107,8 +107,8 @@ final class WorkupPhases {
                 if (i == j || words.get(i).equals(words.get(j))) {
                     continue;
                 }
-                for (Window n : analyses.get(i).neutralWindows()) {
-                    for (Window c : analyses.get(j).chargedWindows()) {
+                for (Window n : FullProfile.of(analyses.get(i)).neutralWindows()) {
+                    for (Window c : FullProfile.of(analyses.get(j)).chargedWindows()) {
                         double from = Math.max(n.from(), c.from());
                         double to = Math.min(n.to(), c.to());
                         Separation s = new Separation(words.get(i), words.get(j), from, to);

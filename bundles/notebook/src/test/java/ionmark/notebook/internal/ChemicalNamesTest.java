@@ -15,6 +15,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 import ionmark.host.api.Block;
 import ionmark.notebook.api.AnnotatedEntry;
 import ionmark.notebook.api.AnnotatedStructure;
+import ionmark.acidity.api.SiteType;
 
 /** Chemical names in prose become structures; words that are not a compound to annotate stay text. */
 class ChemicalNamesTest {
@@ -73,7 +74,7 @@ class ChemicalNamesTest {
         assertTrue(s.ok(), String.valueOf(s.error()));
         assertEquals(7.4, s.conditions().ph(), 1e-9);
         // the carboxylic acid (pKa 4.85–4.87 for 4-aminobenzoic acid, CRC, from memory) is ionised at pH 7.4
-        assertTrue(s.analyses().get(0).sites().stream().anyMatch(x -> x.type().equals("acid") && x.pka() < 6),
+        assertTrue(s.analyses().get(0).sites().stream().anyMatch(x -> x.type() == SiteType.ACID && x.pka() < 6),
                 s.analyses().get(0).sites().toString());
         String html = new Card(s).html();
         assertTrue(html.contains("structure from the name"), html);

@@ -23,6 +23,7 @@ import ionmark.notebook.api.AnnotatedEntry;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Site;
+import ionmark.acidity.api.SiteType;
 
 /** Defects seen in the running notebook, each held here. */
 class EntryDefectsTest {
@@ -63,7 +64,7 @@ class EntryDefectsTest {
             IAtom atom = d.atom(s.atom());
             assertNotNull(atom);
             assertEquals(s.element(), atom.getSymbol(), "site on atom " + (s.atom() + 1));
-            if (s.type().equals("base")) {
+            if (s.type() == SiteType.BASE) {
                 assertEquals("N", atom.getSymbol(), "the amine is the base");
             } else {
                 assertEquals(1, atom.getBondCount(), "the acid site is the carboxyl OH, not an aromatic atom");

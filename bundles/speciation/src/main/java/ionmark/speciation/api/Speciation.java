@@ -9,22 +9,26 @@ import org.osgi.annotation.versioning.ProviderType;
 @ProviderType
 public interface Speciation {
 
-    /** Reads a SMILES, molfile (V2000/V3000) or SDF record and analyses it at the given conditions. */
+    /**
+     * Reads a SMILES, molfile (V2000/V3000) or SDF record and analyses it at the given conditions; the result has
+     * its {@link Profile}.
+     */
     Analysis analyse(String structure, Conditions conditions);
 
     /**
      * The brief form of {@link #analyse} for large files: sites with their estimates and derivations,
      * macroscopic constants, site protonation, charge states, net charge and fraction neutral at the
      * conditions, with the same warnings. It leaves out what costs most and a screen rarely reads:
-     * logP and logD (NaN and null), the species structures, the pH windows and the isoelectric point
-     * (empty and null).
-     *
-     * @since 1.1
+     * the {@link Profile} (logP and logD, the species structures, the pH windows and the isoelectric point):
+     * {@link Analysis#profile()} is null.
      */
     Analysis screen(String structure, Conditions conditions);
 
-    /** Curves of charge and site protonation from pH {@code from} to {@code to} at {@code step}. */
-    Curve curve(String structure, Conditions conditions, double from, double to, double step);
+    /**
+     * Curves of charge and site protonation from pH {@code from} to {@code to} at {@code step}, under the same time
+     * budget as an analysis; never throws for bad input or an exhausted budget (see {@link CurveResult}).
+     */
+    CurveResult curve(String structure, Conditions conditions, double from, double to, double step);
 
     /**
      * The same service bound to one table snapshot instead of the current one: what an entry pinned

@@ -13,6 +13,7 @@ import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.Profile;
 import ionmark.speciation.api.Site;
 import ionmark.speciation.api.Species;
 import ionmark.speciation.api.Term;
@@ -153,7 +154,7 @@ final class AnalysisBuilder {
                 terms.add(new Term("conditions (temperature, ionic strength)", pka - s.pka(), "van 't Hoff; Davies"));
             }
             sites.add(new Site(s.site().atom(), mol.getAtom(s.site().atom()).getSymbol(), g.id(), g.name(),
-                    g.type().label(), g.permanent() ? Double.NaN : pka, s.sd(), pr, terms, s.basis(), g.permanent()));
+                    g.type(), g.permanent() ? Double.NaN : pka, s.sd(), pr, terms, s.basis(), g.permanent()));
         }
         List<Window> neutralWindows = new ArrayList<>();
         List<Window> chargedWindows = new ArrayList<>();
@@ -165,9 +166,10 @@ final class AnalysisBuilder {
         final List<Double> listed = macro;
         Double pI = brief ? null : WaterRange.isoelectricPoint(inWater, p.permanentCharge() > 0, listed,
                 ph -> ChargeProfile.meanCharge(p, ph));
-        return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(), sites, macro, c, netCharge, neutral,
-                uncharged, chargeStates, species, pI, logP, logD, neutralWindows, chargedWindows, corrections, warnings, sampled, version,
-                null, p.uncovered());
+        Profile profile = brief ? null : new Profile(species, pI, logP, logD, neutralWindows, chargedWindows);
+        return new Analysis(input, brief ? p.prepared().smilesAsRead() : p.prepared().smiles(), p.prepared().stripped(),
+                sites, macro, c, netCharge, neutral, uncharged, chargeStates, corrections, warnings, sampled, version,
+                p.uncovered(), profile, null, null);
     }
 
     private static double logP(IAtomContainer mol) {

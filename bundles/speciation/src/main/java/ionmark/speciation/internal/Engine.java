@@ -124,7 +124,7 @@ public final class Engine {
             Problem p = prepare(input, c);
             return result.build(input, c, p, version, brief);
         } catch (StructureException e) {
-            return Analysis.failed(input, c, version, e.getMessage());
+            return Analysis.failed(input, c, version, e.getMessage(), e.position());
         } catch (RuntimeException e) {
             // a structure that slips past the reader's checks must not break the caller
             return Analysis.failed(input, c, version, "cannot analyse this structure ("

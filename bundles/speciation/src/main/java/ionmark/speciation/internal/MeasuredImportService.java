@@ -124,7 +124,7 @@ public final class MeasuredImportService implements MeasuredImport {
                 predicted = a.macroPka();
                 List<Site> sites = a.sites().stream().filter(s -> !s.permanent())
                         .sorted(java.util.Comparator.comparingDouble(Site::pka)).toList();
-                if (sites.stream().anyMatch(s -> "measured".equals(s.basis()))) {
+                if (sites.stream().anyMatch(s -> s.basis() == ionmark.speciation.api.Basis.MEASURED)) {
                     problems.add("this structure is already a measured compound of the table");
                 } else if (sites.size() < pka.size()) {
                     problems.add(pka.size() + " values but " + sites.size() + " titratable site"

@@ -39,7 +39,7 @@ final class MeasuredSites {
                 if (p.measured().isEmpty() || !p.measured().get().id().equals(m.id())) {
                     continue; // a duplicate structure: the first record of it is the one that counts
                 }
-                List<EstimatedSite> fitted = p.sites().stream().filter(s -> "measured".equals(s.basis()))
+                List<EstimatedSite> fitted = p.sites().stream().filter(s -> s.basis() == ionmark.speciation.api.Basis.MEASURED)
                         .sorted(Comparator.comparingDouble(MeasuredSites::beforeFit)).toList();
                 if (fitted.size() != m.pka().size()) {
                     continue;

@@ -121,10 +121,7 @@ final class ResultCache {
         if (a.input().equals(input)) {
             return a;
         }
-        return new Analysis(input, a.smiles(), a.stripped(), a.sites(), a.macroPka(), a.conditions(), a.netCharge(),
-                a.fractionNeutral(), a.fractionUncharged(), a.chargeStates(), a.species(), a.isoelectricPoint(), a.logP(),
-                a.logD(), a.neutralWindows(), a.chargedWindows(), a.corrections(), a.warnings(), a.sampled(),
-                a.tableVersion(), a.error());
+        return a.withInput(input);
     }
 
     static Curve copy(Curve c) {

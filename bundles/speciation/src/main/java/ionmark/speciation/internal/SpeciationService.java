@@ -13,6 +13,7 @@ import ionmark.acidity.api.TableService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
+import ionmark.speciation.api.CurveResult;
 import ionmark.speciation.api.Speciation;
 import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.internal.structure.StructureException;
@@ -47,7 +48,7 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
     private final ResultCache cache;
     /** Identical requests under way share one analysis or curve (see {@link SingleFlight}). */
     private final SingleFlight<ResultCache.Key, Analysis> analysing = new SingleFlight<>();
-    private final SingleFlight<ResultCache.Key, Curve> curving = new SingleFlight<>();
+    private final SingleFlight<ResultCache.Key, CurveResult> curving = new SingleFlight<>();
 
     @Activate
     public SpeciationService(@Reference TableService tables, SpeciationConfiguration config) {
@@ -172,37 +173,39 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
     }
 
     /**
-     * Curves under the same budget as an analysis. Over the budget (or when the pool is busy) it throws an
-     * {@link IllegalArgumentException} whose message starts with "not annotated"; the card then leaves the plot out.
+     * Curves under the same budget as an analysis. Over the budget (or when the pool is busy) the result is a failure
+     * whose message starts with "not annotated"; the card then leaves the plot out.
      */
     @Override
-    public Curve curve(String structure, Conditions conditions, double from, double to, double step) {
+    public CurveResult curve(String structure, Conditions conditions, double from, double to, double step) {
         Conditions c = conditions == null ? Conditions.noPh() : conditions;
         Engine e = engine();
         ResultCache.Key key = key(e, structure, c, "curve " + from + " " + to + " " + step);
         Curve hit = cache.curve(key);
         if (hit != null) {
-            return hit;
+            return CurveResult.of(hit);
         }
         e.analogIndex();
-        Curve curve = curving.run(key, () -> {
-            AnalysisPool.Outcome<Object> o = pool.run(() -> {
+        CurveResult result = curving.run(key, () -> {
+            AnalysisPool.Outcome<CurveResult> o = pool.run(() -> {
                 try {
-                    return e.curve(structure, c, from, to, step);
+                    return CurveResult.of(e.curve(structure, c, from, to, step));
                 } catch (StructureException ex) {
-                    return new IllegalArgumentException(ex.getMessage(), ex);
+                    return CurveResult.failed(ex.getMessage(), ex.position());
+                } catch (IllegalArgumentException ex) {
+                    return CurveResult.failed(ex.getMessage());
                 }
             });
             if (!o.ok()) {
-                throw new IllegalArgumentException(o.refusal());
+                return CurveResult.failed(o.refusal());
             }
-            if (o.value() instanceof IllegalArgumentException ex) {
-                throw ex;
+            if (o.value().ok()) {
+                cache.put(key, o.value().curve());
             }
-            cache.put(key, (Curve) o.value());
-            return (Curve) o.value();
+            return o.value();
         });
-        return ResultCache.copy(curve);
+        // requests that shared one computation must not share its arrays
+        return result.ok() ? CurveResult.of(ResultCache.copy(result.curve())) : result;
     }
 
     @Override

@@ -14,6 +14,7 @@ import ionmark.acidity.internal.TableSnapshotService;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Site;
+import ionmark.speciation.api.Basis;
 
 /**
  * Site-level analog correction: the shipped table without its measured compounds, then with one or a
@@ -78,7 +79,7 @@ class AnalogCorrectionTest {
     @Test
     void theDerivationNamesEveryAnalogWithItsSimilarityResidualWeightAndSource() {
         Site s = site(new Engine(with(List.of(LUTIDINE_26, LUTIDINE_24)), 300), "Cc1cc(C)nc(C)c1");
-        assertEquals("analog", s.basis());
+        assertEquals(Basis.ANALOG, s.basis());
         var lines = s.derivation().stream().filter(t -> t.label().startsWith("measured analog")).toList();
         assertEquals(2, lines.size(), s.derivation().toString());
         for (var t : lines) {

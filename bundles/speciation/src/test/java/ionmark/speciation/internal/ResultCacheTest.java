@@ -114,9 +114,9 @@ class ResultCacheTest {
     void aCurveIsKeptAsACopy() {
         SpeciationService s = new SpeciationService(TableSnapshotService.shipped(), 300, 600_000, 1, 10);
         try {
-            Curve c = s.curve("CC(=O)O", Conditions.noPh(), 0, 14, 0.5);
+            Curve c = s.curve("CC(=O)O", Conditions.noPh(), 0, 14, 0.5).curve();
             c.meanCharge()[0] = 99;
-            Curve d = s.curve("CC(=O)O", Conditions.noPh(), 0, 14, 0.5);
+            Curve d = s.curve("CC(=O)O", Conditions.noPh(), 0, 14, 0.5).curve();
             assertEquals(1, s.cache().hits());
             assertNotEquals(99, d.meanCharge()[0]);
         } finally {

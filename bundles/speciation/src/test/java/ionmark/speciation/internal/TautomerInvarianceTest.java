@@ -125,9 +125,9 @@ class TautomerInvarianceTest {
             for (double ph : new double[] {2, 7.4, 12}) {
                 Analysis a = ENGINE.analyse(smi, Conditions.atPh(ph));
                 assertTrue(a.ok(), a.error());
-                for (var sp : a.species()) {
+                for (var sp : a.profile().species()) {
                     assertTrue(!(sp.smiles().contains("[nH+]") && sp.smiles().contains("[n-]")),
-                            smi + " at pH " + ph + " shows a ring zwitterion " + sp.smiles() + " in " + a.species());
+                            smi + " at pH " + ph + " shows a ring zwitterion " + sp.smiles() + " in " + a.profile().species());
                 }
             }
         }
@@ -141,8 +141,8 @@ class TautomerInvarianceTest {
         for (String smi : smiles) {
             Analysis a = analyse(smi);
             Set<String> seen = new java.util.HashSet<>();
-            for (var sp : a.species()) {
-                assertTrue(seen.add(sp.smiles()), smi + " lists " + sp.smiles() + " twice: " + a.species());
+            for (var sp : a.profile().species()) {
+                assertTrue(seen.add(sp.smiles()), smi + " lists " + sp.smiles() + " twice: " + a.profile().species());
             }
         }
     }

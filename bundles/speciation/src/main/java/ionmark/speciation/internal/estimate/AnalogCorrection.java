@@ -89,7 +89,7 @@ public final class AnalogCorrection {
         for (int i = 0; i < used.size(); i++) {
             Used u = used.get(i);
             double part = u.weight() * u.site().residual() / denom;
-            now = now.shifted(part, term(u, part, denom, cfg), "analog", i == used.size() - 1 ? sd : now.sd());
+            now = now.shifted(part, term(u, part, denom, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
         }
         return now;
     }

@@ -91,7 +91,7 @@ public final class LferEstimator {
         }
         double sd = Math.sqrt(g.sd() * g.sd() + Math.pow(SD_PER_UNIT_CORRECTION * Math.abs(total), 2)
                 + TailTerm.variance(total, t.fit(g.id())));
-        return new EstimatedSite(s, g.pka() + total, sd, terms, "estimated");
+        return new EstimatedSite(s, g.pka() + total, sd, terms, ionmark.speciation.api.Basis.ESTIMATED);
     }
 
     // ------------------------------------------------------------------ Hammett
@@ -151,7 +151,7 @@ public final class LferEstimator {
                 }
                 double delta = -g.rho() * sigma;
                 total += delta;
-                String sym = d == 1 ? "σo = " + fmt(f) + "·σp + σI" : (d == 3 && size == 6 ? "σ" + g.resonance() : "σm");
+                String sym = d == 1 ? "σo = " + fmt(f) + "·σp + σI" : (d == 3 && size == 6 ? "σ" + g.resonance().code() : "σm");
                 terms.add(new Term("Hammett " + pos + " " + sub.name() + ": " + sym + " " + fmt(sigma) + " × ρ "
                         + fmt(g.rho()), delta, t.citation(sub.source(d == 2 || size == 5 ? "sigmaMeta" : "sigmaPara"))
                                 + "; ρ: " + t.citation(g.source("rho"))));
@@ -214,7 +214,7 @@ public final class LferEstimator {
                     double delta = -g.rho() * FUSED_TRANSMISSION * sigma;
                     total += delta;
                     terms.add(new Term("Hammett fused ring " + sub.name() + " (n=" + dist[r] + "): "
-                            + fmt(FUSED_TRANSMISSION) + " × " + (conjugated ? "σ" + g.resonance() : "σm") + " "
+                            + fmt(FUSED_TRANSMISSION) + " × " + (conjugated ? "σ" + g.resonance().code() : "σm") + " "
                             + fmt(sigma) + " × ρ " + fmt(g.rho()), delta,
                             t.citation(sub.source(conjugated ? "sigmaPara" : "sigmaMeta")) + "; ρ: "
                                     + t.citation(g.source("rho")) + "; transmission: " + FUSED_SOURCE));

@@ -124,7 +124,7 @@ public final class MeasuredFit {
             out.add(s.shifted(shift[idx], new Term("measured compound " + m.name() + ": macroscopic pKa "
                     + m.pka() + " at " + Math.round(m.temperature()) + " °C (" + m.method()
                     + "); site value set to reproduce it", shift[idx], table.citation(m.source())),
-                    "measured", 0.05));
+                    ionmark.speciation.api.Basis.MEASURED, 0.05));
         }
         return out;
     }

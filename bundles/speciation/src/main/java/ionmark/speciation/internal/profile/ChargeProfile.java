@@ -20,7 +20,7 @@ public final class ChargeProfile {
 
     /** Whether every measured value of the problem's measured compound was given to a site. */
     public static boolean measuredFit(Problem p) {
-        return p.sites().stream().filter(s -> "measured".equals(s.basis())).count() == p.measured().get().pka().size();
+        return p.sites().stream().filter(s -> s.basis() == ionmark.speciation.api.Basis.MEASURED).count() == p.measured().get().pka().size();
     }
 
     public static double meanCharge(Problem p, double ph) {
@@ -68,7 +68,7 @@ public final class ChargeProfile {
             }
             i++;
             boolean base = s.site().group().type() == SiteType.BASE;
-            if ("measured".equals(s.basis())) {
+            if (s.basis() == ionmark.speciation.api.Basis.MEASURED) {
                 z0 += base ? 1 : 0;
             } else {
                 boolean dep = unmeasuredDeprotonated(p, i, ph);

@@ -143,7 +143,8 @@ public final class StructureReader {
         } catch (InvalidSmilesException e) {
             String msg = e.getMessage() == null ? "invalid SMILES" : e.getMessage().replace('\n', ' ')
                     .replaceAll("\\s+", " ");
-            throw new StructureException("cannot read SMILES '" + abbreviate(s) + "': " + msg);
+            throw new StructureException("cannot read SMILES '" + abbreviate(s) + "': " + msg,
+                    SmilesCaret.position(e.getMessage(), s));
         } catch (RuntimeException e) {
             throw new StructureException("cannot read SMILES '" + abbreviate(s) + "': " + e);
         }

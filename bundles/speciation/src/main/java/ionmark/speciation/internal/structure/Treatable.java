@@ -4,6 +4,8 @@ import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
 
+import ionmark.speciation.api.ErrorPosition;
+
 /**
  * Refuses, with the reason, structures whose numbers would be wrong rather than uncertain: metal atoms in the
  * parent (complexes, organometallics, salts drawn with a covalent metal bond), radicals and carbenes, and charges
@@ -18,31 +20,35 @@ final class Treatable {
         if (mol.getSingleElectronCount() > 0) {
             IAtom a = mol.getSingleElectron(0).getAtom();
             throw new StructureException(where(mol, a) + " carries an unpaired electron: radicals are outside what "
-                    + "Ionmark estimates (its classes describe closed-shell molecules)");
+                    + "Ionmark estimates (its classes describe closed-shell molecules)", at(mol, a));
         }
         for (IAtom a : mol.atoms()) {
             int z = a.getAtomicNumber();
             if (metal(z)) {
                 throw new StructureException(where(mol, a) + " is a metal: metal complexes and organometallic compounds "
                         + "are outside what Ionmark estimates" + (saltMetal(z) ? "; a salt drawn with a bond to the "
-                                + "metal can be written as ions, for example CC(=O)[O-].[Na+]" : ""));
+                                + "metal can be written as ions, for example CC(=O)[O-].[Na+]" : ""), at(mol, a));
             }
             int q = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
             if (Math.abs(q) > 1) {
                 throw new StructureException(where(mol, a) + " carries a charge of " + String.format("%+d", q)
-                        + ": Ionmark cannot take it to a neutral reference form");
+                        + ": Ionmark cannot take it to a neutral reference form", at(mol, a));
             }
             if (z == 6 && q > 0 && !pairedWith(mol, a, -1)) {
                 throw new StructureException(where(mol, a) + " is a carbocation: Ionmark cannot take it to a neutral "
-                        + "reference form (it treats charges on N, O, S and P and charge pairs such as nitro)");
+                        + "reference form (it treats charges on N, O, S and P and charge pairs such as nitro)", at(mol, a));
             }
             int expected = lowestValence(z) - Math.abs(q);
             if (expected > 0 && !unsetBond(mol, a) && bonded(mol, a) < expected) {
                 throw new StructureException(where(mol, a) + " has " + bonded(mol, a) + " bonds and hydrogens where "
                         + expected + " are needed: a radical or carbene (or hydrogens missing from the drawing); "
-                        + "Ionmark estimates closed-shell molecules only");
+                        + "Ionmark estimates closed-shell molecules only", at(mol, a));
             }
         }
+    }
+
+    private static ErrorPosition at(IAtomContainer mol, IAtom a) {
+        return ErrorPosition.atom(mol.indexOf(a));
     }
 
     private static String where(IAtomContainer mol, IAtom a) {

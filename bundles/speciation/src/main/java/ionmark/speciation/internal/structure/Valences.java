@@ -4,6 +4,8 @@ import org.openscience.cdk.interfaces.IAtom;
 import org.openscience.cdk.interfaces.IAtomContainer;
 import org.openscience.cdk.interfaces.IBond;
 
+import ionmark.speciation.api.ErrorPosition;
+
 /** Rejects atoms with more bonds than their element allows at their charge. */
 final class Valences {
     private Valences() {
@@ -21,14 +23,15 @@ final class Valences {
             IAtom a = mol.getAtom(i);
             int h = a.getImplicitHydrogenCount() == null ? 0 : a.getImplicitHydrogenCount();
             if (h < 0) {
-                throw new StructureException("impossible valence at atom " + (i + 1) + " (" + a.getSymbol() + ")");
+                throw new StructureException("impossible valence at atom " + (i + 1) + " (" + a.getSymbol() + ")",
+                        ErrorPosition.atom(i));
             }
             int order = h + bonded[i];
             int charge = a.getFormalCharge() == null ? 0 : a.getFormalCharge();
             int max = maxValence(a.getAtomicNumber(), charge);
             if (max > 0 && order > max) {
                 throw new StructureException("impossible valence at atom " + (i + 1) + " (" + a.getSymbol()
-                        + (charge != 0 ? String.format("%+d", charge) : "") + " with " + order + " bonds)");
+                        + (charge != 0 ? String.format("%+d", charge) : "") + " with " + order + " bonds)", ErrorPosition.atom(i));
             }
         }
     }
