@@ -69,9 +69,8 @@ class CardCacheTest {
         AnnotatedStructure s = annotated(a, "CC(=O)O", 7.4);
         Analysis x = s.analyses().get(0);
         Analysis other = new Analysis(x.input(), x.smiles(), x.stripped(), x.sites(), x.macroPka(), x.conditions(),
-                x.netCharge(), x.fractionNeutral(), x.fractionUncharged(), x.chargeStates(), x.species(),
-                x.isoelectricPoint(), x.logP(), x.logD(), x.neutralWindows(), x.chargedWindows(), x.corrections(),
-                x.warnings(), x.sampled(), "v999", x.error());
+                x.netCharge(), x.fractionNeutral(), x.fractionUncharged(), x.chargeStates(), x.corrections(),
+                x.warnings(), x.sampled(), "v999", x.uncoveredAtoms(), x.profile(), x.error(), x.errorPosition());
         String before = a.card(s);
         String after = a.card(new AnnotatedStructure(s.block(), s.words(), s.source(), s.structure(), s.conditions(),
                 List.of(other), s.curve(), s.phases(), s.error()));

@@ -10,7 +10,9 @@ import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 
+import ionmark.acidity.api.SiteType;
 import ionmark.notebook.api.Separation;
+import ionmark.speciation.api.Basis;
 import ionmark.speciation.api.Curve;
 import ionmark.speciation.api.Site;
 import ionmark.store.api.AuditEvent;
@@ -30,7 +32,7 @@ class TemplatedPagesTest {
     @Test
     void thePlotsLegendAndItsTooltipAreEscaped() {
         // the curve's tooltip (<title>) was written without escaping
-        Site s = new Site(0, EVIL, "g", "group", "acid", 4.2, 0.3, 0.5, List.of(), "class", false);
+        Site s = new Site(0, EVIL, "g", "group", SiteType.ACID, 4.2, 0.3, 0.5, List.of(), Basis.ESTIMATED, false);
         double[] ph = {0, 7, 14};
         double[] f = {1, 0.5, 0};
         Curve c = new Curve(ph, f, Map.of(0, f), Map.of(0, f));
