@@ -5,6 +5,7 @@ import java.util.Map;
 import java.util.TreeMap;
 
 import ionmark.acidity.api.SiteType;
+import ionmark.speciation.api.Basis;
 import ionmark.speciation.internal.estimate.EstimatedSite;
 import ionmark.speciation.internal.microstates.MacroConstants;
 import ionmark.speciation.internal.microstates.Problem;
@@ -20,7 +21,7 @@ public final class ChargeProfile {
 
     /** Whether every measured value of the problem's measured compound was given to a site. */
     public static boolean measuredFit(Problem p) {
-        return p.sites().stream().filter(s -> s.basis() == ionmark.speciation.api.Basis.MEASURED).count() == p.measured().get().pka().size();
+        return p.sites().stream().filter(s -> s.basis() == Basis.MEASURED).count() == p.measured().get().pka().size();
     }
 
     public static double meanCharge(Problem p, double ph) {
@@ -68,7 +69,7 @@ public final class ChargeProfile {
             }
             i++;
             boolean base = s.site().group().type() == SiteType.BASE;
-            if (s.basis() == ionmark.speciation.api.Basis.MEASURED) {
+            if (s.basis() == Basis.MEASURED) {
                 z0 += base ? 1 : 0;
             } else {
                 boolean dep = unmeasuredDeprotonated(p, i, ph);
@@ -94,7 +95,7 @@ public final class ChargeProfile {
 
     /** Whether a titratable site of the problem has no measured value (it then takes its dominant form). */
     public static boolean hasUnmeasuredSite(Problem p) {
-        return p.sites().stream().anyMatch(s -> !s.site().group().permanent() && !"measured".equals(s.basis()));
+        return p.sites().stream().anyMatch(s -> !s.site().group().permanent() && s.basis() != Basis.MEASURED);
     }
 
     /**
@@ -112,7 +113,7 @@ public final class ChargeProfile {
                 continue;
             }
             j++;
-            if (j == i || !"measured".equals(s.basis())) {
+            if (j == i || s.basis() != Basis.MEASURED) {
                 continue;
             }
             double dep = 1 / (1 + Math.pow(10, m.pka()[j] - ph));
