@@ -22,8 +22,8 @@ import com.fasterxml.jackson.databind.JsonNode;
 
 /**
  * {@code impact --parquet}: one row per structure and pH compared, changed or not, read back by DuckDB (an
- * independent reader). The same change as {@link ImpactJobTest} (the class of lauric acid's site moved up by
- * 2): lauric acid at pH 5 turns from anion to neutral and its row says so with the changed lines; acetic acid
+ * independent reader). The same change as {@link ImpactJobTest} (the phosphinic-acid class moved up by
+ * 2): methyl(octyl)phosphinic acid at pH 5 turns from anion to neutral and its row says so with the changed lines; acetic acid
  * keeps its measured 4.76 (CRC, from memory) and its row is there but not reported; every reported row equals
  * its JSON line; the pinned entry's row carries its version.
  */
@@ -33,12 +33,12 @@ class ImpactParquetTest {
 
     @Test
     void everyComparedStructureAndPhIsOneRowWithBothSidesAndTheChange() throws Exception {
-        Path changed = ImpactJobTest.changedTable(dir, "CCCCCCCCCCCC(=O)O", 2.0);
-        Files.writeString(dir.resolve("set.smi"), "CCCCCCCCCCCC(=O)O lauric-acid\nCC(=O)O acetic-acid\nCCO ethanol\n"
+        Path changed = ImpactJobTest.changedTable(dir, "CCCCCCCCP(C)(=O)O", 2.0);
+        Files.writeString(dir.resolve("set.smi"), "CCCCCCCCP(C)(=O)O methyloctylphosphinic-acid\nCC(=O)O acetic-acid\nCCO ethanol\n"
                 + "c1ccncc1 pyridine\nC1CC( broken\n");
         Path entries = Files.createDirectories(dir.resolve("entries"));
         Files.writeString(entries.resolve("pinned.md"), "# Old work-up\nTable version: v2\n\nAt pH 5 the acid "
-                + "stays in water.\n\n```smiles\nCCCCCCCCCCCC(=O)O\n```\n");
+                + "stays in water.\n\n```smiles\nCCCCCCCCP(C)(=O)O\n```\n");
         Path out = dir.resolve("out");
         List<String> lines = Fixtures.pipeline(out, "impact", "impact", "--in=" + dir.resolve("set.smi") + ","
                 + entries, "--out=" + out, "--ph=5,9", "--before=shipped", "--after=" + changed, "--parquet");
@@ -52,13 +52,13 @@ class ImpactParquetTest {
         Map<String, Row> rows = rows(out);
         // five structures at two pH values, and the pinned entry's one structure at its stated pH 5
         assertEquals(11, rows.size(), rows.keySet().toString());
-        Row lauric = rows.get("lauric-acid @ 5.0");
-        assertTrue(lauric.reported, lauric.toString());
-        assertEquals(-1, lauric.beforeCharge);
-        assertEquals(0, lauric.afterCharge);
-        assertTrue(lauric.delta > 0.3, lauric.toString());
-        assertTrue(lauric.changed.contains("charge state"), lauric.toString());
-        assertTrue(lauric.lines.stream().anyMatch(x -> x.startsWith("+ pKa ")), lauric.toString());
+        Row probe = rows.get("methyloctylphosphinic-acid @ 5.0");
+        assertTrue(probe.reported, probe.toString());
+        assertEquals(-1, probe.beforeCharge);
+        assertEquals(0, probe.afterCharge);
+        assertTrue(probe.delta > 0.3, probe.toString());
+        assertTrue(probe.changed.contains("charge state"), probe.toString());
+        assertTrue(probe.lines.stream().anyMatch(x -> x.startsWith("+ pKa ")), probe.toString());
         Row acetic = rows.get("acetic-acid @ 5.0");
         assertFalse(acetic.reported, acetic.toString());
         assertTrue(acetic.changed.isEmpty());
