@@ -121,7 +121,7 @@ final class TableValidator {
         // specificity parses the pattern: once per class, not once per class, example and rival
         int[] specificity = new int[t.groups().size()];
         for (int i = 0; i < specificity.length; i++) {
-            specificity[i] = compiled.containsKey(t.groups().get(i).id()) ? t.groups().get(i).specificity() : -1;
+            specificity[i] = compiled.containsKey(t.groups().get(i).id()) ? ionmark.acidity.patterns.PatternSpecificity.of(t.groups().get(i).smarts()) : -1;
         }
         for (int i = 0; i < t.groups().size(); i++) {
             GroupClass g = t.groups().get(i);

@@ -71,7 +71,7 @@ public final class CompiledTable {
                 continue;
             }
             g.add(new Group(gc, new RootedPattern(q, site, recursions), site,
-                    centres.stream().mapToInt(Integer::intValue).toArray(), gc.specificity(),
+                    centres.stream().mapToInt(Integer::intValue).toArray(), ionmark.acidity.patterns.PatternSpecificity.of(gc.smarts()),
                     i));
         }
         // most specific first: more pattern atoms, then table order
