@@ -71,7 +71,7 @@ public final class TableFiles {
                 if (t == null) {
                     System.exit(1);
                 }
-                Files.writeString(Path.of(required(opt, "--out")), TableCodec.write(t), StandardCharsets.UTF_8);
+                Files.writeString(Path.of(required(opt, "--out")), TableWriter.write(t), StandardCharsets.UTF_8);
             }
             default -> {
                 System.err.println("usage: split --base FILE --calibrated FILE [--dir DIR] | build --out FILE | "

@@ -138,7 +138,7 @@ public final class TableSnapshotService implements TableService {
 
     @Override
     public String toJson(AcidityTable table) {
-        return TableCodec.write(Objects.requireNonNull(table, "table"));
+        return TableWriter.write(Objects.requireNonNull(table, "table"));
     }
 
     @Override

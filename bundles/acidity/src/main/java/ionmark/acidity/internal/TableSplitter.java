@@ -85,7 +85,7 @@ final class TableSplitter {
             var r = TableValidator.validate(JSON.writeValueAsString(tree));
             problems.addAll(r.problems());
             return r.table().filter(t -> joined).map(t -> t.withVersion(new ionmark.acidity.api.TableVersion(t.version().number(),
-                    t.version().author(), t.version().time(), t.version().comment(), TableCodec.hash(t),
+                    t.version().author(), t.version().time(), t.version().comment(), TableWriter.hash(t),
                     t.version().parent()))).orElse(null);
         } catch (IOException e) {
             problems.add(TableCodec.error("$", "not valid JSON: " + e.getMessage()));
@@ -109,16 +109,16 @@ final class TableSplitter {
         fragments.forEach(frag::put);
         var groups = o.putArray("groups");
         for (GroupClass g : base.groups()) {
-            ObjectNode n = TableCodec.groupNode(g);
+            ObjectNode n = TableWriter.groupNode(g);
             n.put("smarts", SplitFormat.abbreviate(g.smarts(), fragments));
             groups.add(n);
         }
         var subs = o.putArray("substituents");
-        base.substituents().forEach(x -> subs.add(TableCodec.substituentNode(x)));
+        base.substituents().forEach(x -> subs.add(TableWriter.substituentNode(x)));
         var measured = o.putArray("measured");
-        base.measured().forEach(x -> measured.add(TableCodec.measuredNode(x)));
+        base.measured().forEach(x -> measured.add(TableWriter.measuredNode(x)));
         var pairs = o.putArray("pairs");
-        base.pairs().forEach(x -> pairs.add(TableCodec.pairNode(x).put("smarts",
+        base.pairs().forEach(x -> pairs.add(TableWriter.pairNode(x).put("smarts",
                 SplitFormat.abbreviate(x.smarts(), fragments))));
         ObjectNode in = o.putObject("interaction");
         var sh = in.putArray("shifts");
@@ -166,7 +166,7 @@ final class TableSplitter {
             for (int i = 0; i < cv.length; i++) {
                 if (!same(bv[i], cv[i])) {
                     String f = SplitFormat.FITTED_FIELDS.get(i);
-                    TableCodec.num(e, f, cv[i]);
+                    TableWriter.num(e, f, cv[i]);
                     put(before, f, bv[i]);
                     put(after, f, cv[i]);
                 }
@@ -189,7 +189,7 @@ final class TableSplitter {
             String log = log(b.note(), g.note());
             if (!e.isEmpty() || !log.isEmpty()) {
                 ClassFit known = cal.fit(g.id()).orElse(null);
-                e.set("fit", TableCodec.fitNode(log.isEmpty() && known != null ? known
+                e.set("fit", TableWriter.fitNode(log.isEmpty() && known != null ? known
                         : provenance(src, log, cal, before, after)));
                 classes.set(g.id(), e);
             }
@@ -219,7 +219,7 @@ final class TableSplitter {
             String log = log(b.note(), r.note());
             if (!e.isEmpty() || !log.isEmpty()) {
                 ClassFit known = cal.fit("pair:" + r.id()).orElse(null);
-                e.set("fit", TableCodec.fitNode(log.isEmpty() && known != null ? known
+                e.set("fit", TableWriter.fitNode(log.isEmpty() && known != null ? known
                         : provenance(src, log, cal, before, after)));
                 pairs.set(r.id(), e);
             }
@@ -282,7 +282,7 @@ final class TableSplitter {
                 .withReferences(t.references().stream().sorted(Comparator.comparing(Reference::id)).toList());
         var v = t.version();
         String text = v.number() + "|" + v.author() + "|" + v.time() + "|" + v.comment() + "|" + v.parent() + "\n"
-                + TableCodec.write(bare.withVersion(new ionmark.acidity.api.TableVersion(0, "", "", "", "", 0)));
+                + TableWriter.write(bare.withVersion(new ionmark.acidity.api.TableVersion(0, "", "", "", "", 0)));
         try {
             return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
                     .digest(text.getBytes(StandardCharsets.UTF_8)));
@@ -293,8 +293,8 @@ final class TableSplitter {
 
     /** The first line where the two tables' fingerprint texts differ, for the error message. */
     static String firstDifference(AcidityTable a, AcidityTable b) {
-        String[] x = TableCodec.write(a.withFits(Map.of())).split("\n");
-        String[] y = TableCodec.write(b.withFits(Map.of())).split("\n");
+        String[] x = TableWriter.write(a.withFits(Map.of())).split("\n");
+        String[] y = TableWriter.write(b.withFits(Map.of())).split("\n");
         for (int i = 0; i < Math.min(x.length, y.length); i++) {
             if (!Objects.equals(x[i], y[i])) {
                 return "line " + (i + 1) + ":\n  built:      " + x[i] + "\n  calibrated: " + y[i];

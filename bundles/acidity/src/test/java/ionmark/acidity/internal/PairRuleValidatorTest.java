@@ -31,9 +31,9 @@ class PairRuleValidatorTest {
         assertEquals(1.1, p.singly());
         assertEquals(1.2, p.doubly());
         assertEquals(3.4, p.interaction(), 1e-12);
-        AcidityTable again = TableCodec.read(TableCodec.write(t)).table();
+        AcidityTable again = TableCodec.read(TableWriter.write(t)).table();
         assertEquals(t.pairs(), again.pairs());
-        assertEquals(TableCodec.hash(t), TableCodec.hash(again));
+        assertEquals(TableWriter.hash(t), TableWriter.hash(again));
     }
 
     @Test
@@ -41,7 +41,7 @@ class PairRuleValidatorTest {
         // older tables keep their content hash: no empty block appears
         AcidityTable t = TableValidator.validate(ValidatorTest.VALID).table().orElseThrow();
         assertTrue(t.pairs().isEmpty());
-        assertFalse(TableCodec.write(t).contains("\"pairs\""));
+        assertFalse(TableWriter.write(t).contains("\"pairs\""));
     }
 
     @Test

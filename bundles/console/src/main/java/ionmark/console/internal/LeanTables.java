@@ -60,7 +60,7 @@ final class LeanTables implements TableService {
 
     /** The table's content hash, as the codec computes it. */
     static String hash(AcidityTable t) {
-        return (String) call("TableCodec", "hash", new Class<?>[] {AcidityTable.class}, t);
+        return (String) call("TableWriter", "hash", new Class<?>[] {AcidityTable.class}, t);
     }
 
     private static Object call(String type, String method, Class<?>[] params, Object... args) {
@@ -91,7 +91,7 @@ final class LeanTables implements TableService {
 
     @Override
     public String toJson(AcidityTable table) {
-        return (String) call("TableCodec", "write", new Class<?>[] {AcidityTable.class}, table);
+        return (String) call("TableWriter", "write", new Class<?>[] {AcidityTable.class}, table);
     }
 
     @Override
