@@ -41,18 +41,23 @@ public final class AlternatingRatio {
         long end = start + (long) (seconds * 1e9);
         while (System.nanoTime() < end) {
             for (String smi : Molecules.DRUG_LIKE) {
-                if (floor) {
-                    IAtomContainer mol = parser.parseSmiles(smi);
-                    Cycles.markRingAtomsAndBonds(mol);
-                    aromaticity.apply(mol);
-                    sink = mol;
-                } else {
-                    sink = engine.analyse(smi, ph74, true);
-                }
+                one(floor, smi);
                 n++;
             }
         }
         return n * 1e9 / (System.nanoTime() - start);
+    }
+
+    /** One molecule of the floor (parse, rings, aromaticity) or of brief end to end; {@link CpuRatio} uses it too. */
+    void one(boolean floor, String smi) throws CDKException {
+        if (floor) {
+            IAtomContainer mol = parser.parseSmiles(smi);
+            Cycles.markRingAtomsAndBonds(mol);
+            aromaticity.apply(mol);
+            sink = mol;
+        } else {
+            sink = engine.analyse(smi, ph74, true);
+        }
     }
 
     public static void main(String[] args) throws CDKException {

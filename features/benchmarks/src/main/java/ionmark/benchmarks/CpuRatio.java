@@ -5,17 +5,7 @@ import java.lang.management.ThreadMXBean;
 import java.util.Arrays;
 import java.util.Locale;
 
-import org.openscience.cdk.aromaticity.Aromaticity;
-import org.openscience.cdk.aromaticity.ElectronDonation;
 import org.openscience.cdk.exception.CDKException;
-import org.openscience.cdk.graph.Cycles;
-import org.openscience.cdk.interfaces.IAtomContainer;
-import org.openscience.cdk.silent.SilentChemObjectBuilder;
-import org.openscience.cdk.smiles.SmilesParser;
-
-import ionmark.acidity.internal.TableSnapshotService;
-import ionmark.speciation.api.Conditions;
-import ionmark.speciation.internal.Engine;
 
 /**
  * {@link AlternatingRatio}'s two loops (the parse floor and the brief path over {@link Molecules#DRUG_LIKE}),
@@ -29,19 +19,12 @@ import ionmark.speciation.internal.Engine;
 public final class CpuRatio {
     private static final int ROUNDS = 6;
     private static final long ROUND_NANOS = 500_000_000L;
-    /** Keeps results reachable so that the work cannot be dropped. */
-    static volatile Object sink;
 
     private CpuRatio() {
     }
 
-    // CDK 2.11 deprecates daylight() without a public replacement; the benchmark needs the engine's Daylight model
-    @SuppressWarnings("deprecation")
     public static void main(String[] args) throws CDKException {
-        Engine engine = new Engine(TableSnapshotService.shipped(), 300);
-        SmilesParser parser = new SmilesParser(SilentChemObjectBuilder.getInstance());
-        Aromaticity aromaticity = new Aromaticity(ElectronDonation.daylight(), Cycles.or(Cycles.all(), Cycles.all(6)));
-        Conditions ph74 = Conditions.atPh(7.4);
+        AlternatingRatio work = new AlternatingRatio();
         ThreadMXBean cpu = ManagementFactory.getThreadMXBean();
         double[] floor = new double[ROUNDS];
         double[] brief = new double[ROUNDS];
@@ -51,14 +34,7 @@ public final class CpuRatio {
                 long start = cpu.getCurrentThreadCpuTime();
                 while (cpu.getCurrentThreadCpuTime() - start < ROUND_NANOS) {
                     for (String smi : Molecules.DRUG_LIKE) {
-                        if (side == 0) {
-                            IAtomContainer mol = parser.parseSmiles(smi);
-                            Cycles.markRingAtomsAndBonds(mol);
-                            aromaticity.apply(mol);
-                            sink = mol;
-                        } else {
-                            sink = engine.analyse(smi, ph74, true);
-                        }
+                        work.one(side == 0, smi);
                         n++;
                     }
                 }
