@@ -54,6 +54,11 @@ class AdminWorkflowHttpTest {
     }
 
     static HttpResponse<String> get(String path, String cookie) throws Exception {
+        return get(base, path, cookie);
+    }
+
+    /** A GET on the notebook at {@code base}, with the session cookie when there is one (other tests use it too). */
+    static HttpResponse<String> get(String base, String path, String cookie) throws Exception {
         HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path));
         if (cookie != null) {
             b.header("Cookie", cookie);
@@ -62,6 +67,12 @@ class AdminWorkflowHttpTest {
     }
 
     static HttpResponse<String> post(String path, String cookie, Map<String, String> form) throws Exception {
+        return post(base, path, cookie, form);
+    }
+
+    /** A form POST to the notebook at {@code base}, with the session cookie when there is one. */
+    static HttpResponse<String> post(String base, String path, String cookie, Map<String, String> form)
+            throws Exception {
         String body = form.entrySet().stream().map(e -> e.getKey() + "=" + URLEncoder.encode(e.getValue(),
                 StandardCharsets.UTF_8)).collect(Collectors.joining("&"));
         HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path))

@@ -17,7 +17,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
-import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -74,28 +73,15 @@ class PagePolicyHttpTest {
     }
 
     static HttpResponse<String> get(String path) throws Exception {
-        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path));
-        if (cookie != null) {
-            b.header("Cookie", cookie);
-        }
-        return HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString());
+        return AdminWorkflowHttpTest.get(base, path, cookie);
     }
 
     static HttpResponse<String> post(String path, Map<String, String> form) throws Exception {
-        String body = form.entrySet().stream().map(e -> e.getKey() + "=" + URLEncoder.encode(e.getValue(),
-                StandardCharsets.UTF_8)).collect(Collectors.joining("&"));
-        HttpRequest.Builder b = HttpRequest.newBuilder(URI.create(base + path))
-                .header("Content-Type", "application/x-www-form-urlencoded").POST(HttpRequest.BodyPublishers.ofString(body));
-        if (cookie != null) {
-            b.header("Cookie", cookie);
-        }
-        return HTTP.send(b.build(), HttpResponse.BodyHandlers.ofString());
+        return AdminWorkflowHttpTest.post(base, path, cookie, form);
     }
 
     static String token(String html) {
-        Matcher m = Pattern.compile("name=\"token\" value=\"([0-9a-f]+)\"").matcher(html);
-        assertTrue(m.find(), "no CSRF token in the page");
-        return m.group(1);
+        return AdminWorkflowHttpTest.token(html);
     }
 
     static String q(String s) {
