@@ -1,5 +1,7 @@
 package ionmark.console.internal;
 
+import java.util.Locale;
+
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
@@ -50,6 +52,11 @@ public final class AnalysisJson {
         o.put("input", a.input());
         if (!a.ok()) {
             o.put("error", a.error());
+            if (a.errorPosition() != null) {
+                // where the reader stopped: a character offset into the SMILES, or a 0-based atom index
+                o.putObject("errorPosition").put("unit", a.errorPosition().unit().name().toLowerCase(Locale.ROOT))
+                        .put("index", a.errorPosition().index());
+            }
             o.put("tableVersion", a.tableVersion());
             o.putArray("sites");
             o.putArray("macroPka");

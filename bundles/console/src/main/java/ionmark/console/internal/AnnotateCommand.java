@@ -162,6 +162,9 @@ final class AnnotateCommand {
             c.notes().forEach(n -> sb.append("  note: ").append(n).append('\n'));
             if (!s.ok()) {
                 sb.append("  error: ").append(s.error() != null ? s.error() : s.analyses().get(0).error()).append('\n');
+                if (!s.analyses().isEmpty()) {
+                    sb.append(TextReport.caret(s.analyses().get(0)));
+                }
                 continue;
             }
             var a = s.analyses().get(0);

@@ -79,6 +79,18 @@ class AnnotateCommandTest {
     }
 
     @Test
+    void anUnreadableStructureShowsWhereTheReaderStopped() throws Exception {
+        String entry = "at pH 7\n\n```smiles\nCC(=O)Ox\n```\n";
+        Run text = run(entry, "--format", "text");
+        assertEquals(1, text.code(), text.out());
+        assertTrue(text.out().contains("\n  CC(=O)Ox\n         ^\n"), text.out()); // under the x, the eighth character
+        Run json = run(entry);
+        JsonNode at = AnalysisJson.JSON.readTree(json.out()).get("structures").get(0).get("analysis").get("errorPosition");
+        assertEquals("character", at.get("unit").asText(), json.out());
+        assertEquals(7, at.get("index").asInt());
+    }
+
+    @Test
     void withoutTheNotebookItSaysSo() {
         AnnotateCommand c = new AnnotateCommand(null, System.out, new PrintStream(new ByteArrayOutputStream()));
         assertEquals(1, c.run(List.of("x.md")));

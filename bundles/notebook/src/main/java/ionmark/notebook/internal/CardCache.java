@@ -1,6 +1,5 @@
 package ionmark.notebook.internal;
 
-import java.util.Arrays;
 import java.util.Map;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
@@ -163,39 +162,14 @@ final class CardCache {
             this.structure = new AnnotatedStructure(s.block(), s.words(), s.source(), s.structure(), s.conditions(),
                     s.analyses(), null, s.phases(), s.error());
             this.curve = s.curve();
-            this.hash = 31 * structure.hashCode() + curveHash(curve);
+            this.hash = 31 * structure.hashCode() + Objects.hashCode(curve);
         }
 
-        private static int curveHash(Curve c) {
-            if (c == null) {
-                return 0;
-            }
-            int h = Arrays.hashCode(c.ph());
-            for (var e : c.siteProtonated().entrySet()) {
-                h = 31 * h + e.getKey() * 7 + Arrays.hashCode(e.getValue());
-            }
-            return h;
-        }
-
-        private static boolean sameCurve(Curve a, Curve b) {
-            if (a == null || b == null) {
-                return a == b;
-            }
-            if (!Arrays.equals(a.ph(), b.ph()) || !a.siteProtonated().keySet().equals(b.siteProtonated().keySet())) {
-                return false;
-            }
-            for (var e : a.siteProtonated().entrySet()) {
-                if (!Arrays.equals(e.getValue(), b.siteProtonated().get(e.getKey()))) {
-                    return false;
-                }
-            }
-            return true;
-        }
 
         @Override
         public boolean equals(Object o) {
             return o instanceof Key k && k.hash == hash && Objects.equals(k.structure, structure)
-                    && sameCurve(k.curve, curve);
+                    && Objects.equals(k.curve, curve);
         }
 
         @Override

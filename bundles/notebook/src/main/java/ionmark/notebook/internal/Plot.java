@@ -74,13 +74,12 @@ final class Plot {
         List<Line> lines = new ArrayList<>();
         for (int k = 0; k < sites.size(); k++) {
             Site s = sites.get(k);
-            double[] f = c.siteProtonated().get(s.atom());
-            if (f == null) {
+            if (!c.siteAtoms().contains(s.atom())) {
                 continue;
             }
             StringBuilder d = new StringBuilder();
-            for (int i = 0; i < f.length; i++) {
-                d.append(i == 0 ? "M" : "L").append(f1(x(c.ph()[i]))).append(' ').append(f1(y(f[i])));
+            for (int i = 0; i < c.size(); i++) {
+                d.append(i == 0 ? "M" : "L").append(f1(x(c.phAt(i)))).append(' ').append(f1(y(c.protonatedAt(s.atom(), i))));
             }
             String dash = DASH[k % DASH.length];
             lines.add(new Line(d.toString(), s.type() == SiteType.ACID ? "#6a3d9a" : "#1b7837", dash.isEmpty() ? null : dash,

@@ -1,6 +1,5 @@
 package ionmark.speciation.internal;
 
-import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicLong;
@@ -61,15 +60,14 @@ final class ResultCache {
         }
     }
 
-    /** The cached curve as a copy (its arrays are the caller's); null on a miss. */
+    /** The cached curve (immutable, so shared as it is); null on a miss. */
     Curve curve(Key k) {
-        Curve c = (Curve) get(k);
-        return c == null ? null : copy(c);
+        return (Curve) get(k);
     }
 
     void put(Key k, Curve c) {
         if (k != null) {
-            store(k, copy(c));
+            store(k, c);
         }
     }
 
@@ -122,13 +120,5 @@ final class ResultCache {
             return a;
         }
         return a.withInput(input);
-    }
-
-    static Curve copy(Curve c) {
-        Map<Integer, double[]> sites = new LinkedHashMap<>();
-        c.siteProtonated().forEach((k, v) -> sites.put(k, v.clone()));
-        Map<Integer, double[]> states = new java.util.TreeMap<>();
-        c.chargeStates().forEach((k, v) -> states.put(k, v.clone()));
-        return new Curve(c.ph().clone(), c.meanCharge().clone(), sites, states);
     }
 }

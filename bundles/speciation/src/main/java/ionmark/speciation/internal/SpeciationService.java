@@ -204,8 +204,8 @@ public final class SpeciationService implements Speciation, TableRegression, Mod
             }
             return o.value();
         });
-        // requests that shared one computation must not share its arrays
-        return result.ok() ? CurveResult.of(ResultCache.copy(result.curve())) : result;
+        // a Curve is immutable: requests that shared one computation may share the result itself
+        return result;
     }
 
     @Override

@@ -111,7 +111,7 @@ class ResultCacheTest {
     }
 
     @Test
-    void aCurveIsKeptAsACopy() {
+    void aCachedCurveCannotBeChangedByACaller() {
         SpeciationService s = new SpeciationService(TableSnapshotService.shipped(), 300, 600_000, 1, 10);
         try {
             Curve c = s.curve("CC(=O)O", Conditions.noPh(), 0, 14, 0.5).curve();
