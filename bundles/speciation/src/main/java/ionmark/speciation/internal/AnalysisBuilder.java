@@ -6,8 +6,6 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.openscience.cdk.interfaces.IAtomContainer;
-import org.openscience.cdk.qsar.descriptors.molecular.JPlogPDescriptor;
-import org.openscience.cdk.qsar.result.DoubleResult;
 
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.GroupClass;
@@ -28,6 +26,7 @@ import ionmark.speciation.internal.microstates.Problem;
 import ionmark.speciation.internal.microstates.SiteInteractions;
 import ionmark.speciation.internal.profile.ChargeProfile;
 import ionmark.speciation.internal.profile.ClassProvenance;
+import ionmark.speciation.internal.profile.OctanolLogP;
 import ionmark.speciation.internal.profile.Partition;
 import ionmark.speciation.internal.profile.SpeciesList;
 import ionmark.speciation.internal.profile.WaterRange;
@@ -85,7 +84,7 @@ final class AnalysisBuilder {
                             + "CRC, from memory); left out of the macroscopic constants and the isoelectric point",
                     w.pka(), w.sd())));
         }
-        double logP = brief ? Double.NaN : logP(mol);
+        double logP = brief ? Double.NaN : OctanolLogP.of(mol);
         Double netCharge = null;
         Double neutral = null;
         Double uncharged = null;
@@ -172,13 +171,4 @@ final class AnalysisBuilder {
                 p.uncovered(), profile, null, null);
     }
 
-    private static double logP(IAtomContainer mol) {
-        try {
-            IAtomContainer copy = mol.clone();
-            var v = QuietLogP.quietly(() -> new JPlogPDescriptor().calculate(copy).getValue());
-            return v instanceof DoubleResult d ? Math.round(d.doubleValue() * 100) / 100.0 : Double.NaN;
-        } catch (CloneNotSupportedException | RuntimeException e) {
-            return Double.NaN;
-        }
-    }
 }
