@@ -29,6 +29,18 @@ public record SiteInteraction(List<double[]> shifts, double decay, double cutoff
         reach = reach == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.TreeMap<>(reach));
     }
 
+    /** The pairs {@code [bonds, pKa units]}, as copies: the rule cannot be changed through them. */
+    @Override
+    public List<double[]> shifts() {
+        return shifts.stream().map(double[]::clone).toList();
+    }
+
+    /** The per-class factors, read-only, in class-id order. */
+    @Override
+    public Map<String, Double> reach() {
+        return java.util.Collections.unmodifiableMap(reach);
+    }
+
     /** Without per-class factors. */
     public SiteInteraction(List<double[]> shifts, double decay, double cutoff, String source, List<String> exempt) {
         this(shifts, decay, cutoff, source, exempt, Map.of());
