@@ -23,8 +23,14 @@ public final class AnalogCorrection {
     private AnalogCorrection() {
     }
 
-    /** An analog used, its weight, and whether that weight was cut for a residual far from the others'. */
-    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
+    /**
+     * An analog used, its weight, whether that weight was cut for a residual far from the others', and whether it
+     * was found only at the fallback radius.
+     */
+    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped, boolean near) {
+        Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
+            this(site, similarity, weight, damped, false);
+        }
     }
 
     public static List<EstimatedSite> apply(SiteAnalogIndex index, MatchTarget mol, List<EstimatedSite> est) {
@@ -47,23 +53,24 @@ public final class AnalogCorrection {
             if (ids == null) {
                 ids = Morgan.identifiers(mol, index.settings().radius());
             }
-            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
+            int fr = index.settings().fallbackRadius();
+            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()),
+                    fr > 0 ? SiteEnvironment.of(mol, ids, s.site(), fr) : null, s, cands));
         }
         return out;
     }
 
-    /** {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment. */
-    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, EstimatedSite s,
+    /**
+     * {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment;
+     * {@code envNear}: its environment at the fallback radius, null when that is off.
+     */
+    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, int[] envNear, EstimatedSite s,
             List<SiteAnalogIndex.MeasuredSite> cands) {
         AnalogSettings cfg = index.settings();
-        // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
-        java.util.Map<String, Used> best = new java.util.HashMap<>();
-        for (SiteAnalogIndex.MeasuredSite m : cands) {
-            double sim = SiteEnvironment.tanimoto(env, m.env());
-            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
-            if (w > 0) {
-                best.merge(m.compound().id(), new Used(m, sim, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
-            }
+        java.util.Map<String, Used> best = similar(cfg, env, s, cands, false);
+        if (best.isEmpty() && envNear != null) {
+            // no analog at the full radius: compare the nearer surroundings only, at reduced weight
+            best = similar(cfg, envNear, s, cands, true);
         }
         if (best.isEmpty()) {
             return s;
@@ -74,24 +81,44 @@ public final class AnalogCorrection {
         if (used.size() > cfg.maxAnalogs()) {
             used = used.subList(0, cfg.maxAnalogs());
         }
+        double prior = cfg.prior(used.get(0).weight()); // the heaviest analog before the robust cut
         if (cfg.huber() > 0 && used.size() > 2) {
             used = robust(used, cfg.huber());
         }
         double sumW = used.stream().mapToDouble(Used::weight).sum();
         double mean = used.stream().mapToDouble(u -> u.weight() * u.site().residual()).sum() / sumW;
         double spread = used.stream().mapToDouble(u -> u.weight() * sq(u.site().residual() - mean)).sum() / sumW;
-        double denom = cfg.prior() + sumW;
+        double denom = prior + sumW;
         // the class sd shrinks by at most √0.75 however many analogs agree: a residual carries the
         // measurement's own error and the model's error at the analog, not only the shared part (with full
         // shrinkage, prior/(prior + Σw), within-1-sd on the development set fell from 0.725 to 0.705)
-        double sd = Math.max(MIN_SD, Math.sqrt(sq(s.sd()) * (cfg.prior() + 0.75 * sumW) / denom + spread * sumW / denom));
+        double sd = Math.max(MIN_SD, Math.sqrt(sq(s.sd()) * (prior + 0.75 * sumW) / denom + spread * sumW / denom));
         EstimatedSite now = s;
         for (int i = 0; i < used.size(); i++) {
             Used u = used.get(i);
             double part = u.weight() * u.site().residual() / denom;
-            now = now.shifted(part, term(u, part, denom, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
+            now = now.shifted(part, term(u, part, denom, prior, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
         }
         return now;
+    }
+
+    /**
+     * The candidates whose environment resembles {@code env}, one per measured compound (its most similar site:
+     * symmetric sites such as citric acid's two CH2COOH count once), weighted by the kernel, the family factor and,
+     * at the fallback radius, the fallback factor.
+     */
+    private static java.util.Map<String, Used> similar(AnalogSettings cfg, int[] env, EstimatedSite s,
+            List<SiteAnalogIndex.MeasuredSite> cands, boolean near) {
+        java.util.Map<String, Used> best = new java.util.HashMap<>();
+        for (SiteAnalogIndex.MeasuredSite m : cands) {
+            double sim = SiteEnvironment.tanimoto(env, near ? m.envNear() : m.env());
+            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight())
+                    * (near ? cfg.fallbackWeight() : 1);
+            if (w > 0) {
+                best.merge(m.compound().id(), new Used(m, sim, w, false, near), (a, b) -> a.weight() >= b.weight() ? a : b);
+            }
+        }
+        return best;
     }
 
     /**
@@ -115,7 +142,7 @@ public final class AnalogCorrection {
         List<Used> out = new ArrayList<>(used.size());
         for (Used u : used) {
             double d = Math.abs(u.site().residual() - median);
-            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true));
+            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true, u.near()));
         }
         return out;
     }
@@ -151,7 +178,7 @@ public final class AnalogCorrection {
     /** How {@link PairRules} starts the derivation line of a pair rule. */
     static final String PAIR_RULE = "pair rule ";
 
-    private static Term term(Used u, double part, double denom, AnalogSettings cfg) {
+    private static Term term(Used u, double part, double denom, double prior, AnalogSettings cfg) {
         SiteAnalogIndex.MeasuredSite m = u.site();
         // "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant
         // %.2f, local similarity %.2f, weight %.2f of %.2f (prior %.1f)", written without a Formatter (Decimals)
@@ -168,7 +195,19 @@ public final class AnalogCorrection {
         Decimals.append(label.append(", local similarity "), u.similarity(), 2, false);
         Decimals.append(label.append(", weight "), u.weight(), 2, false);
         Decimals.append(label.append(" of "), denom, 2, false);
-        Decimals.append(label.append(" (prior "), cfg.prior(), 2, false).append(')');
+        Decimals.append(label.append(" (prior "), prior, 2, false).append(')');
+        if (cfg.nearPrior() != cfg.prior()) {
+            Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
+                    .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
+        }
+        if (u.near()) {
+            label.append("; compared within ").append(cfg.fallbackRadius()).append(" bonds of the site only (none similar within ")
+                    .append(cfg.radius()).append("), weight times ");
+            Decimals.append(label, cfg.fallbackWeight(), 2, false);
+        }
+        if (m.shared()) {
+            label.append("; the measured step is shared with a near-equal site of that compound, whose residual this is");
+        }
         if (u.damped()) {
             label.append("; weight cut: residual far from the other analogs'");
         }
