@@ -39,13 +39,12 @@ final class SeriesCommand {
 
     int run(List<String> raw) {
         Cli.Args a = Cli.Args.parse(raw, Set.of("--truth", "--radius", "--threshold", "--prior", "--kernel", "--family",
-                "--huber", "--near-prior", "--fallback-radius", "--fallback-weight", "--shared-step", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
+                "--huber", "--near-prior", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
         Map<String, String> settings = new TreeMap<>();
-        for (String k : List.of("radius", "threshold", "prior", "family", "huber", "near-prior", "fallback-radius",
-                "fallback-weight", "shared-step")) {
+        for (String k : List.of("radius", "threshold", "prior", "family", "huber", "near-prior")) {
             if (a.flags().containsKey("--" + k)) {
                 double v = a.number("--" + k);
-                settings.put("ionmark.analog." + k, k.endsWith("radius") ? Integer.toString((int) v) : Double.toString(v));
+                settings.put("ionmark.analog." + k, k.equals("radius") ? Integer.toString((int) v) : Double.toString(v));
             }
         }
         if (a.flags().containsKey("--kernel")) {

@@ -47,62 +47,18 @@ final class MeasuredSites {
                 List<Double> model = engine.modelConstants(m.smiles()).stream()
                         .filter(v -> v >= AnalysisBuilder.MACRO_LOW && v <= AnalysisBuilder.MACRO_HIGH).sorted().toList();
                 MatchTarget target = new MatchTarget(p.prepared().molecule());
-                List<EstimatedSite> assigned = new ArrayList<>();
-                List<double[]> steps = new ArrayList<>(); // per assigned site: model constant, residual
                 for (int[] pair : MacroPairing.assign(m.pka(), model)) {
                     EstimatedSite s = fitted.get(pair[0]);
                     double residual = m.pka().get(pair[0]) - model.get(pair[1]);
-                    out.add(site(engine, m, target, s, model.get(pair[1]), residual, settings, false));
-                    assigned.add(s);
-                    steps.add(new double[] {model.get(pair[1]), residual});
-                }
-                if (settings.sharedStep() > 0) {
-                    sharers(engine, m, target, p.sites(), assigned, steps, settings, out);
+                    out.add(new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
+                            SiteEnvironment.of(target, s.site(), settings.radius()), model.get(pair[1]), residual,
+                            engine.table().citation(m.source()), AnalogCorrection.heldBy(s)));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has read every measured structure; one that fails here serves as no analog
             }
         }
         return new SiteAnalogIndex(out, settings);
-    }
-
-    private static SiteAnalogIndex.MeasuredSite site(Engine engine, MeasuredCompound m, MatchTarget target,
-            EstimatedSite s, double model, double residual, AnalogSettings settings, boolean shared) {
-        return new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
-                SiteEnvironment.of(target, s.site(), settings.radius()), model, residual,
-                engine.table().citation(m.source()), AnalogCorrection.heldBy(s),
-                settings.fallbackRadius() > 0 ? SiteEnvironment.of(target, s.site(), settings.fallbackRadius())
-                        : new int[0], shared);
-    }
-
-    /**
-     * Sites that share a measured step: a site that took no measured value but whose model value lies within
-     * {@code sharedStep} units of a site of the same type that took one carries that step's residual too. Two such
-     * sites (a fused bicycle's two ring nitrogens) both feed the macroscopic constant, and the measurement says how
-     * far the model is off for the pair, not which of the two is; without this, an analog whose own measured value
-     * goes to the other site of the pair learns nothing.
-     */
-    private static void sharers(Engine engine, MeasuredCompound m, MatchTarget target, List<EstimatedSite> all,
-            List<EstimatedSite> assigned, List<double[]> steps, AnalogSettings settings,
-            List<SiteAnalogIndex.MeasuredSite> out) {
-        for (EstimatedSite e : all) {
-            if (e.basis() == ionmark.speciation.api.Basis.MEASURED || e.site().group().permanent()) {
-                continue;
-            }
-            int best = -1;
-            double gap = settings.sharedStep();
-            for (int i = 0; i < assigned.size(); i++) {
-                EstimatedSite a = assigned.get(i);
-                double d = Math.abs(e.pka() - beforeFit(a));
-                if (a.site().group().type() == e.site().group().type() && d <= gap) {
-                    best = i;
-                    gap = d;
-                }
-            }
-            if (best >= 0) {
-                out.add(site(engine, m, target, e, steps.get(best)[0], steps.get(best)[1], settings, true));
-            }
-        }
     }
 
     /** The site's value before the measured fit: the fit is its derivation's last line. */

@@ -12,7 +12,8 @@ import ionmark.speciation.internal.sites.MatchTarget;
  * Moves each estimated site toward its measured analogs: sites of the same class (or, with less weight,
  * the same family) whose local environment resembles the query site's. The shift is a kernel-weighted,
  * shrunk mean of the analogs' residuals, Σ wᵢrᵢ / (prior + Σ wᵢ): one distant analog moves a site little,
- * several close ones most of the way. The sd shrinks a little with the evidence and widens with the
+ * several close ones most of the way. The prior count can fall with the nearest analog's weight
+ * ({@link AnalogSettings#prior(double)}). The sd shrinks a little with the evidence and widens with the
  * analogs' disagreement. Every analog used is one line of the derivation (name, similarity, residual, weight,
  * source), and the lines add up to the shift. A site without an analog above the threshold is returned
  * as it was, the same object.
@@ -23,14 +24,8 @@ public final class AnalogCorrection {
     private AnalogCorrection() {
     }
 
-    /**
-     * An analog used, its weight, whether that weight was cut for a residual far from the others', and whether it
-     * was found only at the fallback radius.
-     */
-    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped, boolean near) {
-        Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
-            this(site, similarity, weight, damped, false);
-        }
+    /** An analog used, its weight, and whether that weight was cut for a residual far from the others'. */
+    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
     }
 
     public static List<EstimatedSite> apply(SiteAnalogIndex index, MatchTarget mol, List<EstimatedSite> est) {
@@ -53,24 +48,23 @@ public final class AnalogCorrection {
             if (ids == null) {
                 ids = Morgan.identifiers(mol, index.settings().radius());
             }
-            int fr = index.settings().fallbackRadius();
-            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()),
-                    fr > 0 ? SiteEnvironment.of(mol, ids, s.site(), fr) : null, s, cands));
+            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
         }
         return out;
     }
 
-    /**
-     * {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment;
-     * {@code envNear}: its environment at the fallback radius, null when that is off.
-     */
-    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, int[] envNear, EstimatedSite s,
+    /** {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment. */
+    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, EstimatedSite s,
             List<SiteAnalogIndex.MeasuredSite> cands) {
         AnalogSettings cfg = index.settings();
-        java.util.Map<String, Used> best = similar(cfg, env, s, cands, false);
-        if (best.isEmpty() && envNear != null) {
-            // no analog at the full radius: compare the nearer surroundings only, at reduced weight
-            best = similar(cfg, envNear, s, cands, true);
+        // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
+        java.util.Map<String, Used> best = new java.util.HashMap<>();
+        for (SiteAnalogIndex.MeasuredSite m : cands) {
+            double sim = SiteEnvironment.tanimoto(env, m.env());
+            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
+            if (w > 0) {
+                best.merge(m.compound().id(), new Used(m, sim, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
+            }
         }
         if (best.isEmpty()) {
             return s;
@@ -81,7 +75,7 @@ public final class AnalogCorrection {
         if (used.size() > cfg.maxAnalogs()) {
             used = used.subList(0, cfg.maxAnalogs());
         }
-        double prior = cfg.prior(used.get(0).weight()); // the heaviest analog before the robust cut
+        double prior = cfg.prior(used.get(0).weight()); // the nearest analog's weight, before the robust cut
         if (cfg.huber() > 0 && used.size() > 2) {
             used = robust(used, cfg.huber());
         }
@@ -100,25 +94,6 @@ public final class AnalogCorrection {
             now = now.shifted(part, term(u, part, denom, prior, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
         }
         return now;
-    }
-
-    /**
-     * The candidates whose environment resembles {@code env}, one per measured compound (its most similar site:
-     * symmetric sites such as citric acid's two CH2COOH count once), weighted by the kernel, the family factor and,
-     * at the fallback radius, the fallback factor.
-     */
-    private static java.util.Map<String, Used> similar(AnalogSettings cfg, int[] env, EstimatedSite s,
-            List<SiteAnalogIndex.MeasuredSite> cands, boolean near) {
-        java.util.Map<String, Used> best = new java.util.HashMap<>();
-        for (SiteAnalogIndex.MeasuredSite m : cands) {
-            double sim = SiteEnvironment.tanimoto(env, near ? m.envNear() : m.env());
-            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight())
-                    * (near ? cfg.fallbackWeight() : 1);
-            if (w > 0) {
-                best.merge(m.compound().id(), new Used(m, sim, w, false, near), (a, b) -> a.weight() >= b.weight() ? a : b);
-            }
-        }
-        return best;
     }
 
     /**
@@ -142,7 +117,7 @@ public final class AnalogCorrection {
         List<Used> out = new ArrayList<>(used.size());
         for (Used u : used) {
             double d = Math.abs(u.site().residual() - median);
-            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true, u.near()));
+            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true));
         }
         return out;
     }
@@ -197,16 +172,9 @@ public final class AnalogCorrection {
         Decimals.append(label.append(" of "), denom, 2, false);
         Decimals.append(label.append(" (prior "), prior, 2, false).append(')');
         if (cfg.nearPrior() != cfg.prior()) {
+            // one line a chemist reads: why the prior is not the same for every site
             Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
                     .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
-        }
-        if (u.near()) {
-            label.append("; compared within ").append(cfg.fallbackRadius()).append(" bonds of the site only (none similar within ")
-                    .append(cfg.radius()).append("), weight times ");
-            Decimals.append(label, cfg.fallbackWeight(), 2, false);
-        }
-        if (m.shared()) {
-            label.append("; the measured step is shared with a near-equal site of that compound, whose residual this is");
         }
         if (u.damped()) {
             label.append("; weight cut: residual far from the other analogs'");

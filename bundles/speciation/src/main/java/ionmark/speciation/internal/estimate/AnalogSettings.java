@@ -14,18 +14,13 @@ import java.util.Locale;
  * @param kernel       how the weight rises from the threshold to identity
  * @param huber        residuals further than this from the analogs' weighted median keep only huber/|r − median| of
  *                     their weight (0: off); applied when a site has three or more analogs
- * @param nearPrior    the prior count when the nearest analog is identical (weight 1): the prior falls linearly from
- *                     {@code prior} (nearest analog at the threshold) to this as the nearest analog's weight rises,
- *                     so a close analog is trusted more than a lone distant one; equal to {@code prior}: one prior
- * @param fallbackRadius a smaller radius at which a site is compared when no measured site passes the threshold at
- *                     {@code radius} (0: off); such analogs carry {@code fallbackWeight} times their kernel weight
- * @param fallbackWeight weight factor of an analog found only at the fallback radius
- * @param sharedStep   a measured compound's site that took no measured value but lies within this many units of a
- *                     site of the same type that took one carries that site's residual too (0: off)
+ * @param nearPrior    the prior count when the nearest analog is identical (weight 1); {@code prior} is then the
+ *                     prior count when the nearest analog sits at the threshold (weight 0), and in between the prior
+ *                     falls geometrically with the nearest analog's weight ({@link #prior(double)}), so a lone
+ *                     distant analog moves a site less than a close one; equal to {@code prior}: one prior for all
  */
 public record AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
-        Kernel kernel, double huber, double nearPrior, int fallbackRadius, double fallbackWeight,
-        double sharedStep) {
+        Kernel kernel, double huber, double nearPrior) {
     /** The weight's shape between the threshold (0) and identity (1). */
     public enum Kernel {
         /** (T − t)/(1 − t) */
@@ -42,53 +37,51 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
      * measurement drag a series; with family analogs (weight 0.5) one weak analog of another class moved a site
      * most of the way (glutarimide +0.8 from succinimide).
      */
-    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5, 0.15, 0, 1, 0);
+    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5, 0.15);
 
-    /** The settings before the nearest-analog prior and the fallback radius: one prior, one radius. */
+    /** One prior count for every site, whatever its nearest analog (the settings before the nearest-analog prior). */
     public AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
             Kernel kernel, double huber) {
-        this(radius, threshold, prior, familyWeight, maxAnalogs, kernel, huber, prior, 0, 1, 0);
+        this(radius, threshold, prior, familyWeight, maxAnalogs, kernel, huber, prior);
     }
 
     public AnalogSettings {
         if (radius < 1 || radius > 6 || threshold < 0 || threshold >= 1 || prior <= 0 || familyWeight < 0
-                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0 || nearPrior <= 0
-                || fallbackRadius < 0 || fallbackRadius >= radius || fallbackWeight < 0 || fallbackWeight > 1 || sharedStep < 0) {
+                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0 || nearPrior <= 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d, "
-                            + "near prior %.2f, fallback radius %d, fallback weight %.2f",
-                    radius, threshold, prior, familyWeight, maxAnalogs, nearPrior, fallbackRadius, fallbackWeight));
+                            + "near prior %.2f", radius, threshold, prior, familyWeight, maxAnalogs, nearPrior));
         }
     }
 
     /**
      * The defaults, each overridable by a system property ({@code ionmark.analog.radius},
      * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}, {@code .kernel}, {@code .huber},
-     * {@code .near-prior}, {@code .fallback-radius}, {@code .fallback-weight}, {@code .shared-step}): the series experiment's parameter
-     * search sets them; a product installation leaves them alone. Without {@code .near-prior}, a changed prior
-     * is the near prior too (one prior).
+     * {@code .near-prior}): the series experiment's parameter search sets them; a product installation leaves them
+     * alone. A prior given without a near prior is one prior for all sites.
      */
     public static AnalogSettings current() {
-        double prior = number("ionmark.analog.prior", DEFAULT.prior);
+        String prior = System.getProperty("ionmark.analog.prior");
+        double far = prior == null ? DEFAULT.prior : Double.parseDouble(prior);
         return new AnalogSettings(Integer.getInteger("ionmark.analog.radius", DEFAULT.radius),
-                number("ionmark.analog.threshold", DEFAULT.threshold), prior,
+                number("ionmark.analog.threshold", DEFAULT.threshold), far,
                 number("ionmark.analog.family", DEFAULT.familyWeight),
                 Integer.getInteger("ionmark.analog.max", DEFAULT.maxAnalogs), Kernel.valueOf(System.getProperty(
                         "ionmark.analog.kernel", DEFAULT.kernel.name()).toUpperCase(java.util.Locale.ROOT)),
                 number("ionmark.analog.huber", DEFAULT.huber),
-                number("ionmark.analog.near-prior", System.getProperty("ionmark.analog.prior") == null
-                        ? DEFAULT.nearPrior : prior),
-                Integer.getInteger("ionmark.analog.fallback-radius", DEFAULT.fallbackRadius),
-                number("ionmark.analog.fallback-weight", DEFAULT.fallbackWeight),
-                number("ionmark.analog.shared-step", DEFAULT.sharedStep));
+                number("ionmark.analog.near-prior", prior == null ? DEFAULT.nearPrior : far));
     }
 
     /**
-     * The prior count for a site whose nearest (heaviest) analog has weight {@code nearest} (0 at the threshold, 1
-     * when identical): {@code prior} − ({@code prior} − {@code nearPrior}) · nearest.
+     * The prior count for a site whose nearest (heaviest) analog has weight {@code nearest} (0 at the threshold, 1 when
+     * identical): prior · (nearPrior/prior)^nearest, falling by the same factor for each step of weight. (A linear
+     * fall, measured first, took more of the trust from half-close analogs, which series members mostly are.)
      */
     public double prior(double nearest) {
-        return prior - (prior - nearPrior) * Math.max(0, Math.min(1, nearest));
+        if (nearPrior == prior) {
+            return prior;
+        }
+        return prior * Math.pow(nearPrior / prior, Math.max(0, Math.min(1, nearest)));
     }
 
     private static double number(String key, double fallback) {

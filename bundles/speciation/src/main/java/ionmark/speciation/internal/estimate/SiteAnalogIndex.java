@@ -29,12 +29,9 @@ public final class SiteAnalogIndex {
      * @param residual measured − model at this site
      * @param citation full citation of the measured value's source
      * @param held     the pair rules that hold the site ({@link AnalogCorrection#heldBy}), empty when none
-     * @param envNear  local environment at the index's fallback radius; empty when that is off
-     * @param shared   the site took no measured value itself but shares a measured step with a near-equal site of the
-     *                 same compound ({@link AnalogSettings#sharedStep})
      */
     public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
-            double residual, String citation, String held, int[] envNear, boolean shared) {
+            double residual, String citation, String held) {
     }
 
     public static final SiteAnalogIndex EMPTY = new SiteAnalogIndex(List.of(), AnalogSettings.DEFAULT);

@@ -22,7 +22,7 @@ class RobustAnalogWeightsTest {
     private static AnalogCorrection.Used used(String id, double residual) {
         MeasuredCompound c = new MeasuredCompound(id, id, "CC(=O)O", List.of(4.76), 25, 0, "", "test", List.of());
         SiteAnalogIndex.MeasuredSite s = new SiteAnalogIndex.MeasuredSite(c, "carboxylic", SiteType.ACID,
-                new int[0], 4.76 - residual, residual, "test", "", new int[0], false);
+                new int[0], 4.76 - residual, residual, "test", "");
         return new AnalogCorrection.Used(s, 0.8, 0.6, false);
     }
 

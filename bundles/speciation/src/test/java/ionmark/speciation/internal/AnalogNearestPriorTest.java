@@ -22,28 +22,30 @@ import ionmark.speciation.internal.sites.MatchTarget;
 import ionmark.speciation.internal.structure.StructureException;
 
 /**
- * The two optional analog mechanisms of {@link AnalogSettings}: a prior count that falls as the nearest analog nears
- * identity, and a smaller fallback radius for sites with no analog at the full radius. The shift is the shrunk mean
+ * The nearest-analog prior of {@link AnalogSettings}: a prior count that falls as the nearest analog nears identity,
+ * so that a lone distant analog moves a site less than a close one. The shift is the shrunk mean
  * Σ wᵢrᵢ / (prior + Σ wᵢ), a weighted mean shrunk toward zero by a prior count (common practice in empirical-Bayes
  * estimation of a group mean; the prior count is the weight given to the model's own estimate). Measured pyridines as
  * in {@link AnalogCorrectionTest} (CRC Handbook, from memory).
  */
-class AnalogPriorAndFallbackTest {
+class AnalogNearestPriorTest {
     private static final Pattern NUMBERS = Pattern.compile(
             "residual ([+-][0-9.]+) .*local similarity ([0-9.]+), weight ([0-9.]+) of ([0-9.]+) \\(prior ([0-9.]+)\\)");
 
     /**
-     * Worked by hand: prior 1 for a lone analog at the threshold, 0.05 for an identical one. A nearest analog of weight
-     * 0.6 gives the prior 1 − (1 − 0.05) · 0.6 = 0.43; that analog alone, with residual +1.00, moves the site
-     * 0.6 · 1.00 / (0.43 + 0.6) = 0.583, where one prior of 1 moved it 0.6 / 1.6 = 0.375 and one of 0.05 0.923.
+     * Worked by hand: prior 1 for a lone analog at the threshold, 0.05 for an identical one, falling geometrically in
+     * between. A nearest analog of weight 0.6 gives the prior 1 · 0.05^0.6 = e^(0.6 · ln 0.05) = e^(−1.7974) = 0.1657;
+     * of weight 0.5, √0.05 = 0.2236. The analog of weight 0.6 alone, with residual +1.00, moves the site
+     * 0.6 · 1.00 / (0.1657 + 0.6) = 0.784, where one prior of 1 moved it 0.6 / 1.6 = 0.375 and one of 0.05 0.923.
      */
     @Test
-    void thePriorFallsLinearlyFromTheFarToTheNearValueWithTheNearestAnalogsWeight() {
-        AnalogSettings s = settings(1.0, 0.05, 0, 1);
+    void thePriorFallsGeometricallyFromTheFarToTheNearValueWithTheNearestAnalogsWeight() {
+        AnalogSettings s = settings(1.0, 0.05);
         assertEquals(1.0, s.prior(0), 1e-12);
         assertEquals(0.05, s.prior(1), 1e-12);
-        assertEquals(0.43, s.prior(0.6), 1e-12);
-        assertEquals(0.583, 0.6 * 1.00 / (s.prior(0.6) + 0.6), 0.0005);
+        assertEquals(0.1657, s.prior(0.6), 0.00005);
+        assertEquals(0.2236, s.prior(0.5), 0.00005);
+        assertEquals(0.784, 0.6 * 1.00 / (s.prior(0.6) + 0.6), 0.0005);
         // one prior: the same value whatever the nearest analog
         AnalogSettings one = AnalogSettings.DEFAULT;
         assertEquals(one.prior(), one.prior(0.0), 0);
@@ -51,65 +53,34 @@ class AnalogPriorAndFallbackTest {
     }
 
     @Test
-    void aCloseLoneAnalogMovesTheSiteByItsWeightOverTheNearestAnalogsPrior() throws StructureException {
+    void aLoneAnalogMovesTheSiteByItsWeightOverThePriorItsOwnWeightSets() throws StructureException {
         // 2,4,6-trimethylpyridine against 2,6-lutidine: one analog (weight 0.26)
-        AnalogSettings s = settings(1.0, 0.05, 0, 1);
+        AnalogSettings s = settings(1.0, 0.05);
         List<Term> lines = analogLines(s, List.of(AnalogCorrectionTest.LUTIDINE_26), "Cc1cc(C)nc(C)c1");
         assertEquals(1, lines.size(), lines.toString());
         Matcher m = numbers(lines.get(0));
         double r = Double.parseDouble(m.group(1));
         double w = Double.parseDouble(m.group(3));
         assertTrue(w > 0.1, "an analog with weight: " + w);
-        double prior = 1.0 - 0.95 * w;
-        assertEquals(prior, Double.parseDouble(m.group(5)), 0.006);
-        assertEquals(w * r / (prior + w), lines.get(0).value(), 0.006);
+        double prior = Math.pow(0.05, w);
+        assertEquals(prior, Double.parseDouble(m.group(5)), 0.01); // the line rounds w to 0.01
+        assertEquals(w * r / (prior + w), lines.get(0).value(), 0.01);
         assertTrue(lines.get(0).label().contains("as the nearest analog nears identity"), lines.get(0).label());
     }
 
     @Test
-    void withoutAnAnalogAtTheFullRadiusTheFallbackRadiusFindsOneAtReducedWeight() throws StructureException {
-        // 3-bromopyridine has nothing of 2,6-lutidine's flanking methyls within four bonds of its N
-        String query = "Brc1cccnc1";
-        List<MeasuredCompound> m = List.of(AnalogCorrectionTest.LUTIDINE_26);
-        assertTrue(analogLines(settings(0.15, 0.15, 0, 1), m, query).isEmpty(),
-                "no analog at the full radius, or this check means nothing");
-        List<Term> lines = analogLines(settings(0.15, 0.15, 1, 0.5), m, query);
-        assertEquals(1, lines.size(), lines.toString());
-        Term t = lines.get(0);
-        assertTrue(t.label().contains("compared within 1 bonds of the site only (none similar within 4), weight times 0.50"),
-                t.label());
-        Matcher n = numbers(t);
-        double r = Double.parseDouble(n.group(1));
-        double sim = Double.parseDouble(n.group(2));
-        double w = 0.5 * (sim - 0.3) / 0.7; // the linear kernel above the threshold, halved
-        assertEquals(w, Double.parseDouble(n.group(3)), 0.006);
-        assertEquals(w * r / (0.15 + w), t.value(), 0.006);
-    }
-
-    @Test
-    void aSiteWithAnAnalogAtTheFullRadiusIgnoresTheFallback() throws StructureException {
-        String query = "Cc1cc(C)nc(C)c1";
-        List<MeasuredCompound> m = List.of(AnalogCorrectionTest.LUTIDINE_26);
-        List<Term> plain = analogLines(settings(0.15, 0.15, 0, 1), m, query);
-        List<Term> withFallback = analogLines(settings(0.15, 0.15, 1, 0.5), m, query);
-        assertEquals(1, plain.size());
-        assertEquals(plain, withFallback);
-    }
-
-    @Test
-    void aSiteWithNoAnalogAtEitherRadiusIsReturnedAsItWas() throws StructureException {
-        // phenol: no measured phenol in the index, so no candidate at any radius
+    void aSiteWithNoAnalogIsReturnedAsItWasWhateverThePrior() throws StructureException {
+        // 4-chlorophenol: no measured phenol in the index, so no analog
         Problem p = bare().prepare("Oc1ccc(Cl)cc1", Conditions.noPh());
-        SiteAnalogIndex idx = index(settings(0.15, 0.15, 1, 0.5), List.of(AnalogCorrectionTest.LUTIDINE_26));
+        SiteAnalogIndex idx = index(settings(1.0, 0.05), List.of(AnalogCorrectionTest.LUTIDINE_26));
         List<EstimatedSite> out = AnalogCorrection.apply(idx, new MatchTarget(p.prepared().molecule()), p.sites());
         for (int i = 0; i < out.size(); i++) {
             assertSame(p.sites().get(i), out.get(i));
         }
     }
 
-    private static AnalogSettings settings(double prior, double nearPrior, int fallbackRadius, double fallbackWeight) {
-        return new AnalogSettings(4, 0.3, prior, 0, 8, AnalogSettings.Kernel.LINEAR, 0.5, nearPrior, fallbackRadius,
-                fallbackWeight, 0);
+    private static AnalogSettings settings(double prior, double nearPrior) {
+        return new AnalogSettings(4, 0.3, prior, 0, 8, AnalogSettings.Kernel.LINEAR, 0.5, nearPrior);
     }
 
     private static Engine bare() {
