@@ -12,7 +12,8 @@ import ionmark.speciation.internal.sites.MatchTarget;
  * Moves each estimated site toward its measured analogs: sites of the same class (or, with less weight,
  * the same family) whose local environment resembles the query site's. The shift is a kernel-weighted,
  * shrunk mean of the analogs' residuals, Σ wᵢrᵢ / (prior + Σ wᵢ): one distant analog moves a site little,
- * several close ones most of the way. The sd shrinks a little with the evidence and widens with the
+ * several close ones most of the way. The prior count can fall with the nearest analog's weight
+ * ({@link AnalogSettings#prior(double)}). The sd shrinks a little with the evidence and widens with the
  * analogs' disagreement. Every analog used is one line of the derivation (name, similarity, residual, weight,
  * source), and the lines add up to the shift. A site without an analog above the threshold is returned
  * as it was, the same object.
@@ -74,22 +75,23 @@ public final class AnalogCorrection {
         if (used.size() > cfg.maxAnalogs()) {
             used = used.subList(0, cfg.maxAnalogs());
         }
+        double prior = cfg.prior(used.get(0).weight()); // the nearest analog's weight, before the robust cut
         if (cfg.huber() > 0 && used.size() > 2) {
             used = robust(used, cfg.huber());
         }
         double sumW = used.stream().mapToDouble(Used::weight).sum();
         double mean = used.stream().mapToDouble(u -> u.weight() * u.site().residual()).sum() / sumW;
         double spread = used.stream().mapToDouble(u -> u.weight() * sq(u.site().residual() - mean)).sum() / sumW;
-        double denom = cfg.prior() + sumW;
+        double denom = prior + sumW;
         // the class sd shrinks by at most √0.75 however many analogs agree: a residual carries the
         // measurement's own error and the model's error at the analog, not only the shared part (with full
         // shrinkage, prior/(prior + Σw), within-1-sd on the development set fell from 0.725 to 0.705)
-        double sd = Math.max(MIN_SD, Math.sqrt(sq(s.sd()) * (cfg.prior() + 0.75 * sumW) / denom + spread * sumW / denom));
+        double sd = Math.max(MIN_SD, Math.sqrt(sq(s.sd()) * (prior + 0.75 * sumW) / denom + spread * sumW / denom));
         EstimatedSite now = s;
         for (int i = 0; i < used.size(); i++) {
             Used u = used.get(i);
             double part = u.weight() * u.site().residual() / denom;
-            now = now.shifted(part, term(u, part, denom, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
+            now = now.shifted(part, term(u, part, denom, prior, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
         }
         return now;
     }
@@ -151,7 +153,7 @@ public final class AnalogCorrection {
     /** How {@link PairRules} starts the derivation line of a pair rule. */
     static final String PAIR_RULE = "pair rule ";
 
-    private static Term term(Used u, double part, double denom, AnalogSettings cfg) {
+    private static Term term(Used u, double part, double denom, double prior, AnalogSettings cfg) {
         SiteAnalogIndex.MeasuredSite m = u.site();
         // "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant
         // %.2f, local similarity %.2f, weight %.2f of %.2f (prior %.1f)", written without a Formatter (Decimals)
@@ -168,7 +170,12 @@ public final class AnalogCorrection {
         Decimals.append(label.append(", local similarity "), u.similarity(), 2, false);
         Decimals.append(label.append(", weight "), u.weight(), 2, false);
         Decimals.append(label.append(" of "), denom, 2, false);
-        Decimals.append(label.append(" (prior "), cfg.prior(), 2, false).append(')');
+        Decimals.append(label.append(" (prior "), prior, 2, false).append(')');
+        if (cfg.nearPrior() != cfg.prior()) {
+            // one line a chemist reads: why the prior is not the same for every site
+            Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
+                    .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
+        }
         if (u.damped()) {
             label.append("; weight cut: residual far from the other analogs'");
         }

@@ -14,9 +14,13 @@ import java.util.Locale;
  * @param kernel       how the weight rises from the threshold to identity
  * @param huber        residuals further than this from the analogs' weighted median keep only huber/|r − median| of
  *                     their weight (0: off); applied when a site has three or more analogs
+ * @param nearPrior    the prior count when the nearest analog is identical (weight 1); {@code prior} is then the
+ *                     prior count when the nearest analog sits at the threshold (weight 0), and in between the prior
+ *                     falls geometrically with the nearest analog's weight ({@link #prior(double)}), so a lone
+ *                     distant analog moves a site less than a close one; equal to {@code prior}: one prior for all
  */
 public record AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
-        Kernel kernel, double huber) {
+        Kernel kernel, double huber, double nearPrior) {
     /** The weight's shape between the threshold (0) and identity (1). */
     public enum Kernel {
         /** (T − t)/(1 − t) */
@@ -33,29 +37,51 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
      * measurement drag a series; with family analogs (weight 0.5) one weak analog of another class moved a site
      * most of the way (glutarimide +0.8 from succinimide).
      */
-    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5);
+    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5, 0.15);
+
+    /** One prior count for every site, whatever its nearest analog (the settings before the nearest-analog prior). */
+    public AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
+            Kernel kernel, double huber) {
+        this(radius, threshold, prior, familyWeight, maxAnalogs, kernel, huber, prior);
+    }
 
     public AnalogSettings {
         if (radius < 1 || radius > 6 || threshold < 0 || threshold >= 1 || prior <= 0 || familyWeight < 0
-                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0) {
+                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0 || nearPrior <= 0) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
-                    "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d",
-                    radius, threshold, prior, familyWeight, maxAnalogs));
+                    "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d, "
+                            + "near prior %.2f", radius, threshold, prior, familyWeight, maxAnalogs, nearPrior));
         }
     }
 
     /**
      * The defaults, each overridable by a system property ({@code ionmark.analog.radius},
-     * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}, {@code .kernel}): the series experiment's
-     * parameter search sets them; a product installation leaves them alone.
+     * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}, {@code .kernel}, {@code .huber},
+     * {@code .near-prior}): the series experiment's parameter search sets them; a product installation leaves them
+     * alone. A prior given without a near prior is one prior for all sites.
      */
     public static AnalogSettings current() {
+        String prior = System.getProperty("ionmark.analog.prior");
+        double far = prior == null ? DEFAULT.prior : Double.parseDouble(prior);
         return new AnalogSettings(Integer.getInteger("ionmark.analog.radius", DEFAULT.radius),
-                number("ionmark.analog.threshold", DEFAULT.threshold), number("ionmark.analog.prior", DEFAULT.prior),
+                number("ionmark.analog.threshold", DEFAULT.threshold), far,
                 number("ionmark.analog.family", DEFAULT.familyWeight),
                 Integer.getInteger("ionmark.analog.max", DEFAULT.maxAnalogs), Kernel.valueOf(System.getProperty(
                         "ionmark.analog.kernel", DEFAULT.kernel.name()).toUpperCase(java.util.Locale.ROOT)),
-                number("ionmark.analog.huber", DEFAULT.huber));
+                number("ionmark.analog.huber", DEFAULT.huber),
+                number("ionmark.analog.near-prior", prior == null ? DEFAULT.nearPrior : far));
+    }
+
+    /**
+     * The prior count for a site whose nearest (heaviest) analog has weight {@code nearest} (0 at the threshold, 1 when
+     * identical): prior · (nearPrior/prior)^nearest, falling by the same factor for each step of weight. (A linear
+     * fall, measured first, took more of the trust from half-close analogs, which series members mostly are.)
+     */
+    public double prior(double nearest) {
+        if (nearPrior == prior) {
+            return prior;
+        }
+        return prior * Math.pow(nearPrior / prior, Math.max(0, Math.min(1, nearest)));
     }
 
     private static double number(String key, double fallback) {
