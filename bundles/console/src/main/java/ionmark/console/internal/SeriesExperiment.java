@@ -130,7 +130,6 @@ final class SeriesExperiment {
             return 0;
         }
         // whole series held out
-        Map<String, List<Observation>> allPredicted = new LinkedHashMap<>();
         double[] sums = new double[4];
         for (int f = 0; f < 5; f++) {
             List<Observation> taught = new ArrayList<>();
@@ -142,7 +141,6 @@ final class SeriesExperiment {
                     taught.addAll(e.getValue());
                 }
             }
-            allPredicted.putAll(held);
             double[] r = compare(held, taught, f + 1, false);
             for (int j = 0; j < 4; j++) {
                 sums[j] += r[j];
