@@ -80,4 +80,32 @@ class DrugFamilyGapsTest {
         // at pH 7.0 the first constant alone gives -0.27
         assertEquals(-0.27, at("CCC1(CC)C(=O)NC(=O)NC1=O", 7.0).netCharge(), 0.1, "barbital at pH 7.0");
     }
+
+    @Test
+    void aGroupOnThePiperazineNAlkylCarbonCountsAtOneBondAsInTheOpenChainAmine() {
+        // the phenyl of a benzyl group sits one bond from the N's carbon, in N,N-dimethylbenzylamine and in
+        // 1-benzyl-4-methylpiperazine alike (before table v33 the piperazine classes counted it at two)
+        assertTrue(inductive(at("CN(C)Cc1ccccc1", 7.0), "amine-tertiary").contains("phenyl (n=1)"));
+        assertTrue(inductive(at("CN1CCN(Cc2ccccc2)CC1", 7.0), "piperazine-n-tertiary").contains("phenyl (n=1)"));
+        // cetirizine 2.2, 2.9 and 8.0 (from memory): net charge +1.54 at pH 2 from those constants
+        Analysis c = at("OC(=O)COCCN1CCN(CC1)C(c1ccccc1)c1ccc(Cl)cc1", 2.0);
+        assertEquals(1.54, c.netCharge(), 0.3, "cetirizine at pH 2: " + c.macroPka());
+    }
+
+    @Test
+    void ringSubstituentsActOnAPhenylGuanidineInEitherTautomer() {
+        // phenylguanidine 10.77 (CRC, from memory)
+        assertTrue(nearest(at("NC(N)=Nc1ccccc1", 7.0), 10.77) < 0.3);
+        // clonidine 8.05 (Timmermans and van Zwieten 1978; value from memory): net charge +0.01 at pH 10 from it;
+        // before table v33 the two ortho chlorines counted for nothing (10.02, net charge +0.51)
+        for (String clonidine : new String[] {"Clc1cccc(Cl)c1NC1=NCCN1", "Clc1cccc(Cl)c1N=C1NCCN1"}) {
+            assertEquals(0.01, at(clonidine, 10.0).netCharge(), 0.3, clonidine);
+        }
+    }
+
+    /** The label of the inductive term of the site of class {@code group}, or "" when it has none. */
+    private static String inductive(Analysis a, String group) {
+        return a.sites().stream().filter(s -> s.group().equals(group)).flatMap(s -> s.derivation().stream())
+                .map(t -> t.label()).filter(l -> l.startsWith("inductive")).findFirst().orElse("");
+    }
 }
