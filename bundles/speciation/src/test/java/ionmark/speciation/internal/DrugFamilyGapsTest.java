@@ -103,6 +103,17 @@ class DrugFamilyGapsTest {
         }
     }
 
+    @Test
+    void aPhosphonomethylAmineFeelsThePhosphonateDianionLessThanTwoFullCharges() {
+        // aminomethylphosphonic acid: amine about 10.0-10.2 (from memory); with the full distance rule 12.3
+        assertTrue(nearest(at("NCP(=O)(O)O", 7.0), 10.1) < 0.6);
+        // glyphosate 0.8, 2.23, 5.46 and 10.14 (from memory): net charge -2.42 at pH 10 from those constants
+        assertEquals(-2.42, at("OC(=O)CNCP(=O)(O)O", 10.0).netCharge(), 0.3, "glyphosate at pH 10");
+        // the two P-OH of one group keep the full rule: methylphosphonic acid 2.38 and 7.74 (CRC, from memory)
+        Analysis m = at("CP(=O)(O)O", 7.0);
+        assertTrue(m.macroPka().size() == 2 && m.macroPka().get(1) - m.macroPka().get(0) > 4.5, m.macroPka().toString());
+    }
+
     /** The label of the inductive term of the site of class {@code group}, or "" when it has none. */
     private static String inductive(Analysis a, String group) {
         return a.sites().stream().filter(s -> s.group().equals(group)).flatMap(s -> s.derivation().stream())
