@@ -13,8 +13,9 @@ import ionmark.speciation.api.Analysis;
  * Drug families that table v31 still misread (docs/druglike-families.md, "Known gaps"), each held to
  * handbook values quoted from memory: sulfonyl amidines (benzothiadiazine dioxides), 2-sulfinyl
  * benzimidazoles, 2,6-dialkyl phenols, 1,1-diamino-2-nitroethenes, amines three bonds from a diarylamino N
- * (tricyclic antidepressants and phenothiazines), and a measured compound whose second
- * site has no measured value. A net charge expected from two constants is computed from them in the
+ * (tricyclic antidepressants and phenothiazines), a measured compound whose second
+ * site has no measured value, and since table v33 groups on a piperazine N's alkyl carbon, ring substituents of
+ * phenyl guanidines and amines next to a phosphonic acid. A net charge expected from two constants is computed from them in the
  * comment.
  */
 class DrugFamilyGapsTest {
