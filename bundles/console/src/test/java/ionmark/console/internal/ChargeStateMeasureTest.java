@@ -26,9 +26,11 @@ class ChargeStateMeasureTest {
      * 5 spurious constants; with table v31 (drug-like families, docs/druglike-families.md): overall 0.943
      * (pH 2 0.943, 7.4 0.967, 10 0.919), 3 spurious constants; with the families after v31 (sulfonyl amidines,
      * 2-sulfinyl benzimidazoles, 2,6-dialkyl phenols, nitroethenediamines, diarylamino, unmeasured sites of measured
-     * compounds): overall 0.965 (pH 2 0.951, 7.4 0.976, 10 0.967), 3 spurious constants.
+     * compounds): overall 0.965 (pH 2 0.951, 7.4 0.976, 10 0.967), 3 spurious constants; with table v33 (piperazine
+     * N-alkyl carbon as centre, phenyl guanidines with ring terms, phosphonate reach 0.6): overall 0.973 (pH 2 0.959,
+     * 7.4 0.976, 10 0.984), 3 spurious constants.
      */
-    static final double OVERALL_FLOOR = 0.955;
+    static final double OVERALL_FLOOR = 0.968;
     static final int SPURIOUS_CEILING = 4;
 
     static final Path FILE = Path.of("../../docs/data/druglike-charge.tsv");

@@ -13,8 +13,9 @@ import ionmark.speciation.api.Analysis;
  * Drug families that table v31 still misread (docs/druglike-families.md, "Known gaps"), each held to
  * handbook values quoted from memory: sulfonyl amidines (benzothiadiazine dioxides), 2-sulfinyl
  * benzimidazoles, 2,6-dialkyl phenols, 1,1-diamino-2-nitroethenes, amines three bonds from a diarylamino N
- * (tricyclic antidepressants and phenothiazines), and a measured compound whose second
- * site has no measured value. A net charge expected from two constants is computed from them in the
+ * (tricyclic antidepressants and phenothiazines), a measured compound whose second
+ * site has no measured value, and since table v33 groups on a piperazine N's alkyl carbon, ring substituents of
+ * phenyl guanidines and amines next to a phosphonic acid. A net charge expected from two constants is computed from them in the
  * comment.
  */
 class DrugFamilyGapsTest {
@@ -79,5 +80,44 @@ class DrugFamilyGapsTest {
         assertEquals(-1.0, a.netCharge(), 0.1, "barbital at pH 10");
         // at pH 7.0 the first constant alone gives -0.27
         assertEquals(-0.27, at("CCC1(CC)C(=O)NC(=O)NC1=O", 7.0).netCharge(), 0.1, "barbital at pH 7.0");
+    }
+
+    @Test
+    void aGroupOnThePiperazineNAlkylCarbonCountsAtOneBondAsInTheOpenChainAmine() {
+        // the phenyl of a benzyl group sits one bond from the N's carbon, in N,N-dimethylbenzylamine and in
+        // 1-benzyl-4-methylpiperazine alike (before table v33 the piperazine classes counted it at two)
+        assertTrue(inductive(at("CN(C)Cc1ccccc1", 7.0), "amine-tertiary").contains("phenyl (n=1)"));
+        assertTrue(inductive(at("CN1CCN(Cc2ccccc2)CC1", 7.0), "piperazine-n-tertiary").contains("phenyl (n=1)"));
+        // cetirizine 2.2, 2.9 and 8.0 (from memory): net charge +1.54 at pH 2 from those constants
+        Analysis c = at("OC(=O)COCCN1CCN(CC1)C(c1ccccc1)c1ccc(Cl)cc1", 2.0);
+        assertEquals(1.54, c.netCharge(), 0.3, "cetirizine at pH 2: " + c.macroPka());
+    }
+
+    @Test
+    void ringSubstituentsActOnAPhenylGuanidineInEitherTautomer() {
+        // phenylguanidine 10.77 (CRC, from memory)
+        assertTrue(nearest(at("NC(N)=Nc1ccccc1", 7.0), 10.77) < 0.3);
+        // clonidine 8.05 (Timmermans and van Zwieten 1978; value from memory): net charge +0.01 at pH 10 from it;
+        // before table v33 the two ortho chlorines counted for nothing (10.02, net charge +0.51)
+        for (String clonidine : new String[] {"Clc1cccc(Cl)c1NC1=NCCN1", "Clc1cccc(Cl)c1N=C1NCCN1"}) {
+            assertEquals(0.01, at(clonidine, 10.0).netCharge(), 0.3, clonidine);
+        }
+    }
+
+    @Test
+    void aPhosphonomethylAmineFeelsThePhosphonateDianionLessThanTwoFullCharges() {
+        // aminomethylphosphonic acid: amine about 10.0-10.2 (from memory); with the full distance rule 12.3
+        assertTrue(nearest(at("NCP(=O)(O)O", 7.0), 10.1) < 0.6);
+        // glyphosate 0.8, 2.23, 5.46 and 10.14 (from memory): net charge -2.42 at pH 10 from those constants
+        assertEquals(-2.42, at("OC(=O)CNCP(=O)(O)O", 10.0).netCharge(), 0.3, "glyphosate at pH 10");
+        // the two P-OH of one group keep the full rule: methylphosphonic acid 2.38 and 7.74 (CRC, from memory)
+        Analysis m = at("CP(=O)(O)O", 7.0);
+        assertTrue(m.macroPka().size() == 2 && m.macroPka().get(1) - m.macroPka().get(0) > 4.5, m.macroPka().toString());
+    }
+
+    /** The label of the inductive term of the site of class {@code group}, or "" when it has none. */
+    private static String inductive(Analysis a, String group) {
+        return a.sites().stream().filter(s -> s.group().equals(group)).flatMap(s -> s.derivation().stream())
+                .map(t -> t.label()).filter(l -> l.startsWith("inductive")).findFirst().orElse("");
     }
 }
