@@ -85,6 +85,29 @@ public final class CommandLineRunner {
     }
 
     static final String CALIBRATION_BUNDLE = "ionmark.calibration";
+    /**
+     * Why the table file a one-shot command was started with ({@code IONMARK_TABLE}) cannot be used, or null when
+     * it validates. The table service only warns about such a file and keeps the table it has, which suits a
+     * running notebook that polls the file; a command run once would silently report on the wrong table.
+     */
+    static String tableFileProblem(TableService tables, Path file) {
+        String json;
+        try {
+            json = Files.readString(file, StandardCharsets.UTF_8);
+        } catch (IOException | RuntimeException e) {
+            return "cannot read the table file " + file + " (IONMARK_TABLE): " + e.getMessage();
+        }
+        var report = tables.validate(json);
+        if (report.ok()) {
+            return null;
+        }
+        var errors = report.errors();
+        return "the table file " + file + " (IONMARK_TABLE) does not validate, " + errors.size() + " error"
+                + (errors.size() == 1 ? "" : "s") + ":\n  " + String.join("\n  ",
+                        errors.stream().limit(10).map(String::valueOf).toList())
+                + (errors.size() > 10 ? "\n  …" : "");
+    }
+
     static final String CALIBRATION_SERVICE = "ionmark.calibration.api.TableCalibration";
 
     @Activate
@@ -100,8 +123,14 @@ public final class CommandLineRunner {
             org.osgi.util.tracker.ServiceTracker<TableStore, TableStore> tracker = storeTracker(ctx);
             try {
                 List<String> args = split(Files.readString(Path.of(file), StandardCharsets.UTF_8));
-                TableStore store = tracker.waitForService(STORE_WAIT_MS);
-                if (store == null && ctx.getProperty("ionmark.table.file") == null) {
+                String tableFile = ctx.getProperty("ionmark.table.file");
+                String tableProblem = tableFile == null ? null : tableFileProblem(tables, Path.of(tableFile));
+                TableStore store = tableProblem != null ? null : tracker.waitForService(STORE_WAIT_MS);
+                if (tableProblem != null) {
+                    // a one-shot command must not measure or write with the shipped table instead of the named one
+                    System.err.println("ionmark: " + tableProblem + "; nothing was run");
+                    code = 2;
+                } else if (store == null && tableFile == null) {
                     // the store component failed to activate (its error is above) or hung: no silent fallback
                     System.err.println("ionmark: the table store did not start (see the message above); nothing was run");
                     code = 1;

@@ -57,6 +57,11 @@ public final class LeanCheck {
         if (!own.isBlank()) {
             tables = (TableService) Class.forName(impl("acidity", "TableSnapshotService"))
                     .getConstructor(Class.forName(impl("acidity", "TableConfiguration"))).newInstance((Object) null);
+            String problem = CommandLineRunner.tableFileProblem(tables, Path.of(own));
+            if (problem != null) {
+                System.err.println("ionmark: " + problem + "; nothing was run");
+                System.exit(2);
+            }
         } else if (Files.isRegularFile(dir.resolve("head.json"))) {
             Path head = dir.resolve("head.json");
             AcidityTable t = VerifiedTables.head(dir, Files.readString(head, StandardCharsets.UTF_8)).orElse(null);
