@@ -1,4 +1,4 @@
-package ionmark.speciation.internal.work;
+package ionmark.reuse.internal;
 
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;

@@ -1,4 +1,4 @@
-package ionmark.speciation.internal.work;
+package ionmark.reuse.internal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;

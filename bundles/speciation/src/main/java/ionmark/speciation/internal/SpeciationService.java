@@ -10,6 +10,7 @@ import org.osgi.service.metatype.annotations.Designate;
 
 import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.TableService;
+import ionmark.reuse.internal.SingleFlight;
 import ionmark.speciation.api.Analysis;
 import ionmark.speciation.api.Conditions;
 import ionmark.speciation.api.Curve;
@@ -19,7 +20,6 @@ import ionmark.speciation.api.TableRegression;
 import ionmark.speciation.internal.structure.StructureException;
 import ionmark.speciation.internal.structure.StructureKey;
 import ionmark.speciation.internal.work.AnalysisPool;
-import ionmark.speciation.internal.work.SingleFlight;
 import ionmark.speciation.internal.work.Budget;
 import ionmark.speciation.internal.work.OverBudgetException;
 import ionmark.speciation.spi.ModelEngine;
