@@ -38,11 +38,11 @@ final class Accuracy {
     }
 
     record Summary(int molecules, int values, int matched, int failed, int extra, double within1, double mae,
-            double rmse, double within1sd) {
+            double rmse, double within1sd, double within2sd) {
         String line() {
             return String.format(Locale.ROOT, "molecules=%d values=%d matched=%d failed_molecules=%d extra_2to12=%d "
-                    + "within1=%.3f MAE=%.3f RMSE=%.3f within_1sd=%.3f", molecules, values, matched, failed, extra,
-                    within1, mae, rmse, within1sd);
+                    + "within1=%.3f MAE=%.3f RMSE=%.3f within_1sd=%.3f within_2sd=%.3f", molecules, values, matched,
+                    failed, extra, within1, mae, rmse, within1sd, within2sd);
         }
     }
 
@@ -88,6 +88,7 @@ final class Accuracy {
         double sq = 0;
         int withSd = 0;
         int insideSd = 0;
+        int inside2Sd = 0;
         for (Scored x : all) {
             values += x.o().pka().size();
             if (x.error() != null) {
@@ -106,6 +107,7 @@ final class Accuracy {
                 if (!Double.isNaN(sd)) {
                     withSd++;
                     insideSd += Math.abs(e) <= sd ? 1 : 0;
+                    inside2Sd += Math.abs(e) <= 2 * sd ? 1 : 0;
                 }
             }
             for (int j = 0; j < x.pred().size(); j++) {
@@ -116,7 +118,8 @@ final class Accuracy {
         }
         return new Summary(all.size(), values, matched, failed, extra, values == 0 ? 0 : (double) within1 / values,
                 matched == 0 ? Double.NaN : abs / matched, matched == 0 ? Double.NaN : Math.sqrt(sq / matched),
-                withSd == 0 ? Double.NaN : (double) insideSd / withSd);
+                withSd == 0 ? Double.NaN : (double) insideSd / withSd,
+                withSd == 0 ? Double.NaN : (double) inside2Sd / withSd);
     }
 
     static void report(List<Scored> all, Summary sum, Path dir, String title) throws IOException {
