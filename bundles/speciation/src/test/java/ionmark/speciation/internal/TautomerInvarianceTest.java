@@ -63,6 +63,27 @@ class TautomerInvarianceTest {
         {"creatinine", "CN1CC(=O)NC1=N", "CN1CC(=O)N=C1N"},
         {"allopurinol", "O=c1[nH]cnc2[nH]ncc12", "Oc1ncnc2[nH]ncc12"},
         {"6-mercaptopurine", "S=c1nc[nH]c2nc[nH]c12", "Sc1ncnc2nc[nH]c12"},
+        // hydrogens between carbon and oxygen (KetoEnol): keto and enol drawings of one compound
+        {"acetylacetone", "CC(=O)CC(C)=O", "CC(O)=CC(C)=O"},
+        {"ethyl acetoacetate", "CCOC(=O)CC(C)=O", "CCOC(=O)C=C(C)O"},
+        {"dimedone", "CC1(C)CC(=O)CC(=O)C1", "CC1(C)CC(O)=CC(=O)C1"},
+        {"3-methylpentane-2,4-dione", "CC(=O)C(C)C(C)=O", "CC(O)=C(C)C(C)=O"},
+        {"2-acetylcyclohexanone", "CC(=O)C1CCCCC1=O", "CC(O)=C1CCCCC1=O", "CC(=O)C1=C(O)CCCC1"},
+        {"dibenzoylmethane", "O=C(CC(=O)c1ccccc1)c1ccccc1", "OC(=CC(=O)c1ccccc1)c1ccccc1"},
+        {"acetoacetanilide", "CC(=O)CC(=O)Nc1ccccc1", "CC(O)=CC(=O)Nc1ccccc1"},
+        {"indane-1,3-dione", "O=C1CC(=O)c2ccccc21", "OC1=CC(=O)c2ccccc21"},
+        {"phenindione", "O=C1C(c2ccccc2)C(=O)c2ccccc21", "OC1=C(c2ccccc2)C(=O)c2ccccc21"},
+        {"tetronic acid", "O=C1COC(=O)C1", "OC1=CC(=O)OC1"},
+        {"Meldrum's acid", "CC1(C)OC(=O)CC(=O)O1", "CC1(C)OC(=O)C=C(O)O1"},
+        {"4-hydroxycoumarin", "O=c1cc(O)c2ccccc2o1", "O=C1CC(=O)c2ccccc2O1", "OC1=CC(=O)c2ccccc2O1"},
+        {"4-hydroxy-6-methyl-2-pyrone", "Cc1cc(O)cc(=O)o1", "CC1=CC(=O)CC(=O)O1"},
+        {"dehydroacetic acid", "CC(=O)C1C(=O)OC(C)=CC1=O", "CC(=O)C1=C(O)C=C(C)OC1=O"},
+        {"warfarin", "CC(=O)CC(c1ccccc1)c1c(O)c2ccccc2oc1=O", "CC(=O)CC(c1ccccc1)C1C(=O)Oc2ccccc2C1=O"},
+        {"ascorbic acid", "OCC(O)C1OC(=O)C(O)=C1O", "OCC(O)C1OC(=O)C(O)C1=O"},
+        {"malondialdehyde", "O=CCC=O", "OC=CC=O"},
+        {"2-formylcyclohexanone", "O=CC1CCCCC1=O", "OC=C1CCCCC1=O"},
+        {"2-hydroxy-1,4-naphthoquinone", "OC1=CC(=O)c2ccccc2C1=O", "O=C1CC(=O)c2ccccc2C1=O"},
+        {"2,5-dihydroxy-1,4-benzoquinone", "OC1=CC(=O)C(O)=CC1=O", "O=C1CC(=O)C(=O)CC1=O"},
     };
 
     @TestFactory
@@ -103,6 +124,33 @@ class TautomerInvarianceTest {
         assertTrue(lactam.warnings().stream().noneMatch(w -> w.contains("tautomer")), lactam.warnings().toString());
         // a carboxylic acid's two oxygens are one position: nothing moves, nothing is said
         assertTrue(analyse("OC(=O)c1ccccc1").warnings().stream().noneMatch(w -> w.contains("tautomer")));
+    }
+
+    @Test
+    void keto1And3DicarbonylsAreAnalysedAsTheKetoFormAndStableEnolsAsTheEnol() {
+        // pKa values: acetylacetone 8.99, dimedone 5.23, ethyl acetoacetate 10.68 (carbon acids; Serjeant and
+        // Dempsey 1979, from memory), tetronic acid 3.76 and 4-hydroxycoumarin 4.1 (enol acids; from memory).
+        // Each is asked for in its other drawing than the class is written for: the estimate is within 1.0.
+        String[][] cases = {{"CC(O)=CC(C)=O", "8.99"}, {"CC1(C)CC(O)=CC(=O)C1", "5.23"},
+            {"CCOC(=O)C=C(C)O", "10.68"}, {"O=C1COC(=O)C1", "3.76"}, {"O=C1CC(=O)c2ccccc2O1", "4.1"}};
+        for (String[] c : cases) {
+            Analysis a = analyse(c[0]);
+            assertEquals(1, a.macroPka().stream().filter(v -> v > 2 && v < 12).count(), c[0] + " " + a.macroPka());
+            double v = a.macroPka().stream().filter(x -> x > 2 && x < 12).findFirst().orElseThrow();
+            assertEquals(Double.parseDouble(c[1]), v, 1.0, c[0]);
+            assertTrue(a.warnings().stream().anyMatch(w -> w.contains("another tautomer")), c[0] + " " + a.warnings());
+        }
+    }
+
+    @Test
+    void aKetoneOnASaturatedRingDoesNotUnsettleTheBenzeneRingNextToIt() {
+        // 8-hydroxy-1-tetralone and 2'-hydroxyacetophenone are phenols hydrogen-bonded to the C=O (common
+        // practice): the hydrogen stays on the phenol oxygen, nothing is moved
+        for (String smiles : new String[] {"O=C1CCCc2cccc(O)c21", "CC(=O)c1ccccc1O"}) {
+            Analysis a = analyse(smiles);
+            assertTrue(a.warnings().stream().noneMatch(w -> w.contains("tautomer")), smiles + " " + a.warnings());
+            assertTrue(a.sites().stream().anyMatch(s -> s.group().startsWith("phenol")), smiles + " " + a.sites());
+        }
     }
 
     @Test

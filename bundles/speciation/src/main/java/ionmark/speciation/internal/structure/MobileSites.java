@@ -296,7 +296,9 @@ final class MobileSites {
             boolean allCarbon = true;
             for (int k = 0; k < paths[r].length - 1; k++) {
                 mask[paths[r][k]] |= 1L << r;
-                allCarbon &= z(paths[r][k]) == 6;
+                // a ring with a saturated carbon (the CH2 groups of a cyclohexanone) can never be benzenoid:
+                // a C=O on it breaks nothing
+                allCarbon &= z(paths[r][k]) == 6 && inSystem(paths[r][k]);
             }
             if (allCarbon) {
                 carbocyclic |= 1L << r;

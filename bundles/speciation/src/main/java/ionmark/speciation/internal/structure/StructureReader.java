@@ -109,10 +109,24 @@ public final class StructureReader {
         SmartsPattern.prepare(mol);
         Tautomers.Moved moved = Tautomers.toReference(mol);
         if (moved.any()) {
+            SmartsPattern.prepare(mol);
+        }
+        KetoEnol.Moved carbon = KetoEnol.toReference(mol);
+        if (carbon.any()) {
+            // the carbon skeleton changed: the heteroatom hydrogens are placed again on it
+            SmartsPattern.prepare(mol);
+            Tautomers.Moved again = Tautomers.toReference(mol);
+            moved = moved.any() || !again.any() ? moved : again;
+            SmartsPattern.prepare(mol);
+            notes.add("input was drawn as another tautomer (" + carbon.describe() + "); analysed as the reference "
+                    + "tautomer: keto over enol, except the stable enols of ring vinylogous acids (tetronic acids, "
+                    + "4-hydroxy-2-pyrones and -coumarins, ascorbic acid), cyclic 1,2-diones (hydroxyquinones) and "
+                    + "1,3-ketoaldehydes");
+        }
+        if (moved.any()) {
             notes.add("input was drawn as another tautomer (" + moved.describe() + "); analysed as the reference "
                     + "tautomer: amide and lactam over iminol and lactim, thione over thiol, amino over imino, benzene "
                     + "rings kept");
-            SmartsPattern.prepare(mol);
         }
         if (moved.capped() > 0) {
             notes.add("too many tautomers to compare in " + moved.capped() + " conjugated system(s); analysed as drawn");

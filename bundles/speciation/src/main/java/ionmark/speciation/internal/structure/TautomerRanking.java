@@ -6,7 +6,8 @@ import java.util.List;
 
 /**
  * The reference placement of one conjugated system's mobile hydrogens, by the rule order of
- * {@link Tautomers}: fewest broken carbocycles, most C=O and C=S, most aromatic rings, fewest exocyclic
+ * {@link Tautomers}: fewest broken carbocycles, most C=O and C=S, most C=O on ester carbons, most aromatic
+ * rings, fewest exocyclic
  * double bonds on ring atoms, most amide N-H, open-chain imine placement, and only on a tie after all
  * of these the order-independent structure hash.
  *
@@ -185,13 +186,14 @@ final class TautomerRanking {
         return broken;
     }
 
-    /** Rules 1-6 as a key: smaller is the reference. Without rings every ring term is 0 for every placement. */
+    /** Rules 1-6 (with 2b) as a key: smaller is the reference. Without rings every ring term is 0 for every placement. */
     private long[] key(int[] atoms, int[] placement, boolean[] bonds, boolean rings) {
         long[] ringMask = rings ? m.ringMask() : null;
         long carbocyclic = rings ? m.carbocyclic() : 0;
         int brokenCarbocycle = 0;
         int exocyclic = 0;
         int oxo = 0;
+        int acylOxo = 0;
         int imine = 0;
         int amideNh = 0;
         for (int i : atoms) {
@@ -200,6 +202,7 @@ final class TautomerRanking {
             if (pooled && !holds) {
                 if (m.z(i) != 7) {
                     oxo++;
+                    acylOxo += onEsterCarbon(i) ? 1 : 0;
                 } else if (m.nbr[i].length == 2 && (ringMask == null || ringMask[i] == 0)) {
                     imine += imineOn(i, ringMask);
                 }
@@ -219,7 +222,28 @@ final class TautomerRanking {
             }
         }
         int aromatic = rings ? aromaticRings(placement) : 0;
-        return new long[] {brokenCarbocycle, -oxo, -aromatic, exocyclic, -amideNh, imine};
+        return new long[] {brokenCarbocycle, -oxo, -acylOxo, -aromatic, exocyclic, -amideNh, imine};
+    }
+
+    /**
+     * Whether the O or S position i sits on a carbon that also carries an ether-type O or S (not a mobile
+     * position): the carbonyl of an ester, lactone or carbonate. Rule 2b: of placements with as many C=O, the
+     * one with the C=O on such a carbon (ester resonance), so that a tetronic acid or a 4-hydroxycoumarin is the
+     * vinylogous acid HO-C=C-C(=O)-O and not the ketene acetal O=C-C=C(OH)-O.
+     */
+    private boolean onEsterCarbon(int i) {
+        for (int c : m.nbr[i]) {
+            if (m.z(c) != 6) {
+                continue;
+            }
+            for (int x : m.nbr[c]) {
+                int z = m.z(x);
+                if (x != i && (z == 8 || z == 16) && !m.pool[x] && m.nbr[x].length == 2) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     /** Whether N-H atom i sits on a carbon that carries C=O or C=S in this placement (an amide N-H). */

@@ -17,11 +17,14 @@ import org.openscience.cdk.interfaces.IAtomContainer;
  * putting them back on the mobile positions for which a Kekulé structure exists is a tautomer. Of
  * those the reference is the one that, in this order:
  * <ol>
- * <li>breaks the fewest carbocyclic rings: fewest ring carbons of all-carbon rings with a double bond
+ * <li>breaks the fewest carbocyclic rings: fewest ring carbons of all-carbon rings (every ring atom able to
+ * carry a double bond) with a double bond
  * out of their rings (a benzene ring stays benzenoid: phenol over cyclohexadienone, azo-phenol over
  * quinone hydrazone, hydroxy groups on a benzo ring stay);
  * <li>has the most C=O and C=S (amide over iminol, lactam over lactim, keto over enol between
- * heteroatoms, thione over thiol; 2-pyridone, uracil, barbiturates);
+ * heteroatoms, thione over thiol; 2-pyridone, uracil, barbiturates); of those with as many, the most
+ * C=O on ester and lactone carbons (a tetronic acid or a 4-hydroxycoumarin is HO-C=C-C(=O)-O, not the
+ * ketene acetal O=C-C=C(OH)-O);
  * <li>has the most aromatic rings (six-membered: a double bond on every atom; five-membered: on four, and
  * one N, O or S lone pair): amino over imino (2-aminopyridine, a sulfonamide on a ring N over the
  * sulfonylimine), the imidazole N-H of purines over pyrimidine-ring N-H;
@@ -33,7 +36,7 @@ import org.openscience.cdk.interfaces.IAtomContainer;
  * to the structure with the smallest hash of atom invariants refined over the whole graph, which does
  * not depend on the input's atom order.
  * </ol>
- * Hydrogens on carbon do not move (keto/enol tautomers over carbon stay as drawn). A conjugated system
+ * Hydrogens on carbon are {@link KetoEnol}'s, which runs first. A conjugated system
  * with fewer than two mobile positions, or no mobile hydrogen, is skipped before any search; one with
  * more than {@value #MAX_CANDIDATES} placements is left as drawn.
  *
