@@ -76,7 +76,7 @@ final class MeasuredSites {
     private static SiteAnalogIndex.MeasuredSite site(Engine engine, MeasuredCompound m, MatchTarget target,
             EstimatedSite s, double constant, int value, double share, AnalogSettings settings) {
         return new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
-                SiteEnvironment.of(target, s.site(), settings.radius()), constant, m.pka().get(value) - constant,
+                SiteEnvironment.of(target, s.site(), settings.radius(), settings.annular()), constant, m.pka().get(value) - constant,
                 engine.table().citation(m.source()), AnalogCorrection.heldBy(s), share);
     }
 

@@ -33,7 +33,7 @@ public final class AnalogCorrection {
             return est;
         }
         List<EstimatedSite> out = new ArrayList<>(est.size());
-        int[][] ids = null; // the molecule's circular identifiers, shared by its sites' environments
+        SiteEnvironment.Prepared ids = null; // the molecule's circular identifiers, shared by its sites' environments
         for (EstimatedSite s : est) {
             if (s.site().group().permanent()) {
                 out.add(s);
@@ -46,7 +46,7 @@ public final class AnalogCorrection {
                 continue;
             }
             if (ids == null) {
-                ids = Morgan.identifiers(mol, index.settings().radius());
+                ids = SiteEnvironment.prepare(mol, index.settings().radius(), index.settings().annular());
             }
             out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
         }
