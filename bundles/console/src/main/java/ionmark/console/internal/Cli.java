@@ -30,6 +30,7 @@ public final class Cli {
                    ionmark accuracy --series --truth FILE [--series-fold K/N] [--half] [--members FILE]
                                     [--radius R] [--threshold T] [--prior P] [--kernel linear|quadratic] [--detail]
                                     [--family F] [--huber C] [--near-prior P]
+                                    [--assign nearest|titrating|split] [--annular on|off]
                    ionmark annotate ENTRY.md [--format json|text]
                    ionmark table validate FILE | table export [--out FILE]
                    ionmark table calibrate --truth FILE --out FILE [--ref ID] [--citation TEXT] [--fold K/N] [--margin M]

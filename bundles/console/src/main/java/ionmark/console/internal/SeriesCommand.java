@@ -39,7 +39,7 @@ final class SeriesCommand {
 
     int run(List<String> raw) {
         Cli.Args a = Cli.Args.parse(raw, Set.of("--truth", "--radius", "--threshold", "--prior", "--kernel", "--family",
-                "--huber", "--near-prior", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
+                "--huber", "--near-prior", "--assign", "--annular", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
         Map<String, String> settings = new TreeMap<>();
         for (String k : List.of("radius", "threshold", "prior", "family", "huber", "near-prior")) {
             if (a.flags().containsKey("--" + k)) {
@@ -49,6 +49,20 @@ final class SeriesCommand {
         }
         if (a.flags().containsKey("--kernel")) {
             settings.put("ionmark.analog.kernel", a.v("--kernel"));
+        }
+        if (a.flags().containsKey("--assign")) {
+            String how = a.v("--assign").toLowerCase(java.util.Locale.ROOT);
+            if (!Set.of("nearest", "titrating", "split").contains(how)) {
+                throw new Cli.UsageException("--assign takes nearest, titrating or split, not '" + a.v("--assign") + "'");
+            }
+            settings.put("ionmark.analog.assign", how);
+        }
+        if (a.flags().containsKey("--annular")) {
+            String on = a.v("--annular").toLowerCase(java.util.Locale.ROOT);
+            if (!on.equals("on") && !on.equals("off")) {
+                throw new Cli.UsageException("--annular takes on or off, not '" + a.v("--annular") + "'");
+            }
+            settings.put("ionmark.analog.annular", Boolean.toString(on.equals("on")));
         }
         if (a.flags().containsKey("--detail")) {
             settings.put("ionmark.series.detail", "true");

@@ -166,13 +166,19 @@ public final class Engine {
 
     /** The model's macroscopic constants at 25 °C, I = 0, with no measured value or analog applied (for the analog index). */
     List<Double> modelConstants(String input) throws StructureException {
+        return model(input).constants();
+    }
+
+    /** The model at 25 °C, I = 0, with no measured value or analog applied: sites, numeric model, constants. */
+    ModelSites model(String input) throws StructureException {
         MatchTarget target = new MatchTarget(reader.read(input).molecule());
         List<EstimatedSite> est = LferEstimator.estimate(table, target.molecule(), target,
                 SitePerceiver.perceive(table, target));
         double[][] inter = interactions.interactions(SiteInteractions.distances(target, est), est);
         est = pairs.apply(target, est, inter, new HashSet<>());
-        return MacroConstants.of(MacroConstants.polynomial(SiteInteractions.model(inter, est, Conditions.noPh()),
-                table.table().interaction().cutoff()));
+        SiteModel m = SiteInteractions.model(inter, est, Conditions.noPh());
+        return new ModelSites(est, m, MacroConstants.of(MacroConstants.polynomial(m, table.table().interaction().cutoff())),
+                solver);
     }
 
     /** Ids of the table's pair rules that join two sites of this structure (none when it cannot be read). */

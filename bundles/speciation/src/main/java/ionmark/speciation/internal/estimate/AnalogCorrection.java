@@ -33,7 +33,7 @@ public final class AnalogCorrection {
             return est;
         }
         List<EstimatedSite> out = new ArrayList<>(est.size());
-        int[][] ids = null; // the molecule's circular identifiers, shared by its sites' environments
+        SiteEnvironment.Prepared ids = null; // the molecule's circular identifiers, shared by its sites' environments
         for (EstimatedSite s : est) {
             if (s.site().group().permanent()) {
                 out.add(s);
@@ -46,7 +46,7 @@ public final class AnalogCorrection {
                 continue;
             }
             if (ids == null) {
-                ids = Morgan.identifiers(mol, index.settings().radius());
+                ids = SiteEnvironment.prepare(mol, index.settings().radius(), index.settings().annular());
             }
             out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
         }
@@ -61,7 +61,7 @@ public final class AnalogCorrection {
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
             double sim = SiteEnvironment.tanimoto(env, m.env());
-            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight());
+            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight()) * m.share();
             if (w > 0) {
                 best.merge(m.compound().id(), new Used(m, sim, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
             }
@@ -175,6 +175,10 @@ public final class AnalogCorrection {
             // one line a chemist reads: why the prior is not the same for every site
             Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
                     .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
+        }
+        if (m.share() < 1) {
+            Decimals.append(label.append("; its site gives off "), m.share(), 2, false)
+                    .append(" of that step's proton in the model");
         }
         if (u.damped()) {
             label.append("; weight cut: residual far from the other analogs'");

@@ -18,9 +18,23 @@ import java.util.Locale;
  *                     prior count when the nearest analog sits at the threshold (weight 0), and in between the prior
  *                     falls geometrically with the nearest analog's weight ({@link #prior(double)}), so a lone
  *                     distant analog moves a site less than a close one; equal to {@code prior}: one prior for all
+ * @param assignment   which site of a measured compound takes each measured value's residual
+ * @param annular      whether an azole's ring nitrogens that pass its N-H between them count alike in the site
+ *                     environment ({@link SiteEnvironment#prepare}), so that the annular tautomer a structure was
+ *                     read in does not decide its analogs
  */
 public record AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
-        Kernel kernel, double huber, double nearPrior) {
+        Kernel kernel, double huber, double nearPrior, Assignment assignment, boolean annular) {
+    /** Which site of a measured compound takes the residual of a measured value. */
+    public enum Assignment {
+        /** the site whose estimate lies nearest the measured value (as an exact match is fitted) */
+        NEAREST,
+        /** the site that titrates in the model's step paired with the value (its largest share of the step) */
+        TITRATING,
+        /** every site with a fair share of that step, its share a factor on the analog weight */
+        SPLIT
+    }
+
     /** The weight's shape between the threshold (0) and identity (1). */
     public enum Kernel {
         /** (T − t)/(1 − t) */
@@ -35,9 +49,12 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
      * cross-validated development figures (docs/analog-series.md): pooled ratio 0.82 (prior 1) → 0.75, CV within
      * 1.0 80.45 % → 80.43 %, MAE 0.627 → 0.630. Without the robust weights a low prior let one misassigned
      * measurement drag a series; with family analogs (weight 0.5) one weak analog of another class moved a site
-     * most of the way (glutarimide +0.8 from succinimide).
+     * most of the way (glutarimide +0.8 from succinimide). Residuals on the site that titrates in the model's paired
+     * step: pooled ratio 0.746 → 0.739, biased series 0.707 → 0.703, CV 80.43 % → 80.47 %, MAE 0.6295 → 0.6291; with
+     * azole ring nitrogens alike as well: 0.736, 0.692, 80.47 %, 0.6293 (docs/analog-series.md, round 4).
      */
-    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5, 0.15);
+    public static final AnalogSettings DEFAULT = new AnalogSettings(4, 0.3, 0.15, 0, 8, Kernel.LINEAR, 0.5, 0.15,
+            Assignment.TITRATING, true);
 
     /** One prior count for every site, whatever its nearest analog (the settings before the nearest-analog prior). */
     public AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
@@ -45,9 +62,19 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
         this(radius, threshold, prior, familyWeight, maxAnalogs, kernel, huber, prior);
     }
 
+    /**
+     * Residuals on the sites nearest the measured values, azoles compared in the tautomer read (the settings before
+     * the titrating-site rule and the annular-tautomer environment).
+     */
+    public AnalogSettings(int radius, double threshold, double prior, double familyWeight, int maxAnalogs,
+            Kernel kernel, double huber, double nearPrior) {
+        this(radius, threshold, prior, familyWeight, maxAnalogs, kernel, huber, nearPrior, Assignment.NEAREST, false);
+    }
+
     public AnalogSettings {
         if (radius < 1 || radius > 6 || threshold < 0 || threshold >= 1 || prior <= 0 || familyWeight < 0
-                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0 || nearPrior <= 0) {
+                || familyWeight > 1 || maxAnalogs < 1 || kernel == null || huber < 0 || nearPrior <= 0
+                || assignment == null) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d, "
                             + "near prior %.2f", radius, threshold, prior, familyWeight, maxAnalogs, nearPrior));
@@ -57,7 +84,7 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
     /**
      * The defaults, each overridable by a system property ({@code ionmark.analog.radius},
      * {@code .threshold}, {@code .prior}, {@code .family}, {@code .max}, {@code .kernel}, {@code .huber},
-     * {@code .near-prior}): the series experiment's parameter search sets them; a product installation leaves them
+     * {@code .near-prior}, {@code .assign}, {@code .annular}): the series experiment's parameter search sets them; a product installation leaves them
      * alone. A prior given without a near prior is one prior for all sites.
      */
     public static AnalogSettings current() {
@@ -69,7 +96,10 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
                 Integer.getInteger("ionmark.analog.max", DEFAULT.maxAnalogs), Kernel.valueOf(System.getProperty(
                         "ionmark.analog.kernel", DEFAULT.kernel.name()).toUpperCase(java.util.Locale.ROOT)),
                 number("ionmark.analog.huber", DEFAULT.huber),
-                number("ionmark.analog.near-prior", prior == null ? DEFAULT.nearPrior : far));
+                number("ionmark.analog.near-prior", prior == null ? DEFAULT.nearPrior : far),
+                Assignment.valueOf(System.getProperty("ionmark.analog.assign", DEFAULT.assignment.name())
+                        .toUpperCase(java.util.Locale.ROOT)),
+                Boolean.parseBoolean(System.getProperty("ionmark.analog.annular", Boolean.toString(DEFAULT.annular))));
     }
 
     /**

@@ -25,12 +25,17 @@ final class Morgan {
      * {@link #of} computes them (for the site environments of {@link SiteEnvironment}).
      */
     static int[][] identifiers(MatchTarget mol, int radius) {
+        return identifiers(mol, radius, null);
+    }
+
+    /** {@link #identifiers(MatchTarget, int)} with the hydrogens of the atoms marked in {@code noH} (may be null) left out. */
+    static int[][] identifiers(MatchTarget mol, int radius, boolean[] noH) {
         int n = mol.atomCount();
         int[][] nbr = mol.adjacency();
         int[][] ids = new int[radius + 1][n];
         for (int i = 0; i < n; i++) {
             int packed = Math.min(mol.atomicNumber(i), 255) | Math.min(nbr[i].length, 15) << 8
-                    | Math.min(mol.implicitHydrogens(i), 15) << 12 | (Math.max(-8, Math.min(mol.formalCharge(i), 7)) + 8) << 16
+                    | (noH != null && noH[i] ? 0 : Math.min(mol.implicitHydrogens(i), 15)) << 12 | (Math.max(-8, Math.min(mol.formalCharge(i), 7)) + 8) << 16
                     | (mol.aromatic(i) ? 1 : 0) << 20 | (mol.inRing(i) ? 1 : 0) << 21;
             ids[0][i] = mix(0x9747b28c, packed);
         }

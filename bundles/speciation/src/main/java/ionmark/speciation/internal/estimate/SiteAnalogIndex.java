@@ -29,9 +29,16 @@ public final class SiteAnalogIndex {
      * @param residual measured − model at this site
      * @param citation full citation of the measured value's source
      * @param held     the pair rules that hold the site ({@link AnalogCorrection#heldBy}), empty when none
+     * @param share    the site's share of the model step the residual belongs to: a factor on its analog weight (1
+     *                 when the whole residual is this site's)
      */
     public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
-            double residual, String citation, String held) {
+            double residual, String citation, String held, double share) {
+        /** A site that takes the whole residual. */
+        public MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
+                double residual, String citation, String held) {
+            this(compound, group, type, env, model, residual, citation, held, 1);
+        }
     }
 
     public static final SiteAnalogIndex EMPTY = new SiteAnalogIndex(List.of(), AnalogSettings.DEFAULT);
