@@ -98,7 +98,9 @@ public final class Engine {
                 if (analogs == null) {
                     buildingAnalogs = true;
                     try {
-                        analogs = MeasuredSites.index(this, table.table().measured(), AnalogSettings.current());
+                        // once per snapshot, for every later structure: not under the asking structure's budget
+                        analogs = ionmark.speciation.internal.work.Budget.unbudgeted(
+                                () -> MeasuredSites.index(this, table.table().measured(), AnalogSettings.current()));
                     } finally {
                         buildingAnalogs = false;
                     }

@@ -99,6 +99,25 @@ class TimeBudgetTest {
     }
 
     @Test
+    void workDoneOnceForEveryStructureRunsOutsideTheAskingStructuresBudget() throws InterruptedException {
+        // the measured-analog index of a snapshot is built on first use; a first structure already out of time must
+        // not cut it short (and leave it cached incomplete), and its own budget is back in force afterwards
+        ionmark.speciation.internal.work.Budget spent = ionmark.speciation.internal.work.Budget.of(1);
+        Thread.sleep(5);
+        boolean[] checkedInside = new boolean[1];
+        boolean overAfter = spent.run(() -> {
+            ionmark.speciation.internal.work.Budget.unbudgeted(() -> {
+                ionmark.speciation.internal.work.Budget.check(); // would throw under the spent budget
+                checkedInside[0] = true;
+                return null;
+            });
+            return ionmark.speciation.internal.work.Budget.exhausted();
+        });
+        assertTrue(checkedInside[0]);
+        assertTrue(overAfter, "the caller's budget applies again after the unbudgeted work");
+    }
+
+    @Test
     void aSmallStructureIsAnnotatedWithinItsBudget() {
         SpeciationService s = oneWorker();
         try {

@@ -53,6 +53,24 @@ public final class Budget {
         }
     }
 
+    /**
+     * Runs {@code work} on this thread with no budget, whatever budget the caller runs under, and restores it
+     * afterwards: for work done once for every later structure (the measured-analog index of a table snapshot),
+     * which must not be cut short, and cached incomplete, because the structure that happened to ask first ran
+     * out of time.
+     */
+    public static <T> T unbudgeted(java.util.function.Supplier<T> work) {
+        Budget outer = CURRENT.get();
+        CURRENT.remove();
+        try {
+            return work.get();
+        } finally {
+            if (outer != null) {
+                CURRENT.set(outer);
+            }
+        }
+    }
+
     /** Throws {@link OverBudgetException} when the structure in progress on this thread is over its budget. */
     public static void check() {
         Budget b = CURRENT.get();
