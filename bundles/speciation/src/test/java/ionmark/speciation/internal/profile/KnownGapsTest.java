@@ -29,7 +29,8 @@ class KnownGapsTest {
             assertTrue(w.stream().anyMatch(x -> x.contains(g.warning())), g.example() + " (" + g.exampleSmiles()
                     + "): " + w);
         }
-        assertTrue(KnownGaps.gaps().size() >= 10, "the list lost lines: " + KnownGaps.gaps().size());
+        // 11 lines in table v33; the 4(3H)-pyrimidinone N1 and cytosine gaps were fixed in v34 and one was added
+        assertTrue(KnownGaps.gaps().size() >= 9, "the list lost lines: " + KnownGaps.gaps().size());
     }
 
     @Test
@@ -42,10 +43,11 @@ class KnownGapsTest {
 
     @Test
     void theGapWarnsForEveryDrawingOfTheCompound() {
-        // 4(3H)-pyrimidinone drawn as the 1H tautomer and as 4-hydroxypyrimidine: one compound, one warning
-        for (String smiles : List.of("O=c1ccnc[nH]1", "O=c1cc[nH]cn1", "Oc1ccncn1")) {
-            assertEquals(1, gapWarnings(smiles).stream().filter(w -> w.contains("4(3H)-pyrimidinone")).count(),
-                    smiles);
+        // 4,6-dihydroxypyrimidine drawn as the diol, as the 3H-pyrimidinone and as the 1H-pyrimidinone: one
+        // compound, one warning
+        for (String smiles : List.of("Oc1cc(O)ncn1", "O=c1cc(O)nc[nH]1", "O=c1cc(O)[nH]cn1")) {
+            assertEquals(1, gapWarnings(smiles).stream().filter(w -> w.contains("6-hydroxy-4(3H)-pyrimidinone"))
+                    .count(), smiles);
         }
     }
 
