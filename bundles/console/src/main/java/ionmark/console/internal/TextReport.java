@@ -45,10 +45,13 @@ final class TextReport {
         }
         sb.append("macro pKa  ").append(a.macroPka()).append('\n');
         if (a.netCharge() != null) {
-            sb.append(String.format(Locale.ROOT, "net charge %.2f; neutral %.1f %% (uncharged %.1f %%, the rest "
-                    + "zwitterions)%s%n", a.netCharge(), 100 * a.fractionNeutral(),
-                    100 * (a.fractionUncharged() == null ? a.fractionNeutral() : a.fractionUncharged()),
-                    !a.hasProfile() || a.profile().logD() == null ? ""
+            double neutral = 100 * a.fractionNeutral();
+            double uncharged = 100 * (a.fractionUncharged() == null ? a.fractionNeutral() : a.fractionUncharged());
+            // the zwitterion share is only worth a word where there is one
+            String split = neutral - uncharged < 0.05 ? "" : String.format(Locale.ROOT,
+                    " (uncharged %.1f %%, zwitterions %.1f %%)", uncharged, neutral - uncharged);
+            sb.append(String.format(Locale.ROOT, "net charge %.2f; neutral %.1f %%%s%s%n", a.netCharge(), neutral,
+                    split, !a.hasProfile() || a.profile().logD() == null ? ""
                             : String.format(Locale.ROOT, "; logD %.2f", a.profile().logD())));
             for (Species s : a.hasProfile() ? a.profile().species() : java.util.List.<Species>of()) {
                 if (s.fraction() >= 0.01) {
