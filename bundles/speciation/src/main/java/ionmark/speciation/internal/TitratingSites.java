@@ -52,18 +52,10 @@ final class TitratingSites {
         }
         cand.sort(Comparator.<double[]>comparingDouble(c -> -c[0]).thenComparingDouble(c -> c[1])
                 .thenComparingDouble(c -> c[2]));
-        boolean[] stepUsed = new boolean[pairs.size()];
-        boolean[] siteUsed = new boolean[sites];
         List<Placed> out = new ArrayList<>();
-        for (double[] c : cand) {
-            int p = (int) c[1];
-            int s = (int) c[2];
-            if (!stepUsed[p] && !siteUsed[s]) {
-                stepUsed[p] = true;
-                siteUsed[s] = true;
-                int[] pair = pairs.get(p);
-                out.add(new Placed(pair[0], constants.get(pair[1]), s, 1));
-            }
+        for (int[] taken : GreedyPairs.take(cand, pairs.size(), sites)) {
+            int[] pair = pairs.get(taken[0]);
+            out.add(new Placed(pair[0], constants.get(pair[1]), taken[1], 1));
         }
         out.sort(Comparator.comparingInt(Placed::value));
         return out;

@@ -66,19 +66,7 @@ public final class MacroPairing {
             }
         }
         cand.sort(Comparator.comparingDouble(c -> c[0]));
-        boolean[] ue = new boolean[exp.size()];
-        boolean[] up = new boolean[pred.size()];
-        List<int[]> out = new ArrayList<>();
-        for (double[] c : cand) {
-            int i = (int) c[1];
-            int j = (int) c[2];
-            if (!ue[i] && !up[j]) {
-                ue[i] = true;
-                up[j] = true;
-                out.add(new int[] {i, j});
-            }
-        }
-        return out;
+        return ionmark.speciation.internal.GreedyPairs.take(cand, exp.size(), pred.size());
     }
 
     private static long perm(int n, int k) {

@@ -91,20 +91,17 @@ final class KetoEnol {
     private int enolsToKeto() {
         int moved = 0;
         for (IAtom o : mol.atoms()) {
-            if (o.getAtomicNumber() != 8 || charge(o) != 0 || h(o) != 1 || mol.getConnectedBondsCount(o) != 1) {
+            IBond co = oxygenOnCarbon(o, 1, IBond.Order.SINGLE);
+            if (co == null) {
                 continue;
             }
-            IBond co = mol.getConnectedBondsList(o).get(0);
             IAtom ca = co.getOther(o);
-            if (ca.getAtomicNumber() != 6 || co.getOrder() != IBond.Order.SINGLE || ca.isAromatic() || charge(ca) != 0) {
-                continue;
-            }
             IBond cc = doubleBondToCarbon(ca);
             if (cc == null || cc.isAromatic()) {
                 continue;
             }
             IAtom cb = cc.getOther(ca);
-            if (cb.isAromatic() || charge(cb) != 0 || carriesHeteroatom(cb) || carriesNitrogenOrSulfur(ca)
+            if (cb.isAromatic() || charge(cb) != 0 || carries(cb, true) || carries(ca, false)
                     || ringVinylogousAcid(ca, cb) != null || ketoAldehydeEnol(ca, cb) || ringDioneEnol(ca, cb)) {
                 continue;
             }
@@ -122,14 +119,11 @@ final class KetoEnol {
     private int ketonesToRingVinylogousAcids() {
         int moved = 0;
         for (IAtom o : mol.atoms()) {
-            if (o.getAtomicNumber() != 8 || charge(o) != 0 || h(o) != 0 || mol.getConnectedBondsCount(o) != 1) {
+            IBond co = oxygenOnCarbon(o, 0, IBond.Order.DOUBLE);
+            if (co == null) {
                 continue;
             }
-            IBond co = mol.getConnectedBondsList(o).get(0);
             IAtom ca = co.getOther(o);
-            if (ca.getAtomicNumber() != 6 || co.getOrder() != IBond.Order.DOUBLE || ca.isAromatic()) {
-                continue;
-            }
             for (IBond ab : mol.getConnectedBondsList(ca)) {
                 IAtom cb = ab.getOther(ca);
                 if (cb == o || cb.getAtomicNumber() != 6 || ab.getOrder() != IBond.Order.SINGLE || h(cb) == 0
@@ -149,6 +143,19 @@ final class KetoEnol {
             }
         }
         return moved;
+    }
+
+    /**
+     * The bond of an uncharged terminal oxygen with {@code hydrogens} hydrogens to an uncharged non-aromatic carbon,
+     * when it has the given order (single: an enol O-H; double: a C=O); null otherwise.
+     */
+    private IBond oxygenOnCarbon(IAtom o, int hydrogens, IBond.Order order) {
+        if (o.getAtomicNumber() != 8 || charge(o) != 0 || h(o) != hydrogens || mol.getConnectedBondsCount(o) != 1) {
+            return null;
+        }
+        IBond co = mol.getConnectedBondsList(o).get(0);
+        IAtom c = co.getOther(o);
+        return c.getAtomicNumber() == 6 && co.getOrder() == order && !c.isAromatic() && charge(c) == 0 ? co : null;
     }
 
     /**
@@ -252,20 +259,11 @@ final class KetoEnol {
         return found;
     }
 
-    private boolean carriesHeteroatom(IAtom c) {
+    /** Whether carbon {@code c} carries N or S, and O too when {@code oxygen}. */
+    private boolean carries(IAtom c, boolean oxygen) {
         for (IAtom x : mol.getConnectedAtomsList(c)) {
             int z = x.getAtomicNumber();
-            if (z == 7 || z == 8 || z == 16) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    private boolean carriesNitrogenOrSulfur(IAtom c) {
-        for (IAtom x : mol.getConnectedAtomsList(c)) {
-            int z = x.getAtomicNumber();
-            if (z == 7 || z == 16) {
+            if (z == 7 || z == 16 || oxygen && z == 8) {
                 return true;
             }
         }

@@ -116,8 +116,10 @@ public final class StructureReader {
             // the carbon skeleton changed: the heteroatom hydrogens are placed again on it
             SmartsPattern.prepare(mol);
             Tautomers.Moved again = Tautomers.toReference(mol);
-            moved = moved.any() || !again.any() ? moved : again;
-            SmartsPattern.prepare(mol);
+            if (again.any()) {
+                SmartsPattern.prepare(mol);
+                moved = moved.any() ? moved : again;
+            }
             notes.add("input was drawn as another tautomer (" + carbon.describe() + "); analysed as the reference "
                     + "tautomer: keto over enol, except the stable enols of ring vinylogous acids (tetronic acids, "
                     + "4-hydroxy-2-pyrones and -coumarins, ascorbic acid), cyclic 1,2-diones (hydroxyquinones) and "
