@@ -15,8 +15,9 @@ import ionmark.acidity.api.ValidationReport;
  * The table a command-line run uses. Every process that installs the store's head (the notebook's follower, a
  * command-line publish) writes it to {@code .ionmark/head.json}, owner-only; a command-line run reads that file
  * and does not open the database, so {@code check} neither waits for a running notebook's lock nor pays for
- * opening H2. Without the file it reads the head from the store. With no store at all it says, on one line,
- * that it uses the shipped table. A head file that fails its hash check is an error, never used.
+ * opening H2. Without the file it reads the head from the store, and seeds a store that has none yet (a
+ * notebook stopped while it started). With no store at all it says, on one line, that it uses the shipped table.
+ * A head file that fails its hash check is an error, never used.
  */
 final class CliTable {
     static final String HEAD_FILE = "head.json";
@@ -57,6 +58,10 @@ final class CliTable {
             return;
         }
         JdbcTableStore s = db.get();
+        if (s.seedIfEmpty()) {
+            System.err.println("ionmark: the table store had no version yet (its first start was stopped before it"
+                    + " seeded); seeded it with the shipped table " + tables.current().version().label());
+        }
         int number = s.head().orElseThrow(() -> new IllegalStateException("the table store has no head version"))
                 .number();
         String json = s.content(number).orElseThrow();

@@ -228,6 +228,26 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
     }
 
     /**
+     * Seeds an empty store with the table in use (the shipped one), so that a store created by a run that was
+     * stopped before it seeded (a notebook killed while starting) has a head for the next run of any kind:
+     * notebook or command line. Does nothing when the store has a head.
+     *
+     * @return true when this call seeded the store
+     */
+    boolean seedIfEmpty() {
+        if (head().isPresent()) {
+            return false;
+        }
+        try {
+            // the first version keeps the shipped table's own number: "v29" means one content everywhere
+            return seed(tables.toJson(tables.current()), "ionmark", "initial version: the table in use when the"
+                    + " store was created");
+        } catch (StoreRejectedException e) {
+            throw new IllegalStateException("the table in use does not validate: " + e.problems(), e);
+        }
+    }
+
+    /**
      * Starts an empty store from a table (the one shipped with the application): its first version keeps the
      * table's own number, so one version number means one content everywhere. Does nothing when the store
      * has a version already.

@@ -88,7 +88,7 @@ public final class StoreComponent implements TableStore {
                     + "followed in this run");
             this.follower = null;
         } else {
-            seed();
+            store.seedIfEmpty();
             this.follower = new HeadFollower(store, tables, config.pollSeconds(),
                     dir == null ? null : dir.resolve(CliTable.HEAD_FILE));
         }
@@ -107,18 +107,6 @@ public final class StoreComponent implements TableStore {
             store = StoreOpener.open(tables, url, config.user(), password, waitMs);
         }
         return store;
-    }
-
-    private void seed() {
-        if (store.head().isEmpty()) {
-            try {
-                // the first version keeps the shipped table's own number: "v29" means one content everywhere
-                store.seed(tables.toJson(tables.current()), "ionmark", "initial version: the table in use when the "
-                        + "store was created");
-            } catch (StoreRejectedException e) {
-                throw new IllegalStateException("the table in use does not validate: " + e.problems(), e);
-            }
-        }
     }
 
     private void follow() {
