@@ -56,6 +56,19 @@ public final class LferEstimator {
     private static final String FUSED_SOURCE = "one factor for all classes, chosen by cross-validation on the"
             + " development set";
 
+    /**
+     * Substituents that act on a ring partly through π overlap and lose it when turned out of the ring plane:
+     * nitro, alkoxy and aryloxy, dialkylamino, and carbonyl groups. Between two ortho neighbours such a group
+     * takes σm in place of σp (and in the ortho rule), the steric inhibition of resonance (Wepster).
+     */
+    static final java.util.Set<String> TWISTABLE = java.util.Set.of("nitro", "nitro-neutral", "methoxy", "alkoxy",
+            "phenoxy", "dimethylamino", "dialkylamino", "formyl", "acetyl", "acyl", "benzoyl", "carboxy",
+            "methoxycarbonyl", "carbamoyl", "amido");
+    private static final String TWISTED = " (turned out of the ring plane by two ortho neighbours: σm)";
+    private static final String TWIST_SOURCE = "steric inhibition of resonance: 3,5-dimethyl-4-nitrophenol 8.25"
+            + " against 7.15 for 4-nitrophenol and 7.22 for 2,6-dimethyl-4-nitrophenol (March's Advanced Organic"
+            + " Chemistry, acids and bases chapter, from memory); σm for the twisted group is an Ionmark rule";
+
     private LferEstimator() {
     }
 
@@ -132,15 +145,18 @@ public final class LferEstimator {
                     continue;
                 }
                 Substituent sub = h.sub().substituent();
+                // a π-donor or acceptor between two ortho neighbours is turned out of the ring plane: no resonance
+                boolean twisted = d != 2 && size == 6 && TWISTABLE.contains(sub.id())
+                        && !Double.isNaN(sub.sigmaMeta()) && flanked(mol, rings, ring, i, size, s, inRing);
                 String pos;
                 double sigma;
                 if (d == 1) {
                     pos = "ortho";
-                    double sp = sub.sigmaPara(g.resonance());
+                    double sp = twisted ? sub.sigmaMeta() : sub.sigmaPara(g.resonance());
                     double si = Double.isNaN(sub.sigmaI()) ? 0 : sub.sigmaI();
                     sigma = (Double.isNaN(sp) ? 0 : f * sp) + si;
-                } else if (d == 2 || size == 5) {
-                    pos = "meta";
+                } else if (d == 2 || size == 5 || twisted) {
+                    pos = d == 2 || size == 5 ? "meta" : "para";
                     sigma = sub.sigmaMeta();
                 } else {
                     pos = "para";
@@ -151,10 +167,12 @@ public final class LferEstimator {
                 }
                 double delta = -g.rho() * sigma;
                 total += delta;
-                String sym = d == 1 ? "σo = " + fmt(f) + "·σp + σI" : (d == 3 && size == 6 ? "σ" + g.resonance().code() : "σm");
-                terms.add(new Term("Hammett " + pos + " " + sub.name() + ": " + sym + " " + fmt(sigma) + " × ρ "
-                        + fmt(g.rho()), delta, t.citation(sub.source(d == 2 || size == 5 ? "sigmaMeta" : "sigmaPara"))
-                                + "; ρ: " + t.citation(g.source("rho"))));
+                String sym = d == 1 ? "σo = " + fmt(f) + (twisted ? "·σm + σI" : "·σp + σI")
+                        : (d == 3 && size == 6 && !twisted ? "σ" + g.resonance().code() : "σm");
+                String source = t.citation(sub.source(d == 2 || size == 5 || twisted ? "sigmaMeta" : "sigmaPara"))
+                        + "; ρ: " + t.citation(g.source("rho"));
+                terms.add(new Term("Hammett " + pos + " " + sub.name() + (twisted ? TWISTED : "") + ": " + sym + " "
+                        + fmt(sigma) + " × ρ " + fmt(g.rho()), delta, twisted ? source + "; " + TWIST_SOURCE : source));
             }
         }
         return total + fused(t, mol, subs, rings, s, ring, inRing, terms);
@@ -255,6 +273,28 @@ public final class LferEstimator {
             }
         }
         return dist;
+    }
+
+    /**
+     * Whether the ring atom {@code ring[i]} has, on both ring neighbours, an exocyclic non-hydrogen substituent
+     * (not an atom of a ring fused there, not the site's own atoms): a planar π substituent on it cannot stay in
+     * the ring plane.
+     */
+    private static boolean flanked(MatchTarget mol, int[][] rings, int[] ring, int i, int size, PerceivedSite s,
+            boolean[] inRing) {
+        for (int n : new int[] {ring[(i + size - 1) % size], ring[(i + 1) % size]}) {
+            boolean bulky = false;
+            for (int y : mol.adjacency()[n]) {
+                if (!inRing[y] && mol.atomicNumber(y) != 1 && !s.inCore(y) && !isFusedNeighbour(rings, n, y)) {
+                    bulky = true;
+                    break;
+                }
+            }
+            if (!bulky) {
+                return false;
+            }
+        }
+        return true;
     }
 
     private static boolean isFusedNeighbour(int[][] rings, int r, int x) {

@@ -29,15 +29,17 @@ class KnownGapsTest {
             assertTrue(w.stream().anyMatch(x -> x.contains(g.warning())), g.example() + " (" + g.exampleSmiles()
                     + "): " + w);
         }
-        // 11 lines in table v33; the 4(3H)-pyrimidinone N1 and cytosine gaps were fixed in v34 and one was added
-        assertTrue(KnownGaps.gaps().size() >= 9, "the list lost lines: " + KnownGaps.gaps().size());
+        // 11 lines in table v33; the 4(3H)-pyrimidinone N1 and cytosine gaps were fixed in v34 and one was added;
+        // v35 fixed the xanthine imidazole N (its own class) and dropped the biguanide line (the biguanide class
+        // and its pair rule give metformin's 12.4 and 2.8 without the measured value)
+        assertTrue(KnownGaps.gaps().size() >= 7, "the list lost lines: " + KnownGaps.gaps().size());
     }
 
     @Test
-    void metforminCarriesTheBiguanideWarningInTheBriefPathToo() {
-        // metformin 12.4 and 2.8 (Avdeef 2012, from memory): the card must say its estimate is a known gap
-        Analysis a = S.screen("CN(C)C(=N)NC(N)=N", Conditions.atPh(7.4));
-        assertTrue(a.warnings().stream().anyMatch(w -> w.startsWith(KnownGaps.PREFIX) && w.contains("biguanide")),
+    void methylhydrazineCarriesTheHydrazineWarningInTheBriefPathToo() {
+        // methylhydrazine 7.87 (CRC Handbook, from memory): the card must say its estimate is a known gap
+        Analysis a = S.screen("CNN", Conditions.atPh(7.4));
+        assertTrue(a.warnings().stream().anyMatch(w -> w.startsWith(KnownGaps.PREFIX) && w.contains("hydrazine")),
                 a.warnings().toString());
     }
 
@@ -55,10 +57,10 @@ class KnownGapsTest {
     void commonCompoundsOutsideEveryGapGetNoGapWarning() {
         for (String smiles : List.of("CC(=O)O", "c1ccncc1", "NCC(=O)O", "Oc1ccccc1", "CC(=O)Nc1ccc(O)cc1", "NC(=N)N",
         "CNC(=N)N", "c1c[nH]cn1", "Cn1cnc2c1ncn2C", "CC(C)(C)CC(=O)O", "OC(=O)CCCC(=O)O", "O=c1cccc[nH]1",
-        "NNC(=O)c1ccncc1", "CP(C)C", "Nc1ccncc1", "OCC(O)CO")) {
+        "NNC(=O)c1ccncc1", "CP(C)C", "Nc1ccncc1", "OCC(O)CO", "CN(C)C(=N)NC(N)=N", "Cn1cnc2c1c(=O)n(C)c(=O)n2C")) {
             // acetic acid, pyridine, glycine, phenol, paracetamol, guanidine, methylguanidine, imidazole, a purine
             // without the dione, 3,3-dimethylbutanoic and glutaric acid, 2-pyridone, isoniazid (an acyl hydrazine),
-            // trimethylphosphine, 4-aminopyridine, glycerol
+            // trimethylphosphine, 4-aminopyridine, glycerol, metformin and caffeine (gaps closed in table v35)
             assertEquals(List.of(), gapWarnings(smiles), smiles);
         }
     }
