@@ -16,7 +16,8 @@ import ionmark.speciation.api.Conditions;
  * acid, held by its hydrogen bond to the 4-oxo group). The families of table v31 (values from memory, named in each
  * test with their compilation): biguanides, piperazines by N-substitution, heteroaryl-N sulfonamides, imides by ring
  * size, thiobarbiturates, pyrazolidinediones, 1,4-benzodiazepinones, alpha-fluoro and alpha-alkoxy pyridines, and
- * the 4-oxo group of a quinolone-3-carboxylic acid, which is no base.
+ * the 4-oxo group of a quinolone-3-carboxylic acid, which is no base. Table v35: the imidazole N of xanthines and the
+ * enol of oxicams.
  */
 class DrugFamilyTest {
     static final Engine ENGINE = new Engine(TableSnapshotService.shipped(), 300);

@@ -79,6 +79,8 @@ class TautomerInvarianceTest {
         {"4-hydroxy-6-methyl-2-pyrone", "Cc1cc(O)cc(=O)o1", "CC1=CC(=O)CC(=O)O1"},
         {"dehydroacetic acid", "CC(=O)C1C(=O)OC(C)=CC1=O", "CC(=O)C1=C(O)C=C(C)OC1=O"},
         {"warfarin", "CC(=O)CC(c1ccccc1)c1c(O)c2ccccc2oc1=O", "CC(=O)CC(c1ccccc1)C1C(=O)Oc2ccccc2C1=O"},
+        {"piroxicam", "CN1C(C(=O)Nc2ccccn2)=C(O)c2ccccc2S1(=O)=O", "CN1C(C(=O)Nc2ccccn2)C(=O)c2ccccc2S1(=O)=O"},
+        {"meloxicam", "Cc1cnc(NC(=O)C2=C(O)c3ccccc3S(=O)(=O)N2C)s1", "Cc1cnc(NC(=O)C2C(=O)c3ccccc3S(=O)(=O)N2C)s1"},
         {"ascorbic acid", "OCC(O)C1OC(=O)C(O)=C1O", "OCC(O)C1OC(=O)C(O)C1=O"},
         {"malondialdehyde", "O=CCC=O", "OC=CC=O"},
         {"2-formylcyclohexanone", "O=CC1CCCCC1=O", "OC=C1CCCCC1=O"},

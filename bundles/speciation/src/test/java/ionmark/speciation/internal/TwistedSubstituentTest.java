@@ -62,14 +62,27 @@ class TwistedSubstituentTest {
     }
 
     @Test
-    void oneOrthoNeighbourOrAFusedRingDoesNotTwist() {
+    void smallOrAromaticNeighboursDoNotTwist() {
         for (String smiles : new String[] {"Cc1cc([N+](=O)[O-])ccc1O", // 3-methyl-4-nitrophenol: one neighbour
-            "Oc1ccc([N+](=O)[O-])c2ccccc12", // 4-nitro-1-naphthol: the fused ring is part of the ring system
+            "Oc1cc(C)c([N+](=O)[O-])c2ccccc12", // 3-methyl-4-nitro-1-naphthol: the other side is a fused aromatic ring
+            "COc1cc(C(=O)O)cc(OC)c1OC", // 3,4,5-trimethoxybenzoic acid: methoxy neighbours are small
             "COc1ccc(C(=O)O)cc1"}) { // 4-methoxybenzoic acid
             Site s = site(smiles, "O");
             assertTrue(s.derivation().stream().noneMatch(t -> t.label().contains("ring plane")), smiles + ": "
                     + s.derivation());
         }
+    }
+
+    @Test
+    void aSaturatedFusedRingOrTheSitesOwnGroupIsANeighbour() {
+        // the CH2 of a fused saturated ring is a substituent of the site's ring like any other
+        Site tetralin = site("Oc1cc(C)c([N+](=O)[O-])c2c1CCCC2", "O");
+        assertTrue(tetralin.derivation().stream().anyMatch(t -> t.label().contains("para nitro (turned out")),
+                tetralin.derivation().toString());
+        // 3-methyl-2-nitrobenzoic acid: the nitro group sits between the carboxyl group and the methyl group
+        Site acid = site("Cc1cccc(C(=O)O)c1[N+](=O)[O-]", "O");
+        assertTrue(acid.derivation().stream().anyMatch(t -> t.label().contains("ortho nitro (turned out")
+                && t.label().contains("σm + σI")), acid.derivation().toString());
     }
 
     @Test

@@ -228,7 +228,7 @@ public final class JdbcTableStore implements TableStore, AutoCloseable {
     }
 
     /**
-     * Seeds an empty store with the table in use (the shipped one), so that a store created by a run that was
+     * Seeds an empty store with the table in use (the shipped one, or the table file the configuration names), so that a store created by a run that was
      * stopped before it seeded (a notebook killed while starting) has a head for the next run of any kind:
      * notebook or command line. Does nothing when the store has a head.
      *

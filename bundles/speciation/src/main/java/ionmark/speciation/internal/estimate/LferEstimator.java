@@ -147,7 +147,7 @@ public final class LferEstimator {
                 Substituent sub = h.sub().substituent();
                 // a π-donor or acceptor between two ortho neighbours is turned out of the ring plane: no resonance
                 boolean twisted = d != 2 && size == 6 && TWISTABLE.contains(sub.id())
-                        && !Double.isNaN(sub.sigmaMeta()) && flanked(mol, rings, ring, i, size, s, inRing);
+                        && !Double.isNaN(sub.sigmaMeta()) && flanked(mol, rings, ring, i, size, inRing);
                 String pos;
                 double sigma;
                 if (d == 1) {
@@ -276,16 +276,17 @@ public final class LferEstimator {
     }
 
     /**
-     * Whether the ring atom {@code ring[i]} has, on both ring neighbours, an exocyclic non-hydrogen substituent
-     * (not an atom of a ring fused there, not the site's own atoms): a planar π substituent on it cannot stay in
-     * the ring plane.
+     * Whether the ring atom {@code ring[i]} has, on both ring neighbours, a bulky exocyclic group, so that a planar π
+     * substituent on it cannot stay in the ring plane. Bulky: a carbon (alkyl, aryl, carbonyl, also the atom of a
+     * saturated ring fused there and the site's own carboxyl or CH2), Cl, Br, I, or an N, S or P that carries a
+     * further heavy atom (nitro, dialkylamino, sulfonyl). Not bulky: hydrogen, F, O (hydroxy, alkoxy), a bare NH2, and
+     * the atoms of an aromatic ring fused there.
      */
-    private static boolean flanked(MatchTarget mol, int[][] rings, int[] ring, int i, int size, PerceivedSite s,
-            boolean[] inRing) {
+    private static boolean flanked(MatchTarget mol, int[][] rings, int[] ring, int i, int size, boolean[] inRing) {
         for (int n : new int[] {ring[(i + size - 1) % size], ring[(i + 1) % size]}) {
             boolean bulky = false;
             for (int y : mol.adjacency()[n]) {
-                if (!inRing[y] && mol.atomicNumber(y) != 1 && !s.inCore(y) && !isFusedNeighbour(rings, n, y)) {
+                if (!inRing[y] && !(mol.aromatic(y) && isFusedNeighbour(rings, n, y)) && bulky(mol, y, n)) {
                     bulky = true;
                     break;
                 }
@@ -295,6 +296,22 @@ public final class LferEstimator {
             }
         }
         return true;
+    }
+
+    private static boolean bulky(MatchTarget mol, int y, int from) {
+        switch (mol.atomicNumber(y)) {
+            case 6, 17, 35, 53:
+                return true;
+            case 7, 15, 16:
+                for (int z : mol.adjacency()[y]) {
+                    if (z != from && mol.atomicNumber(z) != 1) {
+                        return true;
+                    }
+                }
+                return false;
+            default:
+                return false;
+        }
     }
 
     private static boolean isFusedNeighbour(int[][] rings, int r, int x) {

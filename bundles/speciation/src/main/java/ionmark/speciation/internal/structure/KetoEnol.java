@@ -23,6 +23,10 @@ import org.openscience.cdk.interfaces.IStereoElement;
  * <li>the enol of a 1,3-ketoaldehyde, HO–CH=C–C=O (malondialdehyde, hydroxymethylene ketones), and the enol
  * of a cyclic 1,2-dione, O=C–C(OH)=C in one ring (hydroxyquinones, diosphenols). A keto drawing of such a
  * compound is moved to this enol too;</li>
+ * <li>the enol of a ring ketone on an aromatic ring whose other carbon carries a carboxamide with an N-H,
+ * HO–C(Ar)=C–C(=O)NH with the two enol carbons in one ring (the oxicams: the enol is held by its hydrogen bond to
+ * the amide and conjugated with the arene; it is the form found in water and in the solid, from memory). A keto
+ * drawing is moved to this enol too;</li>
  * <li>an enol whose C=C is aromatic (phenols, tropolone) or whose other carbon carries a heteroatom (the
  * enediol of ascorbic acid and other reductones, enaminols) stays as drawn.</li>
  * </ul>
@@ -102,7 +106,8 @@ final class KetoEnol {
             }
             IAtom cb = cc.getOther(ca);
             if (cb.isAromatic() || charge(cb) != 0 || carries(cb, true) || carries(ca, false)
-                    || ringVinylogousAcid(ca, cb) != null || ketoAldehydeEnol(ca, cb) || ringDioneEnol(ca, cb)) {
+                    || ringVinylogousAcid(ca, cb) != null || ketoAldehydeEnol(ca, cb) || ringDioneEnol(ca, cb)
+                    || arylRingEnolOfAmide(ca, cb)) {
                 continue;
             }
             o.setImplicitHydrogenCount(0);
@@ -131,7 +136,7 @@ final class KetoEnol {
                     continue;
                 }
                 if (ringVinylogousAcid(ca, cb) == null && !(h(ca) == 1 && ketoAldehydeEnol(ca, cb))
-                        && !ringDioneEnol(ca, cb)) {
+                        && !ringDioneEnol(ca, cb) && !arylRingEnolOfAmide(ca, cb)) {
                     continue;
                 }
                 o.setImplicitHydrogenCount(1);
@@ -207,6 +212,33 @@ final class KetoEnol {
             if (c != cb && c.getAtomicNumber() == 6 && b.getOrder() == IBond.Order.SINGLE && hasCarbonylOxygen(c)
                     && inOneRing(ca, cb, c)) {
                 return true;
+            }
+        }
+        return false;
+    }
+
+    /**
+     * Whether HO–Ca=Cb (or its keto form) is the enol of an oxicam-type ring: Ca and Cb in one ring, Ca bonded to an
+     * aromatic carbon, Cb bonded outside that ring to the carbonyl carbon of an amide whose N carries a hydrogen.
+     */
+    private boolean arylRingEnolOfAmide(IAtom ca, IAtom cb) {
+        boolean onArene = false;
+        for (IAtom x : mol.getConnectedAtomsList(ca)) {
+            onArene |= x != cb && x.isAromatic() && x.getAtomicNumber() == 6;
+        }
+        if (!onArene || !inOneRing(ca, cb)) {
+            return false;
+        }
+        for (IBond b : mol.getConnectedBondsList(cb)) {
+            IAtom c = b.getOther(cb);
+            if (c == ca || c.getAtomicNumber() != 6 || b.getOrder() != IBond.Order.SINGLE || !hasCarbonylOxygen(c)
+                    || inOneRing(cb, c)) {
+                continue;
+            }
+            for (IAtom n : mol.getConnectedAtomsList(c)) {
+                if (n.getAtomicNumber() == 7 && h(n) >= 1 && charge(n) == 0) {
+                    return true;
+                }
             }
         }
         return false;
