@@ -20,6 +20,16 @@ import ionmark.speciation.spi.MacroPairing;
 class TitratingSitesTest {
     private static final MicrostateSolver SOLVER = new MicrostateSolver(0.02);
 
+    /** An acid (site 0) and a second site, acid or base, held together by {@code held} units while both are charged. */
+    static SiteModel twoSites(double acid, double other, boolean otherIsBase, double held) {
+        return new SiteModel(new double[] {acid, other}, new boolean[] {false, otherIsBase},
+                new double[][] {{0, held}, {held, 0}}, new double[2]);
+    }
+
+    static List<Double> constants(SiteModel m) {
+        return MacroConstants.of(MacroConstants.polynomial(m, 0.02));
+    }
+
     /**
      * Nicotinic acid, measured pKa 2.07 and 4.81 (CRC Handbook, from memory). A model of it: site 0 the carboxylic
      * acid at 3.4, site 1 the ring N at 3.1 (each with the other neutral; values of the example, not measured), the
@@ -33,9 +43,8 @@ class TitratingSitesTest {
      */
     @Test
     void nicotinicAcidFirstStepIsTheCarboxylicAcids() {
-        SiteModel m = new SiteModel(new double[] {3.4, 3.1}, new boolean[] {false, true},
-                new double[][] {{0, 1.5}, {1.5, 0}}, new double[2]);
-        List<Double> constants = MacroConstants.of(MacroConstants.polynomial(m, 0.02));
+        SiteModel m = twoSites(3.4, 3.1, true, 1.5);
+        List<Double> constants = constants(m);
         assertEquals(1.873, constants.get(0), 0.002);
         assertEquals(4.627, constants.get(1), 0.002);
         assertArrayEquals(new double[] {0.924, 0.076}, StepShares.of(SOLVER, m, constants.get(0)), 0.002);
@@ -63,9 +72,8 @@ class TitratingSitesTest {
      */
     @Test
     void succinicAcidsEqualSitesShareEachStep() {
-        SiteModel m = new SiteModel(new double[] {4.5, 4.5}, new boolean[] {false, false},
-                new double[][] {{0, 0.8}, {0.8, 0}}, new double[2]);
-        List<Double> constants = MacroConstants.of(MacroConstants.polynomial(m, 0.02));
+        SiteModel m = twoSites(4.5, 4.5, false, 0.8);
+        List<Double> constants = constants(m);
         // by hand: pK1 = 4.5 − log 2 = 4.199, pK2 = 4.5 + 0.8 + log 2 = 5.601
         assertEquals(4.199, constants.get(0), 0.002);
         assertEquals(5.601, constants.get(1), 0.002);

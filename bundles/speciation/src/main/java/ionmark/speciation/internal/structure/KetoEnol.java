@@ -57,7 +57,8 @@ final class KetoEnol {
                 parts.add(toKeto + " enol group(s) to the keto form: the hydrogen on carbon");
             }
             if (toEnol > 0) {
-                parts.add(toEnol + " keto group(s) to the enol of a ring vinylogous acid");
+                parts.add(toEnol + " keto group(s) to the stable enol (ring vinylogous acid, ketoaldehyde, cyclic 1,2-dione"
+                        + " or oxicam type)");
             }
             return String.join("; ", parts);
         }
