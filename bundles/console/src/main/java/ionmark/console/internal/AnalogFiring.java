@@ -23,7 +23,7 @@ final class AnalogFiring {
     /** The derivation line {@code AnalogCorrection} writes per analog. */
     static final String LINE = "measured analog ";
     private static final Pattern NUMBERS = Pattern.compile(
-            "local similarity (-?[0-9.]+), weight (-?[0-9.]+) of (-?[0-9.]+) \\(prior (-?[0-9.]+)\\)");
+            "local similarity (-?[0-9.]+)(?:, whole-molecule similarity -?[0-9.]+)?, weight (-?[0-9.]+) of (-?[0-9.]+) \\(prior (-?[0-9.]+)\\)");
 
     /**
      * @param sites      titratable sites predicted

@@ -29,7 +29,7 @@ public final class Cli {
                    ionmark accuracy --truth FILE [--out DIR] [--fold K/N] [--subset open|frozen]
                    ionmark accuracy --series --truth FILE [--series-fold K/N] [--half] [--members FILE]
                                     [--radius R] [--threshold T] [--prior P] [--kernel linear|quadratic] [--detail]
-                                    [--family F] [--huber C] [--near-prior P]
+                                    [--family F] [--huber C] [--near-prior P] [--global G]
                                     [--assign nearest|titrating|split] [--annular on|off]
                    ionmark annotate ENTRY.md [--format json|text]
                    ionmark table validate FILE | table export [--out FILE]

@@ -39,9 +39,9 @@ final class SeriesCommand {
 
     int run(List<String> raw) {
         Cli.Args a = Cli.Args.parse(raw, Set.of("--truth", "--radius", "--threshold", "--prior", "--kernel", "--family",
-                "--huber", "--near-prior", "--assign", "--annular", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
+                "--huber", "--near-prior", "--global", "--assign", "--annular", "--members", "--series-fold"), Set.of("--series", "--detail", "--half"));
         Map<String, String> settings = new TreeMap<>();
-        for (String k : List.of("radius", "threshold", "prior", "family", "huber", "near-prior")) {
+        for (String k : List.of("radius", "threshold", "prior", "family", "huber", "near-prior", "global")) {
             if (a.flags().containsKey("--" + k)) {
                 double v = a.number("--" + k);
                 settings.put("ionmark.analog." + k, k.equals("radius") ? Integer.toString((int) v) : Double.toString(v));

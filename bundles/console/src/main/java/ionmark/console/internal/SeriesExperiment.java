@@ -189,6 +189,10 @@ final class SeriesExperiment {
                 absB += Math.abs(eb);
                 absA += Math.abs(ea);
                 n++;
+                if (firing && Boolean.getBoolean("ionmark.series.detail")) {
+                    out.println(String.format(Locale.ROOT, "  value %s %.2f: error %+.2f -> %+.2f", b.o().id(),
+                            b.o().pka().get(p[0]), eb, ea));
+                }
                 double[] s = bias.computeIfAbsent(key, k -> new double[3]);
                 s[0] += eb;
                 s[1] += ea;

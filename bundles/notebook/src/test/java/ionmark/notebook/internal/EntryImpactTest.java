@@ -36,7 +36,9 @@ class EntryImpactTest {
                 CardTest.SPECIATION, HEAD, DRAFT, 0.10);
         assertEquals(1, rows.size(), rows.toString());
         assertEquals("amine-10", rows.get(0).entry().id());
-        assertTrue(rows.get(0).neutralDraft() > rows.get(0).neutralHead() + 0.3, rows.toString());
+        // more neutral with the class two units lower; by less than the class move alone would give, because the
+        // table's measured ethane-1,2-diamine, pentylamine's one analog, moves with the class and takes part of it back
+        assertTrue(rows.get(0).neutralDraft() > rows.get(0).neutralHead() + 0.10, rows.toString());
     }
 
     @Test

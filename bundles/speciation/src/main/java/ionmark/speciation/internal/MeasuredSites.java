@@ -77,7 +77,8 @@ final class MeasuredSites {
             EstimatedSite s, double constant, int value, double share, AnalogSettings settings) {
         return new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
                 SiteEnvironment.of(target, s.site(), settings.radius(), settings.annular()), constant, m.pka().get(value) - constant,
-                engine.table().citation(m.source()), AnalogCorrection.heldBy(s), share);
+                engine.table().citation(m.source()), AnalogCorrection.heldBy(s), share,
+                settings.global() > 0 ? SiteEnvironment.molecule(target, settings.radius(), settings.annular()) : new int[0]);
     }
 
     private static boolean inRange(double v) {

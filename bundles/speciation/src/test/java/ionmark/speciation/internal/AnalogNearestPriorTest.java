@@ -47,7 +47,7 @@ class AnalogNearestPriorTest {
         assertEquals(0.2236, s.prior(0.5), 0.00005);
         assertEquals(0.784, 0.6 * 1.00 / (s.prior(0.6) + 0.6), 0.0005);
         // one prior: the same value whatever the nearest analog
-        AnalogSettings one = AnalogSettings.DEFAULT;
+        AnalogSettings one = settings(0.15, 0.15);
         assertEquals(one.prior(), one.prior(0.0), 0);
         assertEquals(one.prior(), one.prior(0.7), 0);
     }

@@ -10,9 +10,10 @@ import ionmark.speciation.internal.sites.MatchTarget;
 
 /**
  * Moves each estimated site toward its measured analogs: sites of the same class (or, with less weight,
- * the same family) whose local environment resembles the query site's. The shift is a kernel-weighted,
- * shrunk mean of the analogs' residuals, Σ wᵢrᵢ / (prior + Σ wᵢ): one distant analog moves a site little,
- * several close ones most of the way. The prior count can fall with the nearest analog's weight
+ * the same family) whose local environment resembles the query site's, in molecules that resemble the query (the
+ * settings' whole-molecule share of the similarity, {@link AnalogSettings#global()}: members of one series).
+ * The shift is a kernel-weighted, shrunk mean of the analogs' residuals, Σ wᵢrᵢ / (prior + Σ wᵢ): an analog below
+ * the threshold moves a site not at all, several close ones most of the way. The prior count can fall with the nearest analog's weight
  * ({@link AnalogSettings#prior(double)}). The sd shrinks a little with the evidence and widens with the
  * analogs' disagreement. Every analog used is one line of the derivation (name, similarity, residual, weight,
  * source), and the lines add up to the shift. A site without an analog above the threshold is returned
@@ -24,8 +25,14 @@ public final class AnalogCorrection {
     private AnalogCorrection() {
     }
 
-    /** An analog used, its weight, and whether that weight was cut for a residual far from the others'. */
-    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
+    /**
+     * An analog used: its site's local similarity, its whole molecule's (NaN when not compared), its weight, and whether
+     * that weight was cut for a residual far from the others'.
+     */
+    record Used(SiteAnalogIndex.MeasuredSite site, double similarity, double whole, double weight, boolean damped) {
+        Used(SiteAnalogIndex.MeasuredSite site, double similarity, double weight, boolean damped) {
+            this(site, similarity, Double.NaN, weight, damped);
+        }
     }
 
     public static List<EstimatedSite> apply(SiteAnalogIndex index, MatchTarget mol, List<EstimatedSite> est) {
@@ -34,6 +41,7 @@ public final class AnalogCorrection {
         }
         List<EstimatedSite> out = new ArrayList<>(est.size());
         SiteEnvironment.Prepared ids = null; // the molecule's circular identifiers, shared by its sites' environments
+        int[] whole = null; // the whole molecule's features, when the settings compare whole molecules
         for (EstimatedSite s : est) {
             if (s.site().group().permanent()) {
                 out.add(s);
@@ -47,23 +55,32 @@ public final class AnalogCorrection {
             }
             if (ids == null) {
                 ids = SiteEnvironment.prepare(mol, index.settings().radius(), index.settings().annular());
+                whole = index.settings().global() > 0 ? SiteEnvironment.molecule(ids) : new int[0];
             }
-            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), s, cands));
+            out.add(correct(index, SiteEnvironment.of(mol, ids, s.site(), index.settings().radius()), whole, s, cands));
         }
         return out;
     }
 
-    /** {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment. */
-    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, EstimatedSite s,
+    /**
+     * {@code cands}: the index's candidates for the site's class and pair rules; {@code env}: its environment;
+     * {@code whole}: its molecule's features (empty when the settings compare sites only).
+     */
+    private static EstimatedSite correct(SiteAnalogIndex index, int[] env, int[] whole, EstimatedSite s,
             List<SiteAnalogIndex.MeasuredSite> cands) {
         AnalogSettings cfg = index.settings();
         // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
             double sim = SiteEnvironment.tanimoto(env, m.env());
-            double w = cfg.weight(sim) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight()) * m.share();
+            double mol = cfg.global() > 0 ? SiteEnvironment.tanimoto(whole, m.molecule()) : Double.NaN;
+            // a sum of two similarity kernels: a member of the query's series counts more, a site of the same local
+            // environment in an unrelated molecule less (taking only the larger of the two lost the series gain)
+            double blend = cfg.global() > 0 ? (1 - cfg.global()) * sim + cfg.global() * mol : sim;
+            double w = cfg.weight(blend) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight())
+                    * m.share();
             if (w > 0) {
-                best.merge(m.compound().id(), new Used(m, sim, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
+                best.merge(m.compound().id(), new Used(m, sim, mol, w, false), (a, b) -> a.weight() >= b.weight() ? a : b);
             }
         }
         if (best.isEmpty()) {
@@ -117,7 +134,7 @@ public final class AnalogCorrection {
         List<Used> out = new ArrayList<>(used.size());
         for (Used u : used) {
             double d = Math.abs(u.site().residual() - median);
-            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.weight() * c / d, true));
+            out.add(d <= c ? u : new Used(u.site(), u.similarity(), u.whole(), u.weight() * c / d, true));
         }
         return out;
     }
@@ -168,6 +185,9 @@ public final class AnalogCorrection {
         Decimals.append(label.append("): residual "), m.residual(), 2, true);
         Decimals.append(label.append(" against the model's constant "), m.model(), 2, false);
         Decimals.append(label.append(", local similarity "), u.similarity(), 2, false);
+        if (!Double.isNaN(u.whole())) {
+            Decimals.append(label.append(", whole-molecule similarity "), u.whole(), 2, false);
+        }
         Decimals.append(label.append(", weight "), u.weight(), 2, false);
         Decimals.append(label.append(" of "), denom, 2, false);
         Decimals.append(label.append(" (prior "), prior, 2, false).append(')');

@@ -31,13 +31,21 @@ public final class SiteAnalogIndex {
      * @param held     the pair rules that hold the site ({@link AnalogCorrection#heldBy}), empty when none
      * @param share    the site's share of the model step the residual belongs to: a factor on its analog weight (1
      *                 when the whole residual is this site's)
+     * @param molecule the whole measured molecule's features ({@link SiteEnvironment#molecule}), empty when the index
+     *                 does not compare whole molecules
      */
     public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
-            double residual, String citation, String held, double share) {
+            double residual, String citation, String held, double share, int[] molecule) {
+        /** A site of an index that compares local environments only. */
+        public MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
+                double residual, String citation, String held, double share) {
+            this(compound, group, type, env, model, residual, citation, held, share, new int[0]);
+        }
+
         /** A site that takes the whole residual. */
         public MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
                 double residual, String citation, String held) {
-            this(compound, group, type, env, model, residual, citation, held, 1);
+            this(compound, group, type, env, model, residual, citation, held, 1, new int[0]);
         }
     }
 

@@ -39,6 +39,27 @@ public final class SiteEnvironment {
         return new Prepared(Morgan.identifiers(mol, radius, ring), ring);
     }
 
+    /**
+     * The whole molecule's features: every atom's circular identifiers of rounds 0 to 2 (an ECFP4-like set), sorted
+     * and distinct. Series members share most of them even where their sites' local environments differ.
+     */
+    static int[] molecule(Prepared prep) {
+        int[][] ids = prep.ids();
+        int rounds = Math.min(2, ids.length - 1);
+        Features f = new Features(ids[0].length * (rounds + 1));
+        for (int r = 0; r <= rounds; r++) {
+            for (int id : ids[r]) {
+                f.add(Morgan.mix(Morgan.mix(0x5be0cd19, r), id));
+            }
+        }
+        return f.distinct();
+    }
+
+    /** {@link #molecule(Prepared)} of {@code mol} read with the index's radius and azole rule. */
+    public static int[] molecule(MatchTarget mol, int radius, boolean annular) {
+        return molecule(prepare(mol, radius, annular));
+    }
+
     /** Sorted distinct feature hashes of the site's environment (azoles in the tautomer read). */
     public static int[] of(MatchTarget mol, PerceivedSite site, int radius) {
         return of(mol, site, radius, false);
