@@ -47,11 +47,15 @@ final class MeasuredSites {
                     continue;
                 }
                 MatchTarget target = new MatchTarget(p.prepared().molecule());
+                // the whole molecule's features, once per compound and shared by its sites
+                int[] whole = settings.global() > 0
+                        ? SiteEnvironment.molecule(target, settings.radius(), settings.annular()) : new int[0];
                 if (settings.assignment() == AnalogSettings.Assignment.NEAREST) {
                     List<Double> model = engine.modelConstants(m.smiles()).stream().filter(MeasuredSites::inRange)
                             .sorted().toList();
                     for (int[] pair : MacroPairing.assign(m.pka(), model)) {
-                        out.add(site(engine, m, target, fitted.get(pair[0]), model.get(pair[1]), pair[0], 1, settings));
+                        out.add(site(engine, m, target, whole, fitted.get(pair[0]), model.get(pair[1]), pair[0], 1,
+                                settings));
                     }
                     continue;
                 }
@@ -63,8 +67,8 @@ final class MeasuredSites {
                         : TitratingSites.dominant(model, pairs, constants);
                 for (TitratingSites.Placed x : placed) {
                     // the model's site carries the same pair-rule lines as the fitted one: the same held bookkeeping
-                    out.add(site(engine, m, target, model.sites().get(x.site()), x.constant(), x.value(), x.share(),
-                            settings));
+                    out.add(site(engine, m, target, whole, model.sites().get(x.site()), x.constant(), x.value(),
+                            x.share(), settings));
                 }
             } catch (StructureException | RuntimeException e) {
                 // the validator has read every measured structure; one that fails here serves as no analog
@@ -73,12 +77,11 @@ final class MeasuredSites {
         return new SiteAnalogIndex(out, settings);
     }
 
-    private static SiteAnalogIndex.MeasuredSite site(Engine engine, MeasuredCompound m, MatchTarget target,
+    private static SiteAnalogIndex.MeasuredSite site(Engine engine, MeasuredCompound m, MatchTarget target, int[] whole,
             EstimatedSite s, double constant, int value, double share, AnalogSettings settings) {
         return new SiteAnalogIndex.MeasuredSite(m, s.site().group().id(), s.site().group().type(),
                 SiteEnvironment.of(target, s.site(), settings.radius(), settings.annular()), constant, m.pka().get(value) - constant,
-                engine.table().citation(m.source()), AnalogCorrection.heldBy(s), share,
-                settings.global() > 0 ? SiteEnvironment.molecule(target, settings.radius(), settings.annular()) : new int[0]);
+                engine.table().citation(m.source()), AnalogCorrection.heldBy(s), share, whole);
     }
 
     private static boolean inRange(double v) {

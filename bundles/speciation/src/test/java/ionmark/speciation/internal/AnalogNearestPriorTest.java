@@ -52,6 +52,24 @@ class AnalogNearestPriorTest {
         assertEquals(one.prior(), one.prior(0.7), 0);
     }
 
+    /**
+     * The shipped prior, worked by hand: 0.1 · 0.1^w. A weak lone analog (w 0.05): prior 0.1 · e^(0.05 · ln 0.1) =
+     * 0.1 · 0.89125 = 0.08913, and it moves the site 0.05 / 0.13913 = 0.359 of its residual; at w 0.14: 0.07244 and
+     * 0.659; an identical analog: 0.01 and 1 / 1.01 = 0.990. The flat prior 0.03 would have moved the weak one
+     * 0.05 / 0.08 = 0.625 of the way.
+     */
+    @Test
+    void theShippedPriorKeepsAWeakLoneAnalogWeakAndTrustsAnIdenticalOne() {
+        AnalogSettings s = AnalogSettings.DEFAULT;
+        assertEquals(0.1, s.prior(0), 1e-12);
+        assertEquals(0.01, s.prior(1), 1e-12);
+        assertEquals(0.08913, s.prior(0.05), 0.00001);
+        assertEquals(0.359, 0.05 / (s.prior(0.05) + 0.05), 0.0005);
+        assertEquals(0.659, 0.14 / (s.prior(0.14) + 0.14), 0.0005);
+        assertEquals(0.990, 1 / (s.prior(1) + 1), 0.0005);
+        assertEquals(0.9, s.global(), 0);
+    }
+
     @Test
     void aLoneAnalogMovesTheSiteByItsWeightOverThePriorItsOwnWeightSets() throws StructureException {
         // 2,4,6-trimethylpyridine against 2,6-lutidine: one analog (weight 0.26)

@@ -72,8 +72,11 @@ public final class AnalogCorrection {
         // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
-            double sim = SiteEnvironment.tanimoto(env, m.env());
             double mol = cfg.global() > 0 ? SiteEnvironment.tanimoto(whole, m.molecule()) : Double.NaN;
+            if (cfg.global() > 0 && (1 - cfg.global()) + cfg.global() * mol <= cfg.threshold()) {
+                continue; // even an identical site environment cannot lift this molecule above the threshold
+            }
+            double sim = SiteEnvironment.tanimoto(env, m.env());
             // a sum of two similarity kernels: a member of the query's series counts more, a site of the same local
             // environment in an unrelated molecule less (taking only the larger of the two lost the series gain)
             double blend = cfg.global() > 0 ? (1 - cfg.global()) * sim + cfg.global() * mol : sim;
@@ -173,7 +176,8 @@ public final class AnalogCorrection {
     private static Term term(Used u, double part, double denom, double prior, AnalogSettings cfg) {
         SiteAnalogIndex.MeasuredSite m = u.site();
         // "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant
-        // %.2f, local similarity %.2f, weight %.2f of %.2f (prior %.1f)", written without a Formatter (Decimals)
+        // %.2f, local similarity %.2f[, whole-molecule similarity %.2f], weight %.2f of %.2f (prior %.2f)[; the prior
+        // falls from %.2f to %.2f as the nearest analog nears identity]", written without a Formatter (Decimals)
         StringBuilder label = new StringBuilder(200).append("measured analog ").append(m.compound().name())
                 .append(" (").append(m.group()).append(", measured pKa ");
         List<Double> pka = m.compound().pka();

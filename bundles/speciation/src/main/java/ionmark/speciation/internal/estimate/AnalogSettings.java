@@ -6,7 +6,8 @@ import java.util.Locale;
  * How far measured analogs move a site ({@link AnalogCorrection}).
  *
  * @param radius       bonds around the site atom that its environment covers ({@link SiteEnvironment})
- * @param threshold    local similarity at and below which an analog has no weight
+ * @param threshold    similarity (local, or blended with the whole molecule's, see {@code global}) at and below which
+ *                     an analog has no weight
  * @param prior        prior count: the weight of the model's own estimate against the analogs' summed
  *                     weights (one identical analog with prior 1 moves a site half of its residual)
  * @param familyWeight weight factor of an analog whose site is of another class of the same family
@@ -90,7 +91,8 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
                 || assignment == null || global < 0 || global > 1) {
             throw new IllegalArgumentException(String.format(Locale.ROOT,
                     "analog settings out of range: radius %d, threshold %.2f, prior %.2f, family weight %.2f, max %d, "
-                            + "near prior %.2f", radius, threshold, prior, familyWeight, maxAnalogs, nearPrior));
+                            + "near prior %.2f, whole-molecule share %.2f", radius, threshold, prior, familyWeight,
+                    maxAnalogs, nearPrior, global));
         }
     }
 
