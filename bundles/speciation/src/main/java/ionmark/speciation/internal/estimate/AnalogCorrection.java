@@ -13,8 +13,8 @@ import ionmark.speciation.internal.sites.MatchTarget;
  * the same family) whose local environment resembles the query site's, in molecules that resemble the query (the
  * settings' whole-molecule share of the similarity, {@link AnalogSettings#global()}: members of one series).
  * The shift is a kernel-weighted, shrunk mean of the analogs' residuals, Σ wᵢrᵢ / (prior + Σ wᵢ): an analog below
- * the threshold moves a site not at all, several close ones most of the way. The prior count can fall with the nearest analog's weight
- * ({@link AnalogSettings#prior(double)}). The sd shrinks a little with the evidence and widens with the
+ * the threshold moves a site not at all, several close ones most of the way. The prior count can fall with the
+ * nearest analog's weight ({@link AnalogSettings#prior(double)}). The sd shrinks a little with the evidence and widens with the
  * analogs' disagreement. Every analog used is one line of the derivation (name, similarity, residual, weight,
  * source), and the lines add up to the shift. A site without an analog above the threshold is returned
  * as it was, the same object.
@@ -72,14 +72,16 @@ public final class AnalogCorrection {
         // one site per measured compound, its most similar: symmetric sites (citric acid's two CH2COOH) count once
         java.util.Map<String, Used> best = new java.util.HashMap<>();
         for (SiteAnalogIndex.MeasuredSite m : cands) {
-            double mol = cfg.global() > 0 ? SiteEnvironment.tanimoto(whole, m.molecule()) : Double.NaN;
-            if (cfg.global() > 0 && (1 - cfg.global()) + cfg.global() * mol <= cfg.threshold()) {
+            // a site stored without its molecule's features (an index built for sites only) is compared by its site
+            boolean compared = cfg.global() > 0 && m.molecule().length > 0;
+            double mol = compared ? SiteEnvironment.tanimoto(whole, m.molecule()) : Double.NaN;
+            if (compared && (1 - cfg.global()) + cfg.global() * mol <= cfg.threshold()) {
                 continue; // even an identical site environment cannot lift this molecule above the threshold
             }
             double sim = SiteEnvironment.tanimoto(env, m.env());
             // a sum of two similarity kernels: a member of the query's series counts more, a site of the same local
             // environment in an unrelated molecule less (taking only the larger of the two lost the series gain)
-            double blend = cfg.global() > 0 ? (1 - cfg.global()) * sim + cfg.global() * mol : sim;
+            double blend = compared ? (1 - cfg.global()) * sim + cfg.global() * mol : sim;
             double w = cfg.weight(blend) * (m.group().equals(s.site().group().id()) ? 1 : cfg.familyWeight())
                     * m.share();
             if (w > 0) {

@@ -48,9 +48,9 @@ public record AnalogSettings(int radius, double threshold, double prior, double 
 
     /**
      * Similarity 0.1 · local + 0.9 · whole molecule, a prior count falling from 0.1 (nearest analog at the threshold)
-     * to 0.01 (an identical one), robust weights (0.5 units), analogs of the same class only. Before round 6 the similarity was the local one alone and the prior 0.15, chosen on the series
-     * experiment's two series-wise folds, each scored with a table calibrated without its series, against the five-fold
-     * cross-validated development figures (docs/analog-series.md): pooled ratio 0.82 (prior 1) → 0.75, CV within
+     * to 0.01 (an identical one), robust weights (0.5 units), analogs of the same class only. Before round 6 the
+     * similarity was the local one alone and the prior 0.15, chosen on the series experiment's two series-wise folds,
+     * each scored with a table calibrated without its series, against the five-fold cross-validated development figures (docs/analog-series.md): pooled ratio 0.82 (prior 1) → 0.75, CV within
      * 1.0 80.45 % → 80.43 %, MAE 0.627 → 0.630. Without the robust weights a low prior let one misassigned
      * measurement drag a series; with family analogs (weight 0.5) one weak analog of another class moved a site
      * most of the way (glutarimide +0.8 from succinimide). Residuals on the site that titrates in the model's paired

@@ -31,8 +31,8 @@ public final class SiteAnalogIndex {
      * @param held     the pair rules that hold the site ({@link AnalogCorrection#heldBy}), empty when none
      * @param share    the site's share of the model step the residual belongs to: a factor on its analog weight (1
      *                 when the whole residual is this site's)
-     * @param molecule the whole measured molecule's features ({@link SiteEnvironment#molecule}), empty when the index
-     *                 does not compare whole molecules
+     * @param molecule the whole measured molecule's features ({@link SiteEnvironment#molecule}); empty when the index
+     *                 does not compare whole molecules, and such a site is then compared by its environment alone
      */
     public record MeasuredSite(MeasuredCompound compound, String group, SiteType type, int[] env, double model,
             double residual, String citation, String held, double share, int[] molecule) {

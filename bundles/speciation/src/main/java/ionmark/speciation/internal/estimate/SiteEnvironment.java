@@ -41,7 +41,8 @@ public final class SiteEnvironment {
 
     /**
      * The whole molecule's features: every atom's circular identifiers of rounds 0 to 2 (an ECFP4-like set; rounds 0
-     * to the radius when the index's radius is below 2), sorted and distinct. Series members share most of them even where their sites' local environments differ.
+     * to the radius when the index's radius is below 2), sorted and distinct. Series members share most of them even
+     * where their sites' local environments differ.
      */
     static int[] molecule(Prepared prep) {
         int[][] ids = prep.ids();
