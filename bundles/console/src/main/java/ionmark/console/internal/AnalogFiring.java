@@ -23,26 +23,33 @@ final class AnalogFiring {
     /** The derivation line {@code AnalogCorrection} writes per analog. */
     static final String LINE = "measured analog ";
     private static final Pattern NUMBERS = Pattern.compile(
-            "local similarity (-?[0-9.]+)(?:, whole-molecule similarity -?[0-9.]+)?, weight (-?[0-9.]+) of (-?[0-9.]+) \\(prior (-?[0-9.]+)\\)");
+            "local similarity (-?[0-9.]+)(?:, whole-molecule similarity (-?[0-9.]+))?, weight (-?[0-9.]+) of (-?[0-9.]+) \\(prior (-?[0-9.]+)\\)");
 
     /**
      * @param sites      titratable sites predicted
      * @param corrected  sites with at least one measured analog
      * @param analogs    mean analogs per corrected site
-     * @param similarity mean similarity of a corrected site's nearest analog
+     * @param similarity mean local similarity of a corrected site's nearest analog (the one of largest weight)
+     * @param whole      mean whole-molecule similarity of that analog (NaN when the settings compare sites only)
      * @param weight     mean summed weight per corrected site
      * @param shift      mean absolute shift of a corrected site
      * @param untouched  compounds with no analog at any site
      * @param identical  of those, compounds whose JSON is byte-identical apart from the table version
      * @param exact      compounds that are a measured compound (same constitution), not counted above
      */
-    record Stats(int sites, int corrected, double analogs, double similarity, double weight, double shift,
-            int untouched, int identical, int exact, List<String> differences) {
+    record Stats(int sites, int corrected, double analogs, double similarity, double whole, double weight,
+            double shift, int untouched, int identical, int exact, List<String> differences) {
         String line() {
+            // the nearest analog is the one of largest weight: with a whole-molecule share its weight comes from the
+            // blend of both similarities, so both are printed
+            String nearest = Double.isNaN(whole)
+                    ? String.format(Locale.ROOT, "nearest analog's similarity %.2f", similarity)
+                    : String.format(Locale.ROOT, "nearest analog's local similarity %.2f and whole-molecule similarity %.2f",
+                            similarity, whole);
             return String.format(Locale.ROOT, "  analogs fired at %d of %d predicted sites (%.0f %%); per corrected site: "
-                    + "%.1f analogs, nearest similarity %.2f, summed weight %.2f, |shift| %.2f; %d compounds without "
+                    + "%.1f analogs, %s, summed weight %.2f, |shift| %.2f; %d compounds without "
                     + "analogs, %d of them byte-identical in JSON; %d matched a measured compound's constitution",
-                    corrected, sites, 100.0 * corrected / Math.max(1, sites), analogs, similarity, weight, shift, untouched,
+                    corrected, sites, 100.0 * corrected / Math.max(1, sites), analogs, nearest, weight, shift, untouched,
                     identical, exact);
         }
     }
@@ -55,6 +62,8 @@ final class AnalogFiring {
         int corrected = 0;
         int analogs = 0;
         double sim = 0;
+        double whole = 0;
+        int wholeSites = 0;
         double weight = 0;
         double shift = 0;
         int untouched = 0;
@@ -83,16 +92,27 @@ final class AnalogFiring {
                 any = true;
                 corrected++;
                 analogs += lines.size();
-                double best = 0;
+                double top = -1; // the largest weight so far
+                double local = 0;
+                String mol = null;
                 double w = 0;
                 for (Term t : lines) {
                     Matcher m = NUMBERS.matcher(t.label());
                     if (m.find()) {
-                        best = Math.max(best, Double.parseDouble(m.group(1)));
-                        w += Double.parseDouble(m.group(2));
+                        double wi = Double.parseDouble(m.group(3));
+                        if (wi > top) {
+                            top = wi;
+                            local = Double.parseDouble(m.group(1));
+                            mol = m.group(2);
+                        }
+                        w += wi;
                     }
                 }
-                sim += best;
+                sim += local;
+                if (mol != null) {
+                    whole += Double.parseDouble(mol);
+                    wholeSites++;
+                }
                 weight += w;
                 shift += Math.abs(lines.stream().mapToDouble(Term::value).sum());
             }
@@ -114,8 +134,8 @@ final class AnalogFiring {
             }
         }
         int c = Math.max(1, corrected);
-        return new Stats(sites, corrected, (double) analogs / c, sim / c, weight / c, shift / c, untouched, identical,
-                exact, List.copyOf(differences));
+        return new Stats(sites, corrected, (double) analogs / c, sim / c, wholeSites == 0 ? Double.NaN : whole / wholeSites,
+                weight / c, shift / c, untouched, identical, exact, List.copyOf(differences));
     }
 
     /** The brief JSON of an analysis without its table version. */

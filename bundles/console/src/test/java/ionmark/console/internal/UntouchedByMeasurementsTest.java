@@ -88,6 +88,9 @@ class UntouchedByMeasurementsTest {
         assertEquals(1, st.corrected(), st.line());
         // the local similarity of the nearest analog; the weight comes from it blended with the whole molecules'
         assertTrue(st.similarity() > 0 && st.similarity() <= 1 && st.weight() > 0, st.line());
+        // and the whole-molecule similarity of that same analog, which the summary prints beside it
+        assertTrue(st.whole() > 0 && st.whole() <= 1, st.line());
+        assertTrue(st.line().contains("whole-molecule similarity"), st.line());
         var lines = after.sites().get(0).derivation().stream().filter(t -> t.label().startsWith(AnalogFiring.LINE))
                 .toList();
         assertTrue(lines.stream().anyMatch(t -> t.label().contains("2,6-dimethylpyridine")), lines.toString());

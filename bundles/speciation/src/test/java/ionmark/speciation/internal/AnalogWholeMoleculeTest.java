@@ -64,6 +64,33 @@ class AnalogWholeMoleculeTest {
                 "a less similar molecule moves the site less: " + blended + " against " + local);
     }
 
+    /**
+     * A measured site stored without its molecule's features (an index built for sites only) is compared by its
+     * environment alone, not at whole-molecule similarity 0, which would silently cut its weight.
+     */
+    @Test
+    void aSiteStoredWithoutItsMoleculeIsComparedByItsEnvironment() throws StructureException {
+        String query = "Cc1cc(CCCc2ccccc2)cc(C)n1";
+        Term local = analogLines(settings(0), query).get(0);
+        List<MeasuredCompound> measured = List.of(AnalogCorrectionTest.LUTIDINE_26);
+        SiteAnalogIndex full = MeasuredSites.index(new Engine(AnalogCorrectionTest.with(measured), 300), measured,
+                settings(0.5));
+        Problem p = new Engine(AnalogCorrectionTest.BARE, 300).prepare(query, Conditions.noPh());
+        EstimatedSite pyridine = p.sites().stream().filter(e -> e.site().group().id().startsWith("pyridine"))
+                .findFirst().orElseThrow();
+        List<SiteAnalogIndex.MeasuredSite> stored = full.candidates(pyridine.site().group(),
+                AnalogCorrection.heldBy(pyridine));
+        assertFalse(stored.isEmpty());
+        assertTrue(stored.stream().allMatch(m -> m.molecule().length > 0), "the index keeps the molecules' features");
+        List<SiteAnalogIndex.MeasuredSite> bare = stored.stream().map(m -> new SiteAnalogIndex.MeasuredSite(
+                m.compound(), m.group(), m.type(), m.env(), m.model(), m.residual(), m.citation(), m.held(),
+                m.share())).toList();
+        Term line = analogLines(new SiteAnalogIndex(bare, settings(0.5)), query).get(0);
+        assertFalse(line.label().contains("whole-molecule"), line.label());
+        assertEquals(local.label(), line.label());
+        assertEquals(local.value(), line.value(), 1e-12);
+    }
+
     private static AnalogSettings settings(double global) {
         return new AnalogSettings(4, 0.3, 0.15, 0, 8, AnalogSettings.Kernel.LINEAR, 0.5, 0.15,
                 AnalogSettings.Assignment.TITRATING, true, global);
@@ -76,7 +103,10 @@ class AnalogWholeMoleculeTest {
 
     private static List<Term> analogLines(AnalogSettings s, String query) throws StructureException {
         List<MeasuredCompound> measured = List.of(AnalogCorrectionTest.LUTIDINE_26);
-        SiteAnalogIndex index = MeasuredSites.index(new Engine(AnalogCorrectionTest.with(measured), 300), measured, s);
+        return analogLines(MeasuredSites.index(new Engine(AnalogCorrectionTest.with(measured), 300), measured, s), query);
+    }
+
+    private static List<Term> analogLines(SiteAnalogIndex index, String query) throws StructureException {
         Problem p = new Engine(AnalogCorrectionTest.BARE, 300).prepare(query, Conditions.noPh());
         List<EstimatedSite> out = AnalogCorrection.apply(index, new MatchTarget(p.prepared().molecule()), p.sites());
         EstimatedSite site = out.stream().filter(e -> e.site().group().id().startsWith("pyridine")).findFirst()
