@@ -68,6 +68,7 @@ class AnalogNearestPriorTest {
         assertEquals(0.659, 0.14 / (s.prior(0.14) + 0.14), 0.0005);
         assertEquals(0.990, 1 / (s.prior(1) + 1), 0.0005);
         assertEquals(0.9, s.global(), 0);
+        assertEquals(0.5, s.familyWeight(), 0);
     }
 
     @Test
