@@ -41,6 +41,7 @@ class AnalogFamilyTest {
         assertEquals(1, half.size(), half.toString());
         Term line = half.get(0);
         assertTrue(line.label().contains("amphetamine (amine-primary"), line.label());
+        assertTrue(line.label().contains("another class of the family: weight × 0.50"), line.label());
         Matcher m = NUMBERS.matcher(line.label());
         assertTrue(m.find(), line.label());
         double blend = 0.1 * Double.parseDouble(m.group(1)) + 0.9 * Double.parseDouble(m.group(2));

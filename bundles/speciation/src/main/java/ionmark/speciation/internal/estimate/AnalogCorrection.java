@@ -113,7 +113,8 @@ public final class AnalogCorrection {
         for (int i = 0; i < used.size(); i++) {
             Used u = used.get(i);
             double part = u.weight() * u.site().residual() / denom;
-            now = now.shifted(part, term(u, part, denom, prior, cfg), ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
+            now = now.shifted(part, term(u, part, denom, prior, cfg, s.site().group().id()),
+                    ionmark.speciation.api.Basis.ANALOG, i == used.size() - 1 ? sd : now.sd());
         }
         return now;
     }
@@ -175,11 +176,12 @@ public final class AnalogCorrection {
     /** How {@link PairRules} starts the derivation line of a pair rule. */
     static final String PAIR_RULE = "pair rule ";
 
-    private static Term term(Used u, double part, double denom, double prior, AnalogSettings cfg) {
+    private static Term term(Used u, double part, double denom, double prior, AnalogSettings cfg, String query) {
         SiteAnalogIndex.MeasuredSite m = u.site();
         // "measured analog %s (%s, measured pKa %s at %.0f °C, %s): residual %+.2f against the model's constant
         // %.2f, local similarity %.2f[, whole-molecule similarity %.2f], weight %.2f of %.2f (prior %.2f)[; the prior
-        // falls from %.2f to %.2f as the nearest analog nears identity]", written without a Formatter (Decimals)
+        // falls from %.2f to %.2f as the nearest analog nears identity][; another class of the family: weight × %.2f]",
+        // written without a Formatter (Decimals)
         StringBuilder label = new StringBuilder(200).append("measured analog ").append(m.compound().name())
                 .append(" (").append(m.group()).append(", measured pKa ");
         List<Double> pka = m.compound().pka();
@@ -201,6 +203,10 @@ public final class AnalogCorrection {
             // one line a chemist reads: why the prior is not the same for every site
             Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
                     .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
+        }
+        if (!m.group().equals(query)) {
+            // a family analog: the chemist sees the other class in the line's head, and here why it weighs less
+            Decimals.append(label.append("; another class of the family: weight × "), cfg.familyWeight(), 2, false);
         }
         if (m.share() < 1) {
             Decimals.append(label.append("; its site gives off "), m.share(), 2, false)
