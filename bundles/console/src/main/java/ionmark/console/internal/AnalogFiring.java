@@ -92,27 +92,13 @@ final class AnalogFiring {
                 any = true;
                 corrected++;
                 analogs += lines.size();
-                double top = -1; // the largest weight so far
-                double local = 0;
-                String mol = null;
-                double w = 0;
-                for (Term t : lines) {
-                    Matcher m = NUMBERS.matcher(t.label());
-                    if (m.find()) {
-                        double wi = Double.parseDouble(m.group(3));
-                        if (wi > top) {
-                            top = wi;
-                            local = Double.parseDouble(m.group(1));
-                            mol = m.group(2);
-                        }
-                        w += wi;
-                    }
-                }
-                sim += local;
-                if (mol != null) {
-                    whole += Double.parseDouble(mol);
+                Nearest n = nearest(lines);
+                sim += n.local();
+                if (!Double.isNaN(n.whole())) {
+                    whole += n.whole();
                     wholeSites++;
                 }
+                double w = n.summed();
                 weight += w;
                 shift += Math.abs(lines.stream().mapToDouble(Term::value).sum());
             }
@@ -134,8 +120,38 @@ final class AnalogFiring {
             }
         }
         int c = Math.max(1, corrected);
-        return new Stats(sites, corrected, (double) analogs / c, sim / c, wholeSites == 0 ? Double.NaN : whole / wholeSites,
+        // both means over the same sites: the whole-molecule one only when every nearest analog printed it
+        return new Stats(sites, corrected, (double) analogs / c, sim / c, wholeSites == 0 || wholeSites != corrected
+                ? Double.NaN : whole / wholeSites,
                 weight / c, shift / c, untouched, identical, exact, List.copyOf(differences));
+    }
+
+    /**
+     * A site's nearest analog, the one of largest weight (with a whole-molecule share the weight comes from the blend,
+     * not from the local similarity alone): its local and whole-molecule similarity (NaN when not printed), and the
+     * summed weight of all the site's analog lines.
+     */
+    record Nearest(double local, double whole, double summed) {
+    }
+
+    static Nearest nearest(List<Term> lines) {
+        double top = -1;
+        double local = 0;
+        double mol = Double.NaN;
+        double w = 0;
+        for (Term t : lines) {
+            Matcher m = NUMBERS.matcher(t.label());
+            if (m.find()) {
+                double wi = Double.parseDouble(m.group(3));
+                if (wi > top) {
+                    top = wi;
+                    local = Double.parseDouble(m.group(1));
+                    mol = m.group(2) == null ? Double.NaN : Double.parseDouble(m.group(2));
+                }
+                w += wi;
+            }
+        }
+        return new Nearest(local, mol, w);
     }
 
     /** The brief JSON of an analysis without its table version. */

@@ -72,7 +72,8 @@ final class AdminReports {
 
     /** A derivation line that rests on a measured compound: its exact match or its use as an analog. */
     static boolean cites(String label, MeasuredCompound m) {
-        return label.startsWith("measured compound " + m.name() + ":") || label.startsWith("analog " + m.name() + " (");
+        return label.startsWith("measured compound " + m.name() + ":")
+                || label.startsWith("measured analog " + m.name() + " (");
     }
 
     static String sites(List<Site> sites) {

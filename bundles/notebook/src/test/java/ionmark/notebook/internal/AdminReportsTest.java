@@ -8,7 +8,13 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
+import ionmark.acidity.api.AcidityTable;
 import ionmark.acidity.api.MeasuredCompound;
+import ionmark.acidity.internal.TableSnapshotService;
+import ionmark.speciation.api.Analysis;
+import ionmark.speciation.api.Conditions;
+import ionmark.speciation.api.Term;
+import ionmark.speciation.internal.SpeciationService;
 
 /** The regression report's per-compound verdicts and the records a structure rests on. */
 class AdminReportsTest {
@@ -18,8 +24,24 @@ class AdminReportsTest {
     @Test
     void aSiteRestsOnAMeasuredCompoundOnlyWhenItsDerivationSaysSo() {
         assertTrue(AdminReports.cites("measured compound phenol: macroscopic pKa [9.99] at 25 °C", PHENOL));
-        assertTrue(AdminReports.cites("analog phenol (measured 9.99, estimate off by +0.10), similarity 0.60", PHENOL));
+        assertTrue(AdminReports.cites("measured analog phenol (phenol, measured pKa 9.99 at 25 °C, compilation value): "
+                + "residual +0.10 against the model's constant 9.89, local similarity 0.60", PHENOL));
+        assertFalse(AdminReports.cites("measured analog phenolphthalein (phenol, measured pKa 9.4 at 25 °C)", PHENOL));
         assertFalse(AdminReports.cites("class Phenol O-H ortho to a carboxylic acid (phenol-ortho-carboxy)", PHENOL));
+    }
+
+    /**
+     * The analog lines the engine writes are found: dipropylamine takes diethylamine, a measured compound of the
+     * shipped table, as an analog, so the structure page and the regression report name it.
+     */
+    @Test
+    void theEnginesOwnAnalogLineCitesItsMeasuredCompound() {
+        AcidityTable t = TableSnapshotService.shipped();
+        MeasuredCompound diethylamine = t.measured().stream().filter(m -> m.name().equals("diethylamine")).findFirst()
+                .orElseThrow();
+        Analysis a = new SpeciationService(t, 300, 10_000).analyse("CCCNCCC", Conditions.noPh());
+        List<String> labels = a.sites().stream().flatMap(s -> s.derivation().stream()).map(Term::label).toList();
+        assertTrue(labels.stream().anyMatch(l -> AdminReports.cites(l, diethylamine)), labels.toString());
     }
 
     @Test

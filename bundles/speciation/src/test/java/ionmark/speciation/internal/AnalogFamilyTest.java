@@ -22,7 +22,7 @@ import ionmark.speciation.internal.structure.StructureException;
 
 /**
  * Family analogs: a measured site of another class of the same family (the class id up to its first hyphen: a
- * tertiary amine for a secondary one) counts at the settings' family weight, on top of the blended similarity. With
+ * primary amine for a secondary one) counts at the settings' family weight, on top of the blended similarity. With
  * the whole molecule's share in the similarity, such an analog counts where the two molecules are alike (members of
  * one series whose site a substituent puts in another class), not wherever a site of the family sits in a similar
  * local environment. Amphetamine 9.9 (CRC Handbook and Clarke's Analysis of Drugs and Poisons, from memory).
@@ -52,14 +52,27 @@ class AnalogFamilyTest {
                 "another class moves the site less than the same class would: " + line + " against " + full);
     }
 
+    @Test
+    void anAnalogOfTheSameClassSaysNothingOfTheFamily() throws StructureException {
+        // 1-(4-methylphenyl)propan-2-amine: a primary amine like amphetamine
+        List<Term> same = lines(0.5, "CC(N)Cc1ccc(C)cc1", "amine-primary");
+        assertEquals(1, same.size(), same.toString());
+        assertTrue(same.get(0).label().contains("amphetamine (amine-primary"), same.get(0).label());
+        assertTrue(!same.get(0).label().contains("another class"), same.get(0).label());
+    }
+
     private static List<Term> lines(double family, String query) throws StructureException {
+        return lines(family, query, "amine-secondary");
+    }
+
+    private static List<Term> lines(double family, String query, String group) throws StructureException {
         AnalogSettings s = new AnalogSettings(4, 0.3, 0.1, family, 8, AnalogSettings.Kernel.LINEAR, 0.5, 0.01,
                 AnalogSettings.Assignment.TITRATING, true, 0.9);
         List<MeasuredCompound> measured = List.of(AMPHETAMINE);
         SiteAnalogIndex index = MeasuredSites.index(new Engine(AnalogCorrectionTest.with(measured), 300), measured, s);
         Problem p = new Engine(AnalogCorrectionTest.BARE, 300).prepare(query, Conditions.noPh());
         List<EstimatedSite> out = AnalogCorrection.apply(index, new MatchTarget(p.prepared().molecule()), p.sites());
-        EstimatedSite site = out.stream().filter(e -> e.site().group().id().equals("amine-secondary")).findFirst()
+        EstimatedSite site = out.stream().filter(e -> e.site().group().id().equals(group)).findFirst()
                 .orElseThrow();
         return site.terms().stream().filter(t -> t.label().startsWith("measured analog")).toList();
     }

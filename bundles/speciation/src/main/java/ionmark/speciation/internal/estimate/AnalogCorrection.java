@@ -204,7 +204,7 @@ public final class AnalogCorrection {
             Decimals.append(Decimals.append(label.append("; the prior falls from "), cfg.prior(), 2, false)
                     .append(" to "), cfg.nearPrior(), 2, false).append(" as the nearest analog nears identity");
         }
-        if (!m.group().equals(query)) {
+        if (!m.group().equals(query) && cfg.familyWeight() < 1) {
             // a family analog: the chemist sees the other class in the line's head, and here why it weighs less
             Decimals.append(label.append("; another class of the family: weight × "), cfg.familyWeight(), 2, false);
         }
